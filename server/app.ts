@@ -1,0 +1,50 @@
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { join } from 'node:path';
+import { logger } from './logger';
+import { sessionMiddleware } from './auth/session';
+import { passport } from './auth/passport';
+import { requireCsrf } from './middleware/csrf';
+import { errorHandler, apiNotFound } from './middleware/errors';
+import { apiRouter } from './routes';
+
+const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
+
+export type AppHandle = { app: Express; close: () => Promise<void> };
+
+/** Builds the Express app without listening, so tests drive it with supertest. */
+export function createApp(): AppHandle {
+  const app = express();
+  const sessions = sessionMiddleware();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'script-src': ["'self'", "'unsafe-eval'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+        },
+      },
+    }),
+  );
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use('/api', express.json({ limit: '1mb' }));
+  app.use('/api', sessions.middleware, passport.session());
+  app.use('/api', requireCsrf);
+  app.use('/api', apiRouter());
+  app.use('/api', apiNotFound);
+
+  if (existsSync(join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1y', immutable: true }));
+    app.get('/{*splat}', (_req, res) => {
+      res.set('Cache-Control', 'no-cache').sendFile(join(clientDir, 'index.html'));
+    });
+  }
+  app.use(errorHandler);
+  return { app, close: () => sessions.pool.end() };
+}

@@ -1,0 +1,48 @@
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import { User } from '../models';
+import { dummyHash, verifyPassword } from './passwords';
+import type { SessionUser } from '../../shared/schemas/auth';
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface User extends SessionUser {}
+  }
+}
+
+declare module 'express-session' {
+  interface SessionData {
+    signedInAt?: number;
+  }
+}
+
+passport.use(
+  new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, async (email, password, done) => {
+    try {
+      const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
+      const ok = await verifyPassword(password, user?.passwordHash ?? dummyHash);
+      if (!user || !ok || user.status !== 'active') return done(null, false);
+      done(null, toSessionUser(user));
+    } catch (err) {
+      done(err);
+    }
+  }),
+);
+
+passport.serializeUser((user, done) => done(null, user.id));
+
+passport.deserializeUser(async (id: number, done) => {
+  try {
+    const user = await User.findByPk(id);
+    done(null, user && user.status === 'active' ? toSessionUser(user) : false);
+  } catch (err) {
+    done(err);
+  }
+});
+
+export function toSessionUser(user: User): SessionUser {
+  return { id: user.id, email: user.email, name: user.name, role: user.role };
+}
+
+export { passport };

@@ -1,0 +1,27 @@
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import pg from 'pg';
+import { env } from '../config/env';
+
+const PgStore = connectPgSimple(session);
+
+/** Sessions live in PostgreSQL (table `sessions`, created by a migration) so app servers stay stateless. */
+export function sessionMiddleware() {
+  const pool = new pg.Pool({ connectionString: env().DATABASE_URL, max: 5, connectionTimeoutMillis: 3_000 });
+  pool.on('error', () => undefined);
+  const store = new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60 });
+  const production = env().NODE_ENV === 'production';
+  return {
+    pool,
+    store,
+    middleware: session({
+      name: 'rfolio.sid',
+      store,
+      secret: env().sessionSecret,
+      resave: false,
+      saveUninitialized: false,
+      rolling: false,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: production, maxAge: 14 * 24 * 3600 * 1000 },
+    }),
+  };
+}

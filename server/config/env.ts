@@ -1,0 +1,54 @@
+import { z } from 'zod';
+
+const envSchema = z
+  .object({
+    NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+    HOST: z.string().default('127.0.0.1'),
+    PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+    DATABASE_URL: z.string().url({ message: 'DATABASE_URL must be a postgres:// URL' }),
+    SESSION_SECRET: z.string().min(32).optional(),
+    RFOLIO_DEMO_PASSWORD: z.string().min(12).default('rfolio-demo-2026'),
+    RFOLIO_SEED_DEMO: z.enum(['0', '1']).optional(),
+    APP_URL: z.string().url().optional(),
+    SMTP_HOST: z.string().optional(),
+    SMTP_PORT: z.coerce.number().int().optional(),
+    MAIL_FROM: z.string().default('Rfolio <no-reply@rfolio.invalid>'),
+    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+    RFOLIO_PG_BIN: z.string().optional(),
+    RFOLIO_PGDATA: z.string().optional(),
+  })
+  .superRefine((env, ctx) => {
+    if (env.NODE_ENV === 'production' && !env.SESSION_SECRET) {
+      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'required in production (≥ 32 characters)' });
+    }
+  });
+
+export type Env = z.infer<typeof envSchema> & {
+  /** Demo mode: the invented group's accounts and records are seeded, and the local mail catcher runs. */
+  demo: boolean;
+  sessionSecret: string;
+  appUrl: string;
+};
+
+/** Parses the environment once at start; exits with a clear message when it is unusable. */
+export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.') || 'env'}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  const env = parsed.data;
+  const production = env.NODE_ENV === 'production';
+  return {
+    ...env,
+    demo: !production && env.NODE_ENV !== 'test' ? true : env.RFOLIO_SEED_DEMO === '1',
+    sessionSecret: env.SESSION_SECRET ?? 'rfolio-development-only-secret-not-for-production',
+    appUrl: env.APP_URL ?? `http://${env.HOST}:${env.PORT}`,
+  };
+}
+
+let cached: Env | undefined;
+export function env(): Env {
+  cached ??= loadEnv();
+  return cached;
+}

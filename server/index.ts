@@ -1,0 +1,45 @@
+import { createServer } from 'node:http';
+import { env } from './config/env';
+import { logger } from './logger';
+import { migrator } from './db/migrator';
+import { sequelize } from './db/sequelize';
+import { createApp } from './app';
+import { seedDemoOnce, demoAccounts } from '../seeders';
+
+let config;
+try {
+  config = env();
+} catch (err) {
+  console.error((err as Error).message);
+  process.exit(1);
+}
+
+await migrator.up();
+if (config.demo) await seedDemoOnce();
+
+const { app, close } = createApp();
+const server = createServer(app);
+server.keepAliveTimeout = 65_000;
+server.listen(config.PORT, config.HOST, () => {
+  const url = `http://${config.HOST}:${config.PORT}`;
+  console.log(`\nRfolio is serving ${url}`);
+  if (config.demo) {
+    console.log('Demo sign-ins (invented group, invented records):');
+    for (const a of demoAccounts()) console.log(`  ${a.role.padEnd(8)} ${a.email}  password: ${a.password}`);
+  }
+  console.log('Stop with Ctrl+C.\n');
+});
+
+let closing = false;
+async function shutdown(signal: string) {
+  if (closing) return;
+  closing = true;
+  logger.info({ signal }, 'shutting down');
+  server.close();
+  server.closeAllConnections();
+  await close().catch(() => undefined);
+  await sequelize.close().catch(() => undefined);
+  process.exit(0);
+}
+process.on('SIGINT', () => void shutdown('SIGINT'));
+process.on('SIGTERM', () => void shutdown('SIGTERM'));
