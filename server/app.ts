@@ -5,6 +5,7 @@ import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { join } from 'node:path';
 import { logger } from './logger';
+import { env } from './config/env';
 import { sessionMiddleware } from './auth/session';
 import { passport } from './auth/passport';
 import { requireCsrf } from './middleware/csrf';
@@ -18,6 +19,7 @@ export type AppHandle = { app: Express; close: () => Promise<void> };
 /** Builds the Express app without listening, so tests drive it with supertest. */
 export function createApp(): AppHandle {
   const app = express();
+  const production = env().NODE_ENV === 'production';
   const sessions = sessionMiddleware();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -28,11 +30,19 @@ export function createApp(): AppHandle {
           'script-src': ["'self'", "'unsafe-eval'"],
           'img-src': ["'self'", 'data:', 'blob:'],
           'style-src': ["'self'", "'unsafe-inline'"],
+          'upgrade-insecure-requests': production ? [] : null,
         },
       },
+      strictTransportSecurity: production,
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+    }),
+  );
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api', sessions.middleware, passport.session());
   app.use('/api', requireCsrf);

@@ -1,6 +1,7 @@
 // Dependency-free helpers that find, install and run Debian's PostgreSQL for Rfolio.
 // Used by start.mjs and test.mjs before any npm package is known to be installed.
 import { execFileSync, spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readdirSync, chownSync, chmodSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 
@@ -59,7 +60,7 @@ export function clusterPaths(projectDir, name) {
   const base = process.env.RFOLIO_PGDATA_ROOT
     ? resolve(process.env.RFOLIO_PGDATA_ROOT, name)
     : isRoot
-      ? `/var/lib/rfolio/${Buffer.from(resolve(projectDir)).toString('hex').slice(-24)}-${name}`
+      ? `/var/lib/rfolio/${createHash('sha256').update(resolve(projectDir)).digest('hex').slice(0, 12)}-${name}`
       : join(projectDir, '.data', name);
   return { base, data: join(base, 'data'), socket: join(base, 'run'), log: join(base, 'server.log') };
 }

@@ -22,19 +22,20 @@ if (production && !process.env.SESSION_SECRET) {
 }
 
 ensureNodeModules(root);
-const bin = ensurePostgresInstalled();
+// With DATABASE_URL set (e.g. a managed PostgreSQL) the project's own cluster is neither installed nor started.
+const ownCluster = !process.env.DATABASE_URL;
+const bin = ownCluster ? ensurePostgresInstalled() : undefined;
 const pgPort = Number(process.env.RFOLIO_PG_PORT ?? 54329);
 const dbName = process.env.RFOLIO_DB ?? (production ? 'rfolio' : 'rfolio_demo');
 const paths = clusterPaths(root, production ? 'prod' : 'demo');
-const { startedByUs } = startCluster(bin, paths, pgPort);
-ensureDatabase(bin, pgPort, dbName);
+const { startedByUs } = ownCluster ? startCluster(bin, paths, pgPort) : { startedByUs: false };
+if (ownCluster) ensureDatabase(bin, pgPort, dbName);
 if (!dev) ensureClientBuild(root);
 
 const env = {
   ...process.env,
   DATABASE_URL: process.env.DATABASE_URL ?? databaseUrl(pgPort, dbName),
-  RFOLIO_PG_BIN: bin,
-  RFOLIO_PGDATA: paths.data,
+  ...(ownCluster ? { RFOLIO_PG_BIN: bin, RFOLIO_PGDATA: paths.data } : {}),
 };
 
 const tsx = join(root, 'node_modules', '.bin', 'tsx');
