@@ -133,3 +133,20 @@ export function ensureDatabase(bin, port, db, { recreate = false } = {}) {
 export function databaseUrl(port, db) {
   return `postgres://rfolio@127.0.0.1:${port}/${db}`;
 }
+
+export function dropDatabase(bin, port, db) {
+  try {
+    psql(bin, port, 'postgres', `DROP DATABASE IF EXISTS "${db}" WITH (FORCE)`);
+  } catch {
+    /* the cluster may already be gone */
+  }
+}
+
+/** True when another test run's databases exist, so the cluster must stay up for it. */
+export function otherRunsActive(bin, port) {
+  try {
+    return psql(bin, port, 'postgres', "SELECT count(*) FROM pg_database WHERE datname LIKE 'rfolio\\_test\\_%'") !== '0';
+  } catch {
+    return false;
+  }
+}

@@ -12,6 +12,8 @@ import {
   stopCluster,
   ensureDatabase,
   databaseUrl,
+  dropDatabase,
+  otherRunsActive,
 } from './postgres.mjs';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -25,15 +27,18 @@ const pgPort = Number(process.env.RFOLIO_TEST_PG_PORT ?? 54339);
 const paths = clusterPaths(root, 'test');
 const { startedByUs } = startCluster(bin, paths, pgPort, { fast: true });
 
+// Databases of this run only, so concurrent runs on one machine never share rows.
+const testDb = `rfolio_test_${process.pid}`;
+const e2eDb = `rfolio_e2e_${process.pid}`;
 let status = 1;
 try {
-  ensureDatabase(bin, pgPort, 'rfolio_test', { recreate: true });
-  ensureDatabase(bin, pgPort, 'rfolio_e2e', { recreate: true });
+  ensureDatabase(bin, pgPort, testDb, { recreate: true });
+  ensureDatabase(bin, pgPort, e2eDb, { recreate: true });
   const env = {
     ...process.env,
     NODE_ENV: 'test',
-    DATABASE_URL: databaseUrl(pgPort, 'rfolio_test'),
-    E2E_DATABASE_URL: databaseUrl(pgPort, 'rfolio_e2e'),
+    DATABASE_URL: databaseUrl(pgPort, testDb),
+    E2E_DATABASE_URL: databaseUrl(pgPort, e2eDb),
     RFOLIO_PG_BIN: bin,
     RFOLIO_PGDATA: paths.data,
     RFOLIO_PG_PORT: String(pgPort),
@@ -58,6 +63,8 @@ try {
     status = unit === 0 && e2e === 0 ? 0 : 1;
   }
 } finally {
-  if (startedByUs) stopCluster(bin, paths);
+  dropDatabase(bin, pgPort, testDb);
+  dropDatabase(bin, pgPort, e2eDb);
+  if (startedByUs && !otherRunsActive(bin, pgPort)) stopCluster(bin, paths);
 }
 process.exit(status);
