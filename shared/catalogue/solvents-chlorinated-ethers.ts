@@ -1,0 +1,122 @@
+import type { GreenerAlternative, Solvent } from './types';
+import { areaFromMemory, confirmedAlumina, confirmedSilica, sources, strengthFromMemory } from './solvent-sources';
+
+const etherSwaps: GreenerAlternative[] = [
+  { solvents: [{ solvent: 'mtbe', parts: 1 }], note: 'TBME hardly forms peroxides and has a higher flash point (common practice).' },
+  { solvents: [{ solvent: '2-methyltetrahydrofuran', parts: 1 }], note: '2-MeTHF is made from renewable feedstock (common practice).' },
+  { solvents: [{ solvent: 'cpme', parts: 1 }], note: 'CPME forms peroxides slowly and is hydrophobic (common practice).' },
+];
+
+const dcmSwaps: GreenerAlternative[] = [
+  {
+    solvents: [{ solvent: 'heptane', parts: 1 }, { solvent: 'ethyl-acetate', parts: 1 }],
+    note: 'Heptane/EtOAc covers most separations run in DCM alone (common practice).',
+  },
+  {
+    solvents: [{ solvent: 'ethyl-acetate', parts: 3 }, { solvent: 'ethanol', parts: 1 }],
+    note: 'EtOAc/EtOH 3:1, diluted with heptane, replaces DCM/MeOH for polar compounds (common practice).',
+  },
+];
+
+/** Chlorinated solvents and ethers. Hazards and greener alternatives: common practice. */
+export const chlorinatedAndEtherSolvents: readonly Solvent[] = [
+  {
+    key: 'dichloromethane', label: 'DCM', name: 'dichloromethane',
+    synonyms: ['dichloromethane', 'DCM', 'CH2Cl2', 'methylene chloride', 'methylene dichloride', 'MC'],
+    formula: 'CH2Cl2', densityGPerMl: 1.326, molarMassGPerMol: 84.93, boilingPointC: 39.6,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: strengthFromMemory(0.42), silica: strengthFromMemory(0.31, [0.3, 0.32]) },
+    adsorbedArea: areaFromMemory(4.1),
+    hazards: ['carcinogen-suspect', 'toxic'],
+    hazardNote: 'Suspected carcinogen; very volatile, passes through nitrile gloves quickly.',
+    greenerAlternatives: dcmSwaps,
+  },
+  {
+    key: 'chloroform', label: 'CHCl3', name: 'chloroform',
+    synonyms: ['chloroform', 'CHCl3', 'trichloromethane'],
+    formula: 'CHCl3', densityGPerMl: 1.489, molarMassGPerMol: 119.38, boilingPointC: 61.2,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: strengthFromMemory(0.4), silica: strengthFromMemory(0.26) },
+    adsorbedArea: areaFromMemory(5.0),
+    hazards: ['toxic', 'carcinogen-suspect', 'reproductive-toxicant-suspect'],
+    hazardNote: 'Toxic and a suspected carcinogen; old stock can contain phosgene.',
+    greenerAlternatives: dcmSwaps.slice(0, 1),
+  },
+  {
+    key: 'carbon-tetrachloride', label: 'CCl4', name: 'carbon tetrachloride',
+    synonyms: ['carbon tetrachloride', 'CCl4', 'tetrachloromethane'],
+    formula: 'CCl4', densityGPerMl: 1.594, molarMassGPerMol: 153.82, boilingPointC: 76.7,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: strengthFromMemory(0.18), silica: strengthFromMemory(0.11) },
+    adsorbedArea: null,
+    hazards: ['toxic', 'carcinogen-suspect', 'ozone-depleting'],
+    hazardNote: 'Toxic to the liver, suspected carcinogen and ozone depleting; listed only so old records can be read.',
+    greenerAlternatives: [{ solvents: [{ solvent: 'heptane', parts: 1 }], note: 'Heptane, with a little toluene if needed (common practice).' }],
+  },
+  {
+    key: 'diethyl-ether', label: 'Et2O', name: 'diethyl ether',
+    synonyms: ['diethyl ether', 'Et2O', 'ether', 'ethyl ether', 'DEE', 'diethylether'],
+    formula: 'C4H10O', densityGPerMl: 0.713, molarMassGPerMol: 74.12, boilingPointC: 34.6,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: confirmedAlumina(0.38), silica: confirmedSilica(0.43) },
+    adsorbedArea: areaFromMemory(4.5),
+    hazards: ['extremely-flammable', 'peroxide-former'],
+    hazardNote: 'Extremely flammable with a very low autoignition temperature; forms explosive peroxides on storage.',
+    greenerAlternatives: etherSwaps,
+  },
+  {
+    key: 'mtbe', label: 'MTBE', name: 'tert-butyl methyl ether',
+    synonyms: ['MTBE', 'TBME', 'tert-butyl methyl ether', 'methyl tert-butyl ether', 't-BuOMe', 'tBuOMe'],
+    formula: 'C5H12O', densityGPerMl: 0.74, molarMassGPerMol: 88.15, boilingPointC: 55.2,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: null, silica: strengthFromMemory(0.48) },
+    adsorbedArea: null,
+    hazards: ['highly-flammable', 'irritant'],
+    hazardNote: 'Highly flammable; forms peroxides far more slowly than diethyl ether.',
+    greenerAlternatives: [],
+  },
+  {
+    key: 'tetrahydrofuran', label: 'THF', name: 'tetrahydrofuran',
+    synonyms: ['tetrahydrofuran', 'THF', 'oxolane'],
+    formula: 'C4H8O', densityGPerMl: 0.889, molarMassGPerMol: 72.11, boilingPointC: 66,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: strengthFromMemory(0.45), silica: strengthFromMemory(0.53) },
+    adsorbedArea: areaFromMemory(5.0),
+    hazards: ['highly-flammable', 'peroxide-former', 'carcinogen-suspect', 'irritant'],
+    hazardNote: 'Forms explosive peroxides, above all once the inhibitor is gone; suspected carcinogen.',
+    greenerAlternatives: etherSwaps.slice(1),
+  },
+  {
+    key: '2-methyltetrahydrofuran', label: '2-MeTHF', name: '2-methyltetrahydrofuran',
+    synonyms: ['2-methyltetrahydrofuran', '2-MeTHF', 'MeTHF', '2-methyl-THF'],
+    formula: 'C5H10O', densityGPerMl: 0.854, molarMassGPerMol: 86.13, boilingPointC: 80.2,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: null, silica: null },
+    adsorbedArea: null,
+    hazards: ['highly-flammable', 'peroxide-former', 'irritant'],
+    hazardNote: 'Highly flammable; forms peroxides, more slowly than THF.',
+    greenerAlternatives: [],
+  },
+  {
+    key: 'cpme', label: 'CPME', name: 'cyclopentyl methyl ether',
+    synonyms: ['cyclopentyl methyl ether', 'CPME', 'methoxycyclopentane'],
+    formula: 'C6H12O', densityGPerMl: 0.86, molarMassGPerMol: 100.16, boilingPointC: 106,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: null, silica: null },
+    adsorbedArea: null,
+    hazards: ['highly-flammable', 'peroxide-former', 'irritant'],
+    hazardNote: 'Flammable; forms peroxides slowly.',
+    greenerAlternatives: [],
+  },
+  {
+    key: 'dioxane', label: 'dioxane', name: '1,4-dioxane',
+    synonyms: ['1,4-dioxane', 'dioxane', 'p-dioxane'],
+    formula: 'C4H8O2', densityGPerMl: 1.033, molarMassGPerMol: 88.11, boilingPointC: 101.1,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: strengthFromMemory(0.56), silica: strengthFromMemory(0.51) },
+    adsorbedArea: areaFromMemory(6.0),
+    hazards: ['highly-flammable', 'peroxide-former', 'carcinogen-suspect'],
+    hazardNote: 'Suspected carcinogen; forms peroxides.',
+    greenerAlternatives: etherSwaps.slice(1),
+  },
+];

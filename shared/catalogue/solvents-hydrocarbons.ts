@@ -1,0 +1,88 @@
+import type { Solvent } from './types';
+import { alkaneMixture, confirmedAlumina, silicaFromAlumina, sources, strengthFromMemory } from './solvent-sources';
+
+const heptaneForAlkane = {
+  solvents: [{ solvent: 'heptane', parts: 1 }],
+  note: 'Heptane runs almost the same on silica and avoids n-hexane’s neurotoxicity (common practice).',
+};
+
+/** Weak (non-polar) chromatography solvents: alkanes and aromatics. Hazards and alternatives: common practice. */
+export const hydrocarbonSolvents: readonly Solvent[] = [
+  {
+    key: 'pentane', label: 'pentane', name: 'pentane',
+    synonyms: ['pentane', 'n-pentane', 'pentanes', 'pent'],
+    formula: 'C5H12', densityGPerMl: 0.626, molarMassGPerMol: 72.15, boilingPointC: 36.1,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: confirmedAlumina(0.0), silica: strengthFromMemory(0.0) },
+    adsorbedArea: null,
+    hazards: ['extremely-flammable', 'environmental'],
+    hazardNote: 'Boils near room temperature; vapour is heavier than air and travels to ignition sources.',
+    greenerAlternatives: [],
+  },
+  {
+    key: 'hexanes', label: 'hexanes', name: 'hexanes',
+    synonyms: ['hexanes', 'hexane', 'n-hexane', 'hex', 'isohexane'],
+    formula: 'C6H14', densityGPerMl: 0.659, molarMassGPerMol: 86.18, boilingPointC: 68.7,
+    physicalSource: `${sources.physicalFromMemory} (n-hexane)`,
+    strength: { alumina: confirmedAlumina(0.01), silica: strengthFromMemory(0.01) },
+    adsorbedArea: null,
+    hazards: ['highly-flammable', 'neurotoxic', 'reproductive-toxicant-suspect', 'environmental'],
+    hazardNote: 'n-Hexane causes peripheral neuropathy on repeated exposure; work in a fume hood.',
+    greenerAlternatives: [heptaneForAlkane],
+  },
+  {
+    key: 'heptane', label: 'heptane', name: 'heptane',
+    synonyms: ['heptane', 'n-heptane', 'heptanes', 'hept', 'hep'],
+    formula: 'C7H16', densityGPerMl: 0.684, molarMassGPerMol: 100.2, boilingPointC: 98.4,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: confirmedAlumina(0.01), silica: strengthFromMemory(0.01) },
+    adsorbedArea: null,
+    hazards: ['highly-flammable', 'environmental'],
+    hazardNote: 'Flammable; higher boiling than hexanes, so fractions take longer to evaporate.',
+    greenerAlternatives: [],
+  },
+  {
+    key: 'petroleum-ether', label: 'pet. ether', name: 'petroleum ether',
+    synonyms: ['petroleum ether', 'pet ether', 'pet. ether', 'PE', 'petrol', 'light petroleum', 'petroleum spirit', 'petroleum benzine', 'benzine'],
+    formula: null, densityGPerMl: 0.64, molarMassGPerMol: 80, boilingPointC: 50, boilingRangeC: [40, 60],
+    physicalSource: `${sources.physicalMixture}; molar mass an estimate for a C5–C6 alkane mixture`,
+    strength: { alumina: alkaneMixture(0.01), silica: alkaneMixture(0.01) },
+    adsorbedArea: null,
+    hazards: ['extremely-flammable', 'neurotoxic', 'environmental'],
+    hazardNote: 'A mixture of light alkanes that may contain n-hexane; extremely flammable.',
+    greenerAlternatives: [heptaneForAlkane],
+  },
+  {
+    key: 'cyclohexane', label: 'cyclohexane', name: 'cyclohexane',
+    synonyms: ['cyclohexane', 'cHex', 'c-hex', 'chex', 'cy', 'CH', 'C6H12'],
+    formula: 'C6H12', densityGPerMl: 0.779, molarMassGPerMol: 84.16, boilingPointC: 80.7,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: confirmedAlumina(0.04), silica: silicaFromAlumina(0.04) },
+    adsorbedArea: null,
+    hazards: ['highly-flammable', 'irritant', 'environmental'],
+    hazardNote: 'Flammable; toxic to aquatic life.',
+    greenerAlternatives: [],
+  },
+  {
+    key: 'toluene', label: 'toluene', name: 'toluene',
+    synonyms: ['toluene', 'PhMe', 'tol', 'methylbenzene', 'C7H8'],
+    formula: 'C7H8', densityGPerMl: 0.867, molarMassGPerMol: 92.14, boilingPointC: 110.6,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: confirmedAlumina(0.29), silica: strengthFromMemory(0.22) },
+    adsorbedArea: { value: 6.8, provenance: 'from-memory', source: sources.areaFromMemory },
+    hazards: ['highly-flammable', 'reproductive-toxicant-suspect', 'neurotoxic'],
+    hazardNote: 'Suspected of damaging the unborn child; affects the nervous system on long exposure.',
+    greenerAlternatives: [],
+  },
+  {
+    key: 'benzene', label: 'benzene', name: 'benzene',
+    synonyms: ['benzene', 'PhH', 'C6H6'],
+    formula: 'C6H6', densityGPerMl: 0.877, molarMassGPerMol: 78.11, boilingPointC: 80.1,
+    physicalSource: sources.physicalFromMemory,
+    strength: { alumina: strengthFromMemory(0.32), silica: strengthFromMemory(0.25) },
+    adsorbedArea: { value: 6.0, provenance: 'from-memory', source: sources.areaFromMemory },
+    hazards: ['highly-flammable', 'carcinogen', 'toxic'],
+    hazardNote: 'A known human carcinogen; listed so old records can be read, not as a recommendation.',
+    greenerAlternatives: [{ solvents: [{ solvent: 'toluene', parts: 1 }], note: 'Toluene is the usual replacement (common practice).' }],
+  },
+];
