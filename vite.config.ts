@@ -1,11 +1,45 @@
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { gzipSync } from 'node:zlib';
+import type { Plugin } from 'vite';
 
 const apiPort = process.env.PORT ?? '3000';
 
+/** Prints the gzip size of each entry's first-load JS (the entry chunk and its static imports); budget 250 kB, OpenChemLib lazy. */
+function firstLoadReport(budgetKb = 250): Plugin {
+  return {
+    name: 'rfolio-first-load-report',
+    apply: 'build',
+    writeBundle(_options, bundle) {
+      const chunks = new Map(Object.values(bundle).flatMap((c) => (c.type === 'chunk' ? [[c.fileName, c] as const] : [])));
+      const kb = (name: string) => gzipSync(chunks.get(name)!.code, { level: 9 }).length / 1000;
+      const hasOcl = (name: string) => chunks.get(name)!.moduleIds.some((id) => id.includes('node_modules/openchemlib'));
+      const firstLoad = new Set<string>();
+      for (const entry of chunks.values()) {
+        if (!entry.isEntry) continue;
+        const seen = new Set<string>();
+        const visit = (name: string) => {
+          if (seen.has(name) || !chunks.has(name)) return;
+          seen.add(name);
+          chunks.get(name)!.imports.forEach(visit);
+        };
+        visit(entry.fileName);
+        seen.forEach((name) => firstLoad.add(name));
+        const total = [...seen].reduce((n, name) => n + kb(name), 0);
+        const ocl = [...seen].some(hasOcl);
+        const verdict = total > budgetKb || ocl ? 'OVER BUDGET' : 'within budget';
+        this.info(`first-load JS (${entry.name}): ${total.toFixed(1)} kB gzip in ${seen.size} chunk(s); budget ${budgetKb} kB, ${verdict}; OpenChemLib ${ocl ? 'INCLUDED' : 'not included'}`);
+      }
+      for (const name of chunks.keys()) {
+        if (!firstLoad.has(name) && hasOcl(name)) this.info(`lazy OpenChemLib chunk: ${name} ${kb(name).toFixed(1)} kB gzip`);
+      }
+    },
+  };
+}
+
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), firstLoadReport()],
   server: {
     host: '127.0.0.1',
     port: 5173,

@@ -1,0 +1,3 @@
+export { StructureInput, type StructureInputProps } from './structure-input';
+export type { ParsedStructure } from './types';
+export { parseStructure, structureKeys } from './use-structure-parse';
