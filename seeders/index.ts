@@ -2,6 +2,9 @@
 import { sequelize } from '../server/db/sequelize';
 import { env } from '../server/config/env';
 import { seedDemoUsers, demoAccounts } from './demo-users';
+import { seedDemoPeople } from './demo-people';
+import { seedDemoRecords } from './demo-records';
+import { seedDemoStructureDuplicate } from './demo-curation';
 
 export { demoAccounts };
 
@@ -13,6 +16,8 @@ export async function seedDemoOnce(): Promise<boolean> {
   if (rows.length > 0) return false;
   await sequelize.transaction(async (transaction) => {
     await seedDemoUsers(env().RFOLIO_DEMO_PASSWORD, transaction);
+    await seedDemoRecords(await seedDemoPeople(env().RFOLIO_DEMO_PASSWORD, transaction), transaction);
+    await seedDemoStructureDuplicate(transaction);
     await sequelize.query(
       `INSERT INTO app_meta (key, value) VALUES (:key, :value::jsonb)`,
       { replacements: { key: MARKER, value: JSON.stringify({ at: new Date().toISOString() }) }, transaction },

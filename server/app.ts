@@ -11,6 +11,8 @@ import { passport } from './auth/passport';
 import { requireCsrf } from './middleware/csrf';
 import { errorHandler, apiNotFound } from './middleware/errors';
 import { apiRouter } from './routes';
+import { stopMailCatcher } from './mail/catcher';
+import { stopSearchIndexes } from './services/search/process-indexes';
 
 const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
 
@@ -56,5 +58,8 @@ export function createApp(): AppHandle {
     });
   }
   app.use(errorHandler);
-  return { app, close: () => sessions.pool.end() };
+  const close = async () => {
+    await Promise.all([sessions.pool.end(), stopMailCatcher(), stopSearchIndexes()]);
+  };
+  return { app, close };
 }

@@ -5,6 +5,9 @@ import { migrator } from './db/migrator';
 import { sequelize } from './db/sequelize';
 import { createApp } from './app';
 import { seedDemoOnce, demoAccounts } from '../seeders';
+import { startMailCatcher } from './mail/catcher';
+import { usesMailCatcher } from './mail/send';
+import { searchIndexes } from './services/search/process-indexes';
 
 let config;
 try {
@@ -16,6 +19,10 @@ try {
 
 await migrator.up();
 if (config.demo) await seedDemoOnce();
+await searchIndexes().catch((error) => logger.warn({ err: error }, 'search indexes not built at start; the first search retries'));
+
+const mailCatcherPort = usesMailCatcher() ? await startMailCatcher(config.MAIL_CATCHER_PORT) : null;
+if (!usesMailCatcher() && !config.SMTP_HOST) logger.warn('SMTP_HOST is not set: invitations and password resets cannot be e-mailed.');
 
 const { app, close } = createApp();
 const server = createServer(app);
@@ -26,6 +33,9 @@ server.listen(config.PORT, config.HOST, () => {
   if (config.demo) {
     console.log('Demo sign-ins (invented group, invented records):');
     for (const a of demoAccounts()) console.log(`  ${a.role.padEnd(8)} ${a.email}  password: ${a.password}`);
+  }
+  if (mailCatcherPort !== null) {
+    console.log(`Mail catcher (not in production): smtp://127.0.0.1:${mailCatcherPort}, read it as an admin at ${url}/admin/mailbox`);
   }
   console.log('Stop with Ctrl+C.\n');
 });

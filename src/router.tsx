@@ -1,4 +1,4 @@
-import { Suspense, type ReactNode } from 'react';
+import { lazy, Suspense, type ReactNode } from 'react';
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
 import { AppLayout } from './components/app-layout';
 import { RouteError } from './components/route-error';
@@ -9,11 +9,28 @@ import { SignInPage } from './routes/sign-in';
 import { NotFoundPage } from './routes/not-found';
 import { ComingPage } from './routes/coming';
 
+const AccountPage = lazy(() => import('./routes/account'));
+const AdminUsersPage = lazy(() => import('./routes/admin-users'));
+const AdminMailboxPage = lazy(() => import('./routes/admin-mailbox'));
+const AcceptInvitationPage = lazy(() => import('./routes/accept-invitation'));
+const PasswordResetRequestPage = lazy(() => import('./routes/password-reset-request'));
+const PasswordResetPage = lazy(() => import('./routes/password-reset'));
+const CurationPage = lazy(() => import('./routes/curation'));
+const CurationMergePage = lazy(() => import('./routes/curation-merge'));
+const RecordsPage = lazy(() => import('./routes/records'));
+const RecordPage = lazy(() => import('./routes/record'));
+const RecordEditPage = lazy(() => import('./routes/record-edit'));
+const ContributePage = lazy(() => import('./routes/contribute'));
+const CompoundPage = lazy(() => import('./routes/compound'));
+
 /** Pages are lazily loaded, so the first load carries only the shell. */
 const page = (node: ReactNode) => <Suspense fallback={<PageLoading />}>{node}</Suspense>;
 
 export const router = createBrowserRouter([
   { path: '/sign-in', element: <SignInPage />, errorElement: <RouteError /> },
+  { path: '/invitations/:token', element: page(<AcceptInvitationPage />), errorElement: <RouteError /> },
+  { path: '/password-reset', element: page(<PasswordResetRequestPage />), errorElement: <RouteError /> },
+  { path: '/password-reset/:token', element: page(<PasswordResetPage />), errorElement: <RouteError /> },
   {
     element: <AppLayout />,
     errorElement: <RouteError />,
@@ -21,15 +38,21 @@ export const router = createBrowserRouter([
       { index: true, element: <HomePage /> },
       { path: 'cautions', element: page(<ComingPage title="Lab cautions" issue={6} />) },
       { path: 'search', element: <RequireRole least="viewer">{page(<ComingPage title="Search" issue={7} />)}</RequireRole> },
-      { path: 'records', element: <RequireRole least="viewer">{page(<ComingPage title="Condition records" issue={5} />)}</RequireRole> },
-      { path: 'contribute', element: <RequireRole least="member">{page(<ComingPage title="Contribute a record" issue={5} />)}</RequireRole> },
+      { path: 'records', element: <RequireRole least="viewer">{page(<RecordsPage />)}</RequireRole> },
+      { path: 'records/:id', element: <RequireRole least="viewer">{page(<RecordPage />)}</RequireRole> },
+      { path: 'records/:id/edit', element: <RequireRole least="member">{page(<RecordEditPage />)}</RequireRole> },
+      { path: 'contribute', element: <RequireRole least="member">{page(<ContributePage />)}</RequireRole> },
+      { path: 'compounds/:id', element: <RequireRole least="viewer">{page(<CompoundPage />)}</RequireRole> },
       { path: 'scout', element: <RequireRole least="viewer">{page(<ComingPage title="Scout" issue={6} />)}</RequireRole> },
       { path: 'tools', element: <RequireRole least="viewer">{page(<ComingPage title="Column planner and eluent translator" issue={6} />)}</RequireRole> },
       { path: 'classes', element: <RequireRole least="viewer">{page(<ComingPage title="Compound classes" issue={7} />)}</RequireRole> },
       { path: 'bookmarks', element: <RequireRole least="viewer">{page(<ComingPage title="Bookmarks" issue={7} />)}</RequireRole> },
-      { path: 'curation', element: <RequireRole least="curator">{page(<ComingPage title="Curation queue" issue={8} />)}</RequireRole> },
+      { path: 'curation', element: <RequireRole least="curator">{page(<CurationPage />)}</RequireRole> },
+      { path: 'curation/merge', element: <RequireRole least="curator">{page(<CurationMergePage />)}</RequireRole> },
       { path: 'imports', element: <RequireRole least="curator">{page(<ComingPage title="Import" issue={9} />)}</RequireRole> },
-      { path: 'admin/users', element: <RequireRole least="admin">{page(<ComingPage title="People and invitations" issue={3} />)}</RequireRole> },
+      { path: 'account', element: <RequireRole least="viewer">{page(<AccountPage />)}</RequireRole> },
+      { path: 'admin/users', element: <RequireRole least="admin">{page(<AdminUsersPage />)}</RequireRole> },
+      { path: 'admin/mailbox', element: <RequireRole least="admin">{page(<AdminMailboxPage />)}</RequireRole> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -1,3 +1,4 @@
+import type { IncomingMessage } from 'node:http';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { User } from '../models';
@@ -32,10 +33,13 @@ passport.use(
 
 passport.serializeUser((user, done) => done(null, user.id));
 
-passport.deserializeUser(async (id: number, done) => {
+/** A session is honoured only for an active user who signed in after their sessions were last ended. */
+passport.deserializeUser<number, IncomingMessage>(async (req, id, done) => {
   try {
     const user = await User.findByPk(id);
-    done(null, user && user.status === 'active' ? toSessionUser(user) : false);
+    const signedInAt = (req as { session?: { signedInAt?: number } }).session?.signedInAt ?? 0;
+    const current = user && user.status === 'active' && signedInAt >= user.sessionsValidAfter.getTime();
+    done(null, current ? toSessionUser(user) : false);
   } catch (err) {
     done(err);
   }

@@ -12,7 +12,18 @@ const envSchema = z
     APP_URL: z.string().url().optional(),
     SMTP_HOST: z.string().optional(),
     SMTP_PORT: z.coerce.number().int().optional(),
+    SMTP_USER: z.string().optional(),
+    SMTP_PASSWORD: z.string().optional(),
+    SMTP_SECURE: z.enum(['0', '1']).optional(),
+    /** Port of the local mail catcher (development, demo, tests); 0 picks a free one. */
+    MAIL_CATCHER_PORT: z.coerce.number().int().min(0).max(65535).default(0),
     MAIL_FROM: z.string().default('Rfolio <no-reply@rfolio.invalid>'),
+    /** Failed sign-ins allowed per e-mail and per address within the window, before 429. */
+    SIGNIN_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(10),
+    SIGNIN_MAX_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).default(50),
+    SIGNIN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+    /** Where throttle counters live; default postgres in production, memory elsewhere. */
+    SIGNIN_THROTTLE_STORE: z.enum(['memory', 'postgres']).optional(),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
     RFOLIO_PG_BIN: z.string().optional(),
     RFOLIO_PGDATA: z.string().optional(),

@@ -5,7 +5,8 @@ import { logger } from '../logger';
 
 const DB_DOWN = /ECONNREFUSED|ECONNRESET|terminating connection|Connection terminated|the database system is (shutting down|starting up)|connect ETIMEDOUT|Connection.*timeout/i;
 
-function isDatabaseDown(err: unknown): boolean {
+/** True for the errors PostgreSQL and its driver give when the database is unreachable or shutting down. */
+export function isDatabaseDown(err: unknown): boolean {
   if (!err || typeof err !== 'object') return false;
   const e = err as { name?: string; message?: string; parent?: { code?: string; message?: string }; original?: unknown };
   if (e.name && /^Sequelize(Connection\w*Error|HostNotReachableError|ConnectionAcquireTimeoutError)$/.test(e.name)) return true;

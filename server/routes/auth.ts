@@ -1,11 +1,13 @@
 import { Router, type Request } from 'express';
-import { allow } from '../middleware/access';
+import { allow, currentUser } from '../middleware/access';
 import { handle } from '../middleware/validate';
 import { csrfToken } from '../middleware/csrf';
-import { passport } from '../auth/passport';
-import { loginInputSchema, type SessionUser } from '../../shared/schemas/auth';
+import { passwordChangeByUser, signInByAccount, signInByAddress } from '../middleware/throttle';
+import { passport, toSessionUser } from '../auth/passport';
+import { signIn } from '../auth/sign-in';
+import { loginInputSchema, passwordChangeSchema, profileUpdateSchema, type SessionUser } from '../../shared/schemas/auth';
 import { AppError } from '../errors';
-import { User } from '../models';
+import { changePassword, updateProfileName, WrongPasswordError } from '../services/profile';
 
 export const authRouter = Router();
 
@@ -25,30 +27,17 @@ function authenticate(req: Request): Promise<SessionUser | false> {
   });
 }
 
-/** Regenerates the session at sign-in (no fixation) and keeps a fresh CSRF token in it. */
-function signIn(req: Request, user: SessionUser): Promise<void> {
-  return new Promise((resolve, reject) => {
-    req.session.regenerate((err) => {
-      if (err) return reject(err);
-      req.login(user, (loginErr) => {
-        if (loginErr) return reject(loginErr);
-        req.session.signedInAt = Date.now();
-        csrfToken(req);
-        req.session.save((saveErr) => (saveErr ? reject(saveErr) : resolve()));
-      });
-    });
-  });
-}
-
+/** One generic answer for a wrong e-mail or password; failed attempts are throttled per address and per account. */
 authRouter.post(
   '/login',
   allow('public'),
+  signInByAddress,
+  signInByAccount,
   handle({ body: loginInputSchema }, async (_input, req, res) => {
     const user = await authenticate(req);
     if (!user) throw new AppError(401, 'invalid_credentials', 'Wrong e-mail or password.');
-    await signIn(req, user);
-    await User.update({ lastSignInAt: new Date() }, { where: { id: user.id } });
-    res.json({ user, csrfToken: req.session.csrfToken });
+    const token = await signIn(req, user);
+    res.json({ user, csrfToken: token });
   }),
 );
 
@@ -61,3 +50,30 @@ authRouter.post('/logout', allow('viewer'), (req, res, next) => {
     });
   });
 });
+
+authRouter.patch(
+  '/me',
+  allow('viewer'),
+  handle({ body: profileUpdateSchema }, async ({ body }, req, res) => {
+    const user = await updateProfileName(currentUser(req).id, body.name);
+    res.json({ user: toSessionUser(user) });
+  }),
+);
+
+/** Current + new password; every other session of the person ends, this one stays signed in. */
+authRouter.post(
+  '/me/password',
+  allow('viewer'),
+  passwordChangeByUser,
+  handle({ body: passwordChangeSchema }, async ({ body }, req, res) => {
+    try {
+      await changePassword(currentUser(req).id, body, req.sessionID);
+    } catch (err) {
+      if (err instanceof WrongPasswordError) res.locals.wrongPassword = true;
+      throw err;
+    }
+    req.session.signedInAt = Date.now();
+    await new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
+    res.status(204).end();
+  }),
+);

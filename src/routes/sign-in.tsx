@@ -10,6 +10,7 @@ export function SignInPage() {
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
   const next = params.get('next');
+  const resetDone = params.get('reset') === 'done';
   const safeNext = next && next.startsWith('/') && !next.startsWith('//') ? next : '/';
 
   function submit(e: FormEvent) {
@@ -22,6 +23,11 @@ export function SignInPage() {
       <form onSubmit={submit} className="w-full max-w-sm rounded-plate border border-line bg-surface p-6 shadow-sm" noValidate>
         <Wordmark className="text-2xl" />
         <h1 className="mt-4 text-lg font-semibold">Sign in to your group's Rfolio</h1>
+        {resetDone && (
+          <p role="status" className="mt-3 rounded-plate border-l-4 border-clean bg-plate px-3 py-2 text-sm text-clean">
+            Password changed, and every device signed out. Sign in with the new password.
+          </p>
+        )}
         <label className="mt-4 block text-sm font-medium" htmlFor="email">
           E-mail
         </label>
@@ -61,6 +67,9 @@ export function SignInPage() {
         <Link to="/password-reset" className="mt-3 block text-center text-sm text-front hover:underline">
           Forgot your password?
         </Link>
+        <p className="mt-4 border-t border-line pt-3 text-xs text-ink-soft">
+          New to the group? Accounts are by invitation: open the link in the e-mail an admin sent you.
+        </p>
       </form>
     </div>
   );

@@ -1,0 +1,63 @@
+import { Router } from 'express';
+import multer from 'multer';
+import { z } from 'zod';
+import { allow, currentUser } from '../middleware/access';
+import { handle } from '../middleware/validate';
+import { idParamSchema } from '../../shared/schemas/common';
+import { recordInputSchema, recordListQuerySchema, recordUpdateSchema } from '../../shared/schemas/record';
+import { createRecord, retireRecord, updateRecord, canEditRecord } from '../services/records';
+import { listRecordIds, loadFullRecord, loadListRecords } from '../services/record-queries';
+import { recordHistory } from '../services/record-history';
+import { addPhoto, MAX_PHOTO_BYTES } from '../services/photos';
+import { presentPhoto, presentRecord, presentRecordListItem } from '../presenters/records';
+import { BadRequestError } from '../errors';
+
+export const recordsRouter = Router();
+
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: 1 } });
+const retireBodySchema = z.object({ reason: z.string().trim().min(1).max(500).optional() });
+
+async function recordResponse(id: number, user: Parameters<typeof canEditRecord>[0]) {
+  const record = await loadFullRecord(id);
+  return presentRecord(record, canEditRecord(user, record));
+}
+
+recordsRouter.get('/', allow('viewer'), handle({ query: recordListQuerySchema }, async ({ query }, _req, res) => {
+  const { ids, total } = await listRecordIds(query);
+  const { records, photoCounts } = await loadListRecords(ids);
+  res.json({ items: records.map((record) => presentRecordListItem(record, photoCounts.get(record.id) ?? 0)), total, page: query.page, pageSize: query.pageSize });
+}));
+
+recordsRouter.post('/', allow('member'), handle({ body: recordInputSchema }, async ({ body }, req, res) => {
+  const user = currentUser(req);
+  const record = await createRecord(body, user);
+  res.status(201).location(`/api/records/${record.id}`).json(await recordResponse(record.id, user));
+}));
+
+recordsRouter.get('/:id', allow('viewer'), handle({ params: idParamSchema }, async ({ params }, req, res) => {
+  res.json(await recordResponse(params.id, req.user));
+}));
+
+recordsRouter.patch('/:id', allow('member'), handle({ params: idParamSchema, body: recordUpdateSchema }, async ({ params, body }, req, res) => {
+  const user = currentUser(req);
+  await updateRecord(params.id, body, user);
+  res.json(await recordResponse(params.id, user));
+}));
+
+/** Retires (soft): the record leaves lists, search and Scout; every row stays and a curator can restore it. */
+recordsRouter.delete('/:id', allow('member'), handle({ params: idParamSchema, body: retireBodySchema }, async ({ params, body }, req, res) => {
+  const user = currentUser(req);
+  await retireRecord(params.id, body.reason, user);
+  res.json(await recordResponse(params.id, user));
+}));
+
+recordsRouter.get('/:id/history', allow('viewer'), handle({ params: idParamSchema }, async ({ params }, _req, res) => {
+  res.json(await recordHistory(params.id));
+}));
+
+recordsRouter.post('/:id/photos', allow('member'), upload.single('photo'), handle({ params: idParamSchema }, async ({ params }, req, res) => {
+  if (!req.file) throw new BadRequestError('Attach the photo as multipart field "photo".');
+  const user = currentUser(req);
+  const photo = await addPhoto(params.id, req.file, user);
+  res.status(201).location(`/api/photos/${photo.id}`).json(presentPhoto(photo, user.name));
+}));

@@ -1,0 +1,49 @@
+import type { Molecule } from 'openchemlib';
+import { fingerprintIdcodeSync, parentOf, parseStructure } from '../../chem';
+import { popcount32 } from '../../chem/similarity-index';
+
+/** A structure query read once: what similarity and substructure search need of it. */
+export interface StructureQuery {
+  /** The whole input as drawn or pasted (the substructure query; see server/chem/analyse.ts). */
+  input: Molecule;
+  /** Fingerprint of the neutral parent, computed exactly as stored fingerprints are (from its ID code). */
+  fingerprint: Int32Array;
+  /** Isomeric SMILES of the parent, for the answer (so the page can show what was understood). */
+  smiles: string;
+}
+
+const CACHE_SIZE = 64;
+const cache = new Map<string, StructureQuery>();
+
+/**
+ * Parses a SMILES or molfile query with the chemistry engine (bad input → its 400/413/422) and computes
+ * the parent's fingerprint (~9 ms). Memoised by text for the pages of one search (LRU of 64).
+ */
+export function readStructureQuery(text: string): StructureQuery {
+  // A molfile's first lines may be blank (name, program), so only single-line input (SMILES) is trimmed.
+  const key = text.includes('\n') ? text.trimEnd() : text.trim();
+  const hit = cache.get(key);
+  if (hit) {
+    cache.delete(key);
+    cache.set(key, hit);
+    return hit;
+  }
+  const input = parseStructure(key).molecule;
+  const { parent } = parentOf(input);
+  const query = { input, fingerprint: fingerprintIdcodeSync(parent.getIDCode()), smiles: parent.toIsomericSmiles() };
+  cache.set(key, query);
+  if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value as string);
+  return query;
+}
+
+/** Tanimoto coefficient of two 16-word fingerprints: common bits / (bits of a + bits of b − common) (Willett 1998). */
+export function tanimoto(a: ArrayLike<number>, b: ArrayLike<number>): number {
+  let common = 0;
+  let total = 0;
+  for (let w = 0; w < a.length; w++) {
+    common += popcount32(a[w] & b[w]);
+    total += popcount32(a[w]) + popcount32(b[w]);
+  }
+  const union = total - common;
+  return union === 0 ? 0 : common / union;
+}

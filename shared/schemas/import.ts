@@ -1,0 +1,132 @@
+import { z } from 'zod';
+import { solventKeys } from '../catalogue/solvents';
+
+/**
+ * What a column of an imported file can hold. A column may also hold the amount of one solvent
+ * (`solvent:<catalogue key>`: volume fraction, % or parts, as in the open TLC dataset) or be ignored.
+ */
+export const importFields = [
+  'name', 'structure', 'phase', 'eluent', 'additive', 'rf', 'rfStartingMaterial', 'rfOther', 'stain',
+  'technique', 'outcome', 'outcomeReason', 'notes', 'notebook', 'yield', 'columnDiameter', 'cartridge',
+  'silica', 'sampleMass', 'loadMethod', 'fractionSize', 'fractionsPooled', 'date', 'author',
+] as const;
+export type ImportField = (typeof importFields)[number];
+
+export const importFieldLabels: Record<ImportField, string> = {
+  name: 'compound name', structure: 'structure (SMILES or molfile)', phase: 'stationary phase', eluent: 'eluent',
+  additive: 'additive (% v/v)', rf: 'Rf of the target', rfStartingMaterial: 'Rf of the starting material',
+  rfOther: 'Rf of a by-product', stain: 'visualisation', technique: 'technique', outcome: 'outcome',
+  outcomeReason: 'outcome reason', notes: 'notes', notebook: 'notebook reference', yield: 'yield (%)',
+  columnDiameter: 'column diameter (mm)', cartridge: 'cartridge size', silica: 'silica (g)', sampleMass: 'sample (mg)',
+  loadMethod: 'load (dry / liquid)', fractionSize: 'fraction size (mL)', fractionsPooled: 'fractions pooled',
+  date: 'date (kept in notes)', author: 'original author (kept in notes)',
+};
+
+/** Fields that several columns may feed (their texts are joined); every other field takes one column. */
+export const repeatableImportFields: readonly ImportField[] = ['notes'];
+
+export const IGNORE_COLUMN = 'ignore';
+
+const solventKeySet = new Set<string>(solventKeys);
+const fieldSet = new Set<string>(importFields);
+
+/** True for a mapping target: a field, `solvent:<key>` or "ignore". */
+export function isImportTarget(target: string): boolean {
+  if (target === IGNORE_COLUMN || fieldSet.has(target)) return true;
+  return target.startsWith('solvent:') && solventKeySet.has(target.slice('solvent:'.length));
+}
+
+/** Header → target. Headers left out are detected automatically. */
+export const importMappingSchema = z
+  .record(z.string().max(200), z.string().refine(isImportTarget, { message: 'Not a field an import can fill.' }))
+  .superRefine((mapping, context) => {
+    const seen = new Map<string, string>();
+    for (const [header, target] of Object.entries(mapping)) {
+      if (target === IGNORE_COLUMN || repeatableImportFields.includes(target as ImportField)) continue;
+      const other = seen.get(target);
+      if (other !== undefined) {
+        context.addIssue({ code: 'custom', path: [header], message: `Columns "${other}" and "${header}" both map to ${target}.` });
+      }
+      seen.set(target, header);
+    }
+  });
+export type ImportMapping = z.infer<typeof importMappingSchema>;
+
+export const importFormats = ['csv', 'sdf', 'open-tlc'] as const;
+export const importStatuses = ['running', 'completed', 'failed', 'undone'] as const;
+export const rowResults = ['accepted', 'rejected', 'duplicate'] as const;
+
+/** Query of `POST /api/imports`: `dryRun=1` previews the first `previewRows` rows and writes nothing. */
+export const importUploadQuerySchema = z.object({
+  dryRun: z.enum(['0', '1', 'true', 'false']).optional().transform((value) => value === '1' || value === 'true'),
+  previewRows: z.coerce.number().int().min(1).max(200).default(20),
+  /** Milliseconds to wait for a short import to finish before answering 202 with its progress. */
+  wait: z.coerce.number().int().min(0).max(10_000).default(3_000),
+});
+
+/** One row's outcome: accepted, rejected with a reason, or a duplicate of a stored record; `notes` say what was assumed or adjusted. */
+export const importRowResultSchema = z.object({
+  row: z.number().int(),
+  line: z.number().int(),
+  result: z.enum(rowResults),
+  reason: z.string().nullable(),
+  notes: z.array(z.string()),
+  values: z.record(z.string(), z.string()),
+  record: z
+    .object({ name: z.string().nullable(), smiles: z.string().nullable(), eluent: z.string(), rf: z.number().nullable(), phase: z.string() })
+    .nullable(),
+});
+export type ImportRowResult = z.infer<typeof importRowResultSchema>;
+
+const countsShape = {
+  total: z.number().int(),
+  processed: z.number().int(),
+  accepted: z.number().int(),
+  rejected: z.number().int(),
+  duplicates: z.number().int(),
+  blankRows: z.number().int(),
+};
+
+/** A stored import: who, when, which file, how far it got and what it added. */
+export const importDtoSchema = z.object({
+  id: z.number().int(),
+  fileName: z.string(),
+  sha256: z.string(),
+  byteSize: z.number().int(),
+  format: z.enum(importFormats),
+  status: z.enum(importStatuses),
+  user: z.object({ id: z.number().int(), name: z.string() }),
+  headers: z.array(z.string()),
+  mapping: z.record(z.string(), z.string()),
+  ...countsShape,
+  newCompounds: z.number().int(),
+  lastCommittedRow: z.number().int(),
+  batchesCommitted: z.number().int(),
+  error: z.string().nullable(),
+  createdAt: z.string(),
+  finishedAt: z.string().nullable(),
+  undoneAt: z.string().nullable(),
+  retiredRecords: z.number().int().nullable(),
+});
+export type ImportDto = z.infer<typeof importDtoSchema>;
+
+export const importListSchema = z.object({ items: z.array(importDtoSchema) });
+
+/** Answer of a dry run: the detected shape of the file, the mapping and the first rows' results. */
+export const importPreviewSchema = z.object({
+  dryRun: z.literal(true),
+  fileName: z.string(),
+  sha256: z.string(),
+  format: z.enum(importFormats),
+  delimiter: z.string().nullable(),
+  headers: z.array(z.string()),
+  mapping: z.record(z.string(), z.string()),
+  total: z.number().int(),
+  blankRows: z.number().int(),
+  rows: z.array(importRowResultSchema),
+  /** Counts over the previewed rows only. */
+  accepted: z.number().int(),
+  rejected: z.number().int(),
+  duplicates: z.number().int(),
+});
+export type ImportPreview = z.infer<typeof importPreviewSchema>;

@@ -1,0 +1,13 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { recordHistorySchema } from '../../../../shared/schemas/record';
+import { recordKeys } from './keys';
+
+export const getRecordHistory = (id: number) => api(`/api/records/${id}/history`, {}, recordHistorySchema);
+
+export const recordHistoryQueryOptions = (id: number) => queryOptions({ queryKey: recordKeys.history(id), queryFn: () => getRecordHistory(id) });
+
+/** Every revision of a record, newest first. */
+export function useRecordHistory(id: number) {
+  return useQuery(recordHistoryQueryOptions(id));
+}

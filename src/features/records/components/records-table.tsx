@@ -1,0 +1,64 @@
+import { flexRender, getCoreRowModel, useReactTable, type SortingState, type VisibilityState } from '@tanstack/react-table';
+import type { RecordListItem } from '../../../../shared/schemas/record';
+import { recordColumns } from './record-columns';
+
+interface RecordsTableProps {
+  records: RecordListItem[];
+  visible: string[];
+  sort: string;
+  order: 'asc' | 'desc';
+  onSort: (sortKey: string, order: 'asc' | 'desc') => void;
+}
+
+/** The records as a table; sorting is done by the server (manualSorting) and asked for through onSort. */
+export function RecordsTable({ records, visible, sort, order, onSort }: RecordsTableProps) {
+  const sortedColumn = recordColumns.find((column) => column.meta.sortKey === sort)?.id;
+  const sorting: SortingState = sortedColumn ? [{ id: sortedColumn, desc: order === 'desc' }] : [];
+  const columnVisibility: VisibilityState = Object.fromEntries(recordColumns.map((column) => [column.id, visible.includes(column.id)]));
+  const table = useReactTable({
+    data: records,
+    columns: recordColumns,
+    state: { sorting, columnVisibility },
+    manualSorting: true,
+    manualPagination: true,
+    enableSortingRemoval: false,
+    getCoreRowModel: getCoreRowModel(),
+    getRowId: (row) => String(row.id),
+  });
+  return (
+    <div className="overflow-x-auto rounded-plate border border-line bg-surface">
+      <table className="w-full text-sm">
+        <thead className="border-b border-line bg-plate text-left text-xs text-ink-soft">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id}>
+              {group.headers.map((header) => {
+                const meta = (header.column.columnDef as (typeof recordColumns)[number]).meta;
+                const active = meta.sortKey === sort;
+                return (
+                  <th key={header.id} scope="col" className="px-3 py-2 font-medium" aria-sort={active ? (order === 'asc' ? 'ascending' : 'descending') : undefined}>
+                    {meta.sortKey ? (
+                      <button type="button" className="inline-flex items-center gap-1 hover:text-ink" onClick={() => onSort(meta.sortKey as string, active && order === 'desc' ? 'asc' : 'desc')}>
+                        {flexRender(header.column.columnDef.header, header.getContext())}
+                        <span aria-hidden="true" className="figure">{active ? (order === 'asc' ? '▲' : '▼') : '↕'}</span>
+                        <span className="sr-only">{active ? `sorted ${order === 'asc' ? 'ascending' : 'descending'}; ` : ''}sort by {meta.label}</span>
+                      </button>
+                    ) : (
+                      flexRender(header.column.columnDef.header, header.getContext())
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="border-b border-line/70 align-middle last:border-0 hover:bg-plate/60">
+              {row.getVisibleCells().map((cell) => <td key={cell.id} className="px-3 py-2">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>)}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

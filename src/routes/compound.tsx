@@ -1,0 +1,97 @@
+import { useMemo, useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { compoundClasses } from '../../shared/catalogue/compound-classes';
+import type { RecordListItem } from '../../shared/schemas/record';
+import { Card } from '../components/ui/card';
+import { Chip } from '../components/ui/chip';
+import { EmptyState } from '../components/ui/empty-state';
+import { PageLoading } from '../components/ui/page-loading';
+import { buttonClass } from '../components/ui/button';
+import { PlateStrip, type PlateLane } from '../components/plate-strip';
+import { StructureImage } from '../components/structure-image';
+import { useHasRole } from '../features/auth/api/session';
+import { useCompound } from '../features/compounds/api/get-compound';
+import { DescriptorTable } from '../features/compounds/components/descriptor-table';
+import { RfStrengthCharts } from '../features/compounds/components/rf-strength-charts';
+import { RecordsTable } from '../features/records/components/records-table';
+
+const className = (key: string) => compoundClasses.find((entry) => entry.key === key)?.name ?? key;
+
+const compare: Record<string, (a: RecordListItem, b: RecordListItem) => number> = {
+  createdAt: (a, b) => a.createdAt.localeCompare(b.createdAt),
+  targetRf: (a, b) => (a.targetRf ?? -1) - (b.targetRf ?? -1),
+  strongPercent: (a, b) => (a.eluentSummary.strongPercent ?? -1) - (b.eluentSummary.strongPercent ?? -1),
+  outcome: (a, b) => ['clean', 'partial', 'failed'].indexOf(a.outcome) - ['clean', 'partial', 'failed'].indexOf(b.outcome),
+  phase: (a, b) => a.stationaryPhaseLabel.localeCompare(b.stationaryPhaseLabel),
+  author: (a, b) => a.author.name.localeCompare(b.author.name),
+  compound: () => 0,
+};
+
+/** One lane per distinct eluent (the clean or partial plates), side by side. */
+function lanesOf(records: RecordListItem[]): PlateLane[] {
+  const seen = new Set<string>();
+  return records
+    .filter((record) => record.outcome !== 'failed' && record.technique !== 'flash')
+    .sort((a, b) => (a.eluentSummary.strongPercent ?? 0) - (b.eluentSummary.strongPercent ?? 0))
+    .filter((record) => {
+      const key = `${record.stationaryPhase}|${record.eluentSummary.strongPercent?.toFixed(1)}|${record.eluent.components.map((part) => part.solvent).sort().join('/')}|${record.eluent.additives.map((item) => item.additive).join('/')}`;
+      return !seen.has(key) && seen.add(key);
+    })
+    .slice(0, 8)
+    .map((record) => ({ label: record.eluentSummary.notation, spots: record.spots.map((spot) => ({ rf: spot.rf, role: spot.role })) }));
+}
+
+/** A compound: structure, descriptors, classes, all its records, and Rf against eluent strength per solvent pair. */
+export default function CompoundPage() {
+  const id = Number(useParams().id);
+  const { data: compound, isLoading, error } = useCompound(id);
+  const canContribute = useHasRole('member');
+  const [sort, setSort] = useState<{ key: string; order: 'asc' | 'desc' }>({ key: 'createdAt', order: 'desc' });
+  const records = useMemo(() => {
+    const list = [...(compound?.records ?? [])].sort(compare[sort.key] ?? compare.createdAt);
+    return sort.order === 'desc' ? list.reverse() : list;
+  }, [compound?.records, sort]);
+  if (isLoading) return <PageLoading label="Loading the compound…" />;
+  if (error || !compound) return <p role="alert" className="text-failed">{error?.message ?? 'Compound not found.'}</p>;
+  const title = compound.name ?? compound.canonicalSmiles;
+  const lanes = lanesOf(compound.records);
+  return (
+    <article className="space-y-5">
+      <header className="flex flex-wrap items-start gap-5">
+        <StructureImage compoundId={compound.id} name={title} size="lg" link={false} />
+        <div className="min-w-0 flex-1 space-y-2">
+          <p className="text-xs text-ink-soft">Compound <span className="figure">#{compound.id}</span></p>
+          <h1 className="text-2xl font-semibold">{title}</h1>
+          {compound.synonyms.length > 0 && <p className="text-sm text-ink-soft">Also: {compound.synonyms.join(', ')}</p>}
+          <p className="figure break-all text-sm">{compound.canonicalSmiles}</p>
+          <div className="flex flex-wrap gap-1.5">
+            {compound.classes.map((key) => <Link key={key} to={`/classes/${key}`}><Chip tone="front">{className(key)}</Chip></Link>)}
+          </div>
+          <p className="text-sm">
+            <Link className="text-front underline" to={`/records?compoundId=${compound.id}&status=all`}>All records of this compound in the table</Link>
+          </p>
+        </div>
+        <Card title="Descriptors" className="min-w-64"><DescriptorTable descriptors={compound.descriptors} /></Card>
+      </header>
+
+      {lanes.length > 0 && (
+        <Card title="Plates, one lane per eluent">
+          <PlateStrip size="lg" lanes={lanes} title={`Plates of ${title}`} />
+        </Card>
+      )}
+
+      <Card title="Rf against eluent strength">
+        <RfStrengthCharts records={compound.records} />
+      </Card>
+
+      <Card title={`Records (${compound.records.length})`} actions={canContribute ? <Link to="/contribute" className={buttonClass('secondary', 'sm')}>Contribute</Link> : undefined}>
+        {records.length === 0 ? (
+          <EmptyState title="No active record for this compound">Contribute what you ran, even if it failed.</EmptyState>
+        ) : (
+          <RecordsTable records={records} visible={['compound', 'plate', 'eluent', 'phase', 'technique', 'targetRf', 'outcome', 'visualisation', 'author', 'createdAt']}
+            sort={sort.key} order={sort.order} onSort={(key, order) => setSort({ key, order })} />
+        )}
+      </Card>
+    </article>
+  );
+}
