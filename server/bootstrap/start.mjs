@@ -35,6 +35,8 @@ if (!dev) ensureClientBuild(root);
 const env = {
   ...process.env,
   DATABASE_URL: process.env.DATABASE_URL ?? databaseUrl(pgPort, dbName),
+  // In dev the pages are served by Vite, so e-mailed links must point there.
+  ...(dev && !process.env.APP_URL ? { APP_URL: 'http://127.0.0.1:5173' } : {}),
   ...(ownCluster ? { RFOLIO_PG_BIN: bin, RFOLIO_PGDATA: paths.data } : {}),
 };
 
