@@ -22,6 +22,10 @@ const RecordPage = lazy(() => import('./routes/record'));
 const RecordEditPage = lazy(() => import('./routes/record-edit'));
 const ContributePage = lazy(() => import('./routes/contribute'));
 const CompoundPage = lazy(() => import('./routes/compound'));
+const SearchPage = lazy(() => import('./routes/search'));
+const BookmarksPage = lazy(() => import('./routes/bookmarks'));
+const ClassesPage = lazy(() => import('./routes/classes'));
+const ClassPage = lazy(() => import('./routes/class-detail'));
 
 /** Pages are lazily loaded, so the first load carries only the shell. */
 const page = (node: ReactNode) => <Suspense fallback={<PageLoading />}>{node}</Suspense>;
@@ -37,7 +41,7 @@ export const router = createBrowserRouter([
     children: [
       { index: true, element: <HomePage /> },
       { path: 'cautions', element: page(<ComingPage title="Lab cautions" issue={6} />) },
-      { path: 'search', element: <RequireRole least="viewer">{page(<ComingPage title="Search" issue={7} />)}</RequireRole> },
+      { path: 'search', element: <RequireRole least="viewer">{page(<SearchPage />)}</RequireRole> },
       { path: 'records', element: <RequireRole least="viewer">{page(<RecordsPage />)}</RequireRole> },
       { path: 'records/:id', element: <RequireRole least="viewer">{page(<RecordPage />)}</RequireRole> },
       { path: 'records/:id/edit', element: <RequireRole least="member">{page(<RecordEditPage />)}</RequireRole> },
@@ -45,8 +49,9 @@ export const router = createBrowserRouter([
       { path: 'compounds/:id', element: <RequireRole least="viewer">{page(<CompoundPage />)}</RequireRole> },
       { path: 'scout', element: <RequireRole least="viewer">{page(<ComingPage title="Scout" issue={6} />)}</RequireRole> },
       { path: 'tools', element: <RequireRole least="viewer">{page(<ComingPage title="Column planner and eluent translator" issue={6} />)}</RequireRole> },
-      { path: 'classes', element: <RequireRole least="viewer">{page(<ComingPage title="Compound classes" issue={7} />)}</RequireRole> },
-      { path: 'bookmarks', element: <RequireRole least="viewer">{page(<ComingPage title="Bookmarks" issue={7} />)}</RequireRole> },
+      { path: 'classes', element: <RequireRole least="viewer">{page(<ClassesPage />)}</RequireRole> },
+      { path: 'classes/:key', element: <RequireRole least="viewer">{page(<ClassPage />)}</RequireRole> },
+      { path: 'bookmarks', element: <RequireRole least="viewer">{page(<BookmarksPage />)}</RequireRole> },
       { path: 'curation', element: <RequireRole least="curator">{page(<CurationPage />)}</RequireRole> },
       { path: 'curation/merge', element: <RequireRole least="curator">{page(<CurationMergePage />)}</RequireRole> },
       { path: 'imports', element: <RequireRole least="curator">{page(<ComingPage title="Import" issue={9} />)}</RequireRole> },

@@ -89,7 +89,9 @@ export class FingerprintIndex {
 
   /**
    * The k most similar entries with Tanimoto ≥ threshold, best first (ties in index order). An all-zero
-   * query has no bits to compare and returns nothing.
+   * query has no bits to compare and returns nothing. Entries whose bit counts alone bound the
+   * coefficient below the current k-th best, min(a, b) / max(a, b), are skipped without changing the
+   * result (Swamidass & Baldi, J. Chem. Inf. Model. 2007, 47, 302; reference from memory).
    */
   topK(query: ArrayLike<number>, k = 50, threshold = 0): SimilarityHit[] {
     const q = toWords(query);
@@ -100,6 +102,9 @@ export class FingerprintIndex {
     let filled = 0;
     const { words, counts } = this;
     for (let slot = 0; slot < this.length; slot++) {
+      const count = counts[slot];
+      const bound = count < qCount ? count / qCount : qCount / count;
+      if (bound < threshold || (filled === k && bound <= bestScore[k - 1])) continue;
       const base = slot * WORDS;
       let common = 0;
       for (let w = 0; w < WORDS; w++) common += popcount32(words[base + w] & q[w]);

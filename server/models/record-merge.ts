@@ -8,6 +8,8 @@ export type MergeSnapshot = Record<string, Record<string, unknown>[]>;
 export interface MergeEffects {
   insertedContributorIds: number[];
   deletedBookmarkIds: number[];
+  /** Deleted bookmark id → id of the survivor's bookmark of the same user it was united into. */
+  bookmarkUnitedInto: Record<string, number>;
   /** Notes of the survivor's bookmarks right after the merge appended to them, by bookmark id. */
   bookmarkNotesAfter: Record<string, string | null>;
   revisionIds: number[];

@@ -15,6 +15,9 @@ import { recordCurationRouter } from './record-curation';
 import { importsRouter } from './imports';
 import { searchRouter } from './search';
 import { bookmarksRouter } from './bookmarks';
+import { classesRouter } from './classes';
+import { exportRouter } from './export';
+import { overviewRouter } from './overview';
 
 /** Every API router, mounted under /api. Each route's first handler is `allow(level)`. */
 export function apiRouter(): Router {
@@ -34,5 +37,8 @@ export function apiRouter(): Router {
   api.use('/imports', importsRouter);
   api.use('/search', searchRouter);
   api.use('/bookmarks', bookmarksRouter);
+  api.use('/classes', classesRouter);
+  api.use(exportRouter);
+  api.use('/overview', overviewRouter);
   return api;
 }

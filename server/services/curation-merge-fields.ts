@@ -5,7 +5,7 @@ import { ConditionRecord } from '../models';
 import { derivedColumns, recordContentHash, type RecordContent } from './record-columns';
 import { loadRecordState } from './record-revisions';
 
-/** The row columns each choosable field stands for; derived columns travel with the field they derive from. */
+/** The row columns each choosable field stands for; the filter columns derived from them are recomputed after (refreshDerivedColumns). */
 export const fieldColumns: Record<MergeableField, readonly string[]> = {
   compound: ['compound_id'],
   technique: ['technique'],

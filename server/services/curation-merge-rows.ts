@@ -57,10 +57,10 @@ const joinNote = (kept: string | null, fromRecord: number, moved: string | null)
 /**
  * Moves bookmarks of the merged records to the survivor. A user who already has a bookmark there keeps one:
  * the moved bookmark's note is appended to it and the duplicate row deleted (it stays in the merge's
- * before-snapshot, so an unmerge puts it back). Returns deleted ids and the notes the merge wrote.
+ * before-snapshot, so an unmerge puts it back). Returns deleted ids, where each went, and the notes written.
  */
 export async function uniteBookmarks(survivorId: number, mergedIds: readonly number[], transaction: Transaction) {
-  const effects = { deletedBookmarkIds: [] as number[], bookmarkNotesAfter: {} as Record<string, string | null> };
+  const effects = { deletedBookmarkIds: [] as number[], bookmarkUnitedInto: {} as Record<string, number>, bookmarkNotesAfter: {} as Record<string, string | null> };
   if (!(await hasBookmarks(transaction))) return effects;
   const moving = await sequelize.query<BookmarkRow>(
     `SELECT id, user_id AS "userId", record_id AS "recordId", note FROM bookmarks WHERE record_id IN (:mergedIds)
@@ -83,6 +83,7 @@ export async function uniteBookmarks(survivorId: number, mergedIds: readonly num
     }
     await sequelize.query('DELETE FROM bookmarks WHERE id = :id', { replacements: { id: bookmark.id }, transaction });
     effects.deletedBookmarkIds.push(Number(bookmark.id));
+    effects.bookmarkUnitedInto[String(bookmark.id)] = Number(kept.id);
   }
   return effects;
 }

@@ -46,10 +46,19 @@ export async function unmergeBlock(merge: RecordMerge, transaction?: Transaction
 async function restoreBookmarks(merge: RecordMerge, effects: MergeEffects, transaction: Transaction) {
   const rows = merge.before.bookmarks;
   if (!rows || !(await hasBookmarks(transaction))) return;
-  const deleted = new Set(effects.deletedBookmarkIds ?? []);
+  const unitedInto = effects.bookmarkUnitedInto ?? {};
+  const [{ present }] = await sequelize.query<{ present: number[] }>('SELECT coalesce(array_agg(id), \'{}\') AS present FROM bookmarks WHERE id IN (:ids)', {
+    replacements: { ids: [0, ...Object.values(unitedInto)] },
+    type: QueryTypes.SELECT,
+    transaction,
+  });
   for (const row of rows) {
-    if (deleted.has(Number(row.id))) await reinsertRow('bookmarks', row, transaction);
-    else await sequelize.query('UPDATE bookmarks SET record_id = :recordId WHERE id = :id', { replacements: { recordId: row.record_id, id: row.id }, transaction });
+    const keptId = unitedInto[String(row.id)];
+    if (keptId === undefined) {
+      await sequelize.query('UPDATE bookmarks SET record_id = :recordId WHERE id = :id', { replacements: { recordId: row.record_id, id: row.id }, transaction });
+    } else if (present.includes(keptId)) {
+      await reinsertRow('bookmarks', row, transaction);
+    }
   }
   for (const [id, noteAfter] of Object.entries(effects.bookmarkNotesAfter ?? {})) {
     const original = rows.find((row) => String(row.id) === id);
@@ -64,8 +73,8 @@ async function restoreBookmarks(merge: RecordMerge, effects: MergeEffects, trans
 /**
  * Undoes a merge from its before-snapshot: every record's row (status active, fields, notes; not the
  * revision counter, which moves on), spots, visualisations, photos and contributors as they were; credits
- * the merge added removed; bookmarks moved back and de-duplicated ones re-inserted (a bookmark its user
- * deleted since stays deleted). History keeps the merge and gains an 'unmerge' revision on each record.
+ * the merge added removed; bookmarks moved back and de-duplicated ones re-inserted — unless their user deleted
+ * the united bookmark after the merge, which stays their choice. History keeps the merge and gains an 'unmerge' revision on each record.
  */
 export async function unmergeRecords(mergeId: number, actorId: number): Promise<UnmergeResult> {
   const ids = await sequelize.transaction(async (transaction) => {

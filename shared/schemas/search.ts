@@ -120,3 +120,9 @@ export const searchResponseSchema = z.object({
   tookMs: z.number(),
 });
 export type SearchResponse = z.infer<typeof searchResponseSchema>;
+
+/** `GET /api/search/contributors`: people who wrote active records (for the contributor filter). */
+export const searchContributorsSchema = z.object({
+  items: z.array(z.object({ id: z.number().int(), name: z.string(), records: z.number().int() })),
+});
+export type SearchContributors = z.infer<typeof searchContributorsSchema>;

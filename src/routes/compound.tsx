@@ -14,6 +14,7 @@ import { useCompound } from '../features/compounds/api/get-compound';
 import { DescriptorTable } from '../features/compounds/components/descriptor-table';
 import { RfStrengthCharts } from '../features/compounds/components/rf-strength-charts';
 import { RecordsTable } from '../features/records/components/records-table';
+import { BookmarkToggle } from '../features/bookmarks/components/bookmark-toggle';
 
 const className = (key: string) => compoundClasses.find((entry) => entry.key === key)?.name ?? key;
 
@@ -61,7 +62,10 @@ export default function CompoundPage() {
         <StructureImage compoundId={compound.id} name={title} size="lg" link={false} />
         <div className="min-w-0 flex-1 space-y-2">
           <p className="text-xs text-ink-soft">Compound <span className="figure">#{compound.id}</span></p>
-          <h1 className="text-2xl font-semibold">{title}</h1>
+          <div className="flex items-start gap-2">
+            <h1 className="text-2xl font-semibold">{title}</h1>
+            <BookmarkToggle compoundId={compound.id} label={`compound ${title}`} />
+          </div>
           {compound.synonyms.length > 0 && <p className="text-sm text-ink-soft">Also: {compound.synonyms.join(', ')}</p>}
           <p className="figure break-all text-sm">{compound.canonicalSmiles}</p>
           <div className="flex flex-wrap gap-1.5">
@@ -89,7 +93,8 @@ export default function CompoundPage() {
           <EmptyState title="No active record for this compound">Contribute what you ran, even if it failed.</EmptyState>
         ) : (
           <RecordsTable records={records} visible={['compound', 'plate', 'eluent', 'phase', 'technique', 'targetRf', 'outcome', 'visualisation', 'author', 'createdAt']}
-            sort={sort.key} order={sort.order} onSort={(key, order) => setSort({ key, order })} />
+            sort={sort.key} order={sort.order} onSort={(key, order) => setSort({ key, order })}
+            action={(record) => <BookmarkToggle recordId={record.id} label={`record ${record.id}, ${title}`} />} />
         )}
       </Card>
     </article>

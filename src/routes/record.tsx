@@ -18,6 +18,7 @@ import { HistoryList } from '../features/records/components/history-list';
 import { ColumnDetailsView } from '../features/records/components/column-details-view';
 import { MergedNotice } from '../features/curation/components/merged-notice';
 import { RetireControl } from '../features/curation/components/retire-control';
+import { BookmarkToggle } from '../features/bookmarks/components/bookmark-toggle';
 
 /** A condition record with every field, its depiction and plate strip, photos, cautions and history. */
 export default function RecordPage() {
@@ -41,9 +42,12 @@ export default function RecordPage() {
         <StructureImage compoundId={record.compound.id} name={title} size="lg" />
         <div className="min-w-0 flex-1 space-y-2">
           <p className="text-xs text-ink-soft">Condition record <span className="figure">#{record.id}</span> · r{record.revision}</p>
-          <h1 className="text-2xl font-semibold">
-            <Link to={`/compounds/${record.compound.id}`} className="hover:underline">{title}</Link>
-          </h1>
+          <div className="flex items-start gap-2">
+            <h1 className="text-2xl font-semibold">
+              <Link to={`/compounds/${record.compound.id}`} className="hover:underline">{title}</Link>
+            </h1>
+            <BookmarkToggle recordId={record.id} label={`record ${record.id}, ${title}`} />
+          </div>
           <p className="figure break-all text-sm text-ink-soft">{record.compound.canonicalSmiles} · {record.compound.formula} · {record.compound.mw.toFixed(2)} g/mol</p>
           <div className="flex flex-wrap items-center gap-2">
             <OutcomeBadge outcome={record.outcome} />

@@ -8,6 +8,7 @@ import { RecordsTable } from '../features/records/components/records-table';
 import { RecordFilters } from '../features/records/components/record-filters';
 import { ColumnChooser } from '../features/records/components/column-chooser';
 import { useRecordsUrl } from '../features/records/hooks/use-records-url';
+import { BookmarkToggle } from '../features/bookmarks/components/bookmark-toggle';
 
 /** Every condition record, sorted, filtered and paged on the server; the view lives in the URL. */
 export default function RecordsPage() {
@@ -42,7 +43,8 @@ export default function RecordsPage() {
       ) : (
         <>
           <RecordsTable records={records.data!.items} visible={columns} sort={String(query.sort)} order={query.order === 'asc' ? 'asc' : 'desc'}
-            onSort={(sort, order) => update({ sort, order })} />
+            onSort={(sort, order) => update({ sort, order })}
+            action={(record) => <BookmarkToggle recordId={record.id} label={`record ${record.id}, ${record.compound.name ?? record.compound.canonicalSmiles}`} />} />
           <nav aria-label="Pages" className="flex flex-wrap items-center gap-3 text-sm">
             <Button size="sm" disabled={page <= 1} onClick={() => update({ page: page - 1 }, false)}>Previous</Button>
             <span className="figure">page {page} of {pages}</span>

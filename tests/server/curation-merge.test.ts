@@ -85,6 +85,15 @@ describe('POST /api/curation/merge', () => {
     expect((await getRecord(survivor)).revision).toBe(2); // create + the one merge
   });
 
+  it('when one structure was entered as two compounds (stereo drawn and not), then their records merge and the compound can be chosen', async () => {
+    const drawn = await recordId(alice, { structure: 'C[C@@H](O)c1ccc(F)cc1', name: '(R)-1-(4-fluorophenyl)ethanol' });
+    const open = await recordId(bruno, { structure: 'CC(O)c1ccc(F)cc1', name: '4-fluoro-α-methylbenzyl alcohol' });
+    const openCompound = (await getRecord(open)).compound.id;
+    const res = await post(curator, '/api/curation/merge', { survivorId: drawn, mergedIds: [open], fields: { compound: open } });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect((await getRecord(drawn)).compound.id).toBe(openCompound);
+  });
+
   it('when the records belong to different compounds, then 409', async () => {
     const one = await recordId(alice, { structure });
     const other = await recordId(alice, { structure: 'OCc1ccc(Cl)cc1' });

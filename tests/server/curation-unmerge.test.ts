@@ -1,7 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { agentFor, type Agent } from '../helpers/agent';
-import { dumpAffected, post, recordId } from '../helpers/curation';
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '../../server/db/sequelize';
+import { addBookmarkRow, dumpAffected, post, recordId } from '../helpers/curation';
 import { mergeHistorySchema, unmergeResultSchema } from '../../shared/schemas/curation';
 import { recordDtoSchema } from '../../shared/schemas/record';
 
@@ -84,6 +86,37 @@ describe('POST /api/curation/unmerge/:mergeId', () => {
     await unmerge(mergeId);
     const done = mergeHistorySchema.parse((await curator.get(`/api/curation/merges?recordId=${survivor}`)).body);
     expect(done.items.find((item) => item.id === mergeId)?.undoneBy?.id).toBe(curator.user!.id);
+  });
+
+  it('when a user had bookmarked both records, then the merge leaves one bookmark with both notes and the unmerge gives back both', async () => {
+    const reader = await agentFor(app, 'viewer');
+    const [survivor, merged] = [await record(), await record()];
+    const kept = await addBookmarkRow(reader.user!.id, survivor, 'reference plate');
+    const other = await addBookmarkRow(reader.user!.id, merged, 'scale-up run');
+    const mergeId = await merge(survivor, [merged]);
+    const during = await sequelize.query<{ id: number; record_id: number; note: string }>('SELECT id, record_id, note FROM bookmarks WHERE user_id = :userId', {
+      replacements: { userId: reader.user!.id }, type: QueryTypes.SELECT,
+    });
+    expect(during).toEqual([{ id: kept, record_id: survivor, note: `reference plate\n[Bookmark note from record #${merged}] scale-up run` }]);
+    expect((await unmerge(mergeId)).status).toBe(200);
+    const after = await sequelize.query('SELECT id, record_id, note FROM bookmarks WHERE user_id = :userId ORDER BY id', {
+      replacements: { userId: reader.user!.id }, type: QueryTypes.SELECT,
+    });
+    expect(after).toEqual([{ id: kept, record_id: survivor, note: 'reference plate' }, { id: other, record_id: merged, note: 'scale-up run' }]);
+  });
+
+  it('when the user deleted the united bookmark after the merge, then the unmerge does not bring either back', async () => {
+    const reader = await agentFor(app, 'viewer');
+    const [survivor, merged] = [await record(), await record()];
+    const kept = await addBookmarkRow(reader.user!.id, survivor, null);
+    await addBookmarkRow(reader.user!.id, merged, null);
+    const mergeId = await merge(survivor, [merged]);
+    await sequelize.query('DELETE FROM bookmarks WHERE id = :kept', { replacements: { kept } });
+    expect((await unmerge(mergeId)).status).toBe(200);
+    const [{ n }] = await sequelize.query<{ n: string }>('SELECT count(*) AS n FROM bookmarks WHERE user_id = :userId', {
+      replacements: { userId: reader.user!.id }, type: QueryTypes.SELECT,
+    });
+    expect(Number(n)).toBe(0);
   });
 
   it('when the merge id is unknown, then 404', async () => {

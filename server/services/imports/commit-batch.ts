@@ -2,9 +2,9 @@ import { EventEmitter } from 'node:events';
 import { sequelize } from '../../db/sequelize';
 import { Import, ImportRow } from '../../models';
 import { findOrCreateCompounds } from '../compounds';
-import { recordContentHash, type RecordContent } from '../record-columns';
+import type { RecordContent } from '../record-columns';
 import { insertRecords } from '../record-rows';
-import type { PreparedRow } from './prepare-row';
+import { contentHashes, contentOf, type AcceptedRow, type PreparedRow } from './prepare-row';
 import { storedCompoundIds, storedHashes } from './stored-keys';
 
 /**
@@ -40,24 +40,20 @@ export async function commitBatch(
 ): Promise<BatchCounts> {
   return sequelize.transaction(async (transaction) => {
     await sequelize.query('SELECT pg_advisory_xact_lock(:key)', { replacements: { key: IMPORT_LOCK }, transaction });
-    const good = rows.filter((row): row is Extract<PreparedRow, { ok: true }> => row.ok);
+    const good = rows.filter((row): row is AcceptedRow => row.ok);
     const idcodes = [...new Set(good.map((row) => row.analysis.idcode))];
     const before = await storedCompoundIds(idcodes, transaction);
     const compounds = await findOrCreateCompounds(
       good.map((row) => ({ structure: row.record.structure, name: row.record.name ?? null, analysis: row.analysis })),
       { userId: importRow.userId, transaction, fingerprints },
     );
-    const contents = good.map((row, index): RecordContent => {
-      const { structure: _structure, compoundId: _compoundId, name: _name, ...fields } = row.record;
-      return { ...fields, compoundId: compounds[index].id };
-    });
-    const hashes = contents.map(recordContentHash);
-    const stored = await storedHashes([...new Set(hashes)], transaction);
+    const stored = await storedHashes([...new Set(good.flatMap((row, index) => contentHashes(row, compounds[index].id)))], transaction);
     const fresh: RecordContent[] = [];
-    for (const [index, content] of contents.entries()) {
-      if (stored.has(hashes[index])) continue;
-      stored.add(hashes[index]);
-      fresh.push(content);
+    for (const [index, row] of good.entries()) {
+      const hashes = contentHashes(row, compounds[index].id);
+      if (hashes.some((hash) => stored.has(hash))) continue;
+      for (const hash of hashes) stored.add(hash);
+      fresh.push(contentOf(row, compounds[index].id));
     }
     await insertRecords(fresh, { authorId: importRow.userId, transaction, importId: importRow.id, action: 'import' });
     const rejectedRows = rows.filter((row): row is Extract<PreparedRow, { ok: false }> => !row.ok);

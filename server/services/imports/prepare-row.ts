@@ -1,13 +1,14 @@
 import type { RecordInputParsed } from '../../../shared/schemas/record';
 import { cleanMessage, StructureError } from '../../chem/errors';
 import { analyseStructure, type StructureAnalysis } from '../compound-analysis';
+import { recordContentHash, type RecordContent } from '../record-columns';
 import { MappedRow, readRow, type ImportFormat } from './read-row';
 import type { SourceRow } from './source';
 import { validateRow } from './validate-row';
 
 /** A row read, validated and its structure analysed, before the batch decides whether it is new. */
 export type PreparedRow =
-  | { source: SourceRow; ok: true; record: RecordInputParsed & { structure: string }; analysis: StructureAnalysis; notes: string[] }
+  | { source: SourceRow; ok: true; record: RecordInputParsed & { structure: string }; analysis: StructureAnalysis; notes: string[]; plainNotes?: string | null }
   | { source: SourceRow; ok: false; reason: string; notes: string[] };
 
 /**
@@ -50,5 +51,24 @@ export function prepareRow(source: SourceRow, mapping: Record<string, string>, f
   if (problems.length > 0 || !validation?.ok || !analysis || analysis instanceof Error) {
     return { source, ok: false, reason: [...new Set(problems)].join(' '), notes };
   }
-  return { source, ok: true, record: { ...validation.record, structure: text }, analysis, notes };
+  const plain = reading.ok && 'plainNotes' in reading ? { plainNotes: reading.plainNotes } : {};
+  return { source, ok: true, record: { ...validation.record, structure: text }, analysis, notes, ...plain };
+}
+
+export type AcceptedRow = Extract<PreparedRow, { ok: true }>;
+
+/** The record content of an accepted row once its compound is known. */
+export function contentOf(row: AcceptedRow, compoundId: number): RecordContent {
+  const { structure: _structure, compoundId: _compoundId, name: _name, ...fields } = row.record;
+  return { ...fields, compoundId };
+}
+
+/**
+ * The content hashes under which a row counts as already stored: its own, and — when the import added date
+ * or author lines to its notes — the one without them, so a re-imported export adds nothing.
+ */
+export function contentHashes(row: AcceptedRow, compoundId: number): string[] {
+  const content = contentOf(row, compoundId);
+  const own = recordContentHash(content);
+  return row.plainNotes === undefined ? [own] : [own, recordContentHash({ ...content, notes: row.plainNotes })];
 }

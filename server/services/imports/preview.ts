@@ -1,9 +1,8 @@
 import { stationaryPhaseByKey } from '../../../shared/catalogue/stationary-phases';
 import { formatEluent } from '../../../shared/domain/eluent-notation';
 import type { ImportPreview, ImportRowResult } from '../../../shared/schemas/import';
-import { recordContentHash } from '../record-columns';
 import { formatOf, mappingFor, openUpload } from './open-upload';
-import { prepareRow, StructureCache, type PreparedRow } from './prepare-row';
+import { contentHashes, prepareRow, StructureCache, type PreparedRow } from './prepare-row';
 import { storedCompoundIds, storedHashes } from './stored-keys';
 
 /** The result a committed import would give each prepared row, reading the database and writing nothing. */
@@ -11,21 +10,20 @@ async function resultsOf(rows: PreparedRow[]): Promise<ImportRowResult[]> {
   const good = rows.flatMap((row) => (row.ok ? [row] : []));
   const compoundIds = await storedCompoundIds([...new Set(good.map((row) => row.analysis.idcode))]);
   const provisional = new Map<string, number>();
-  const hashOf = new Map<PreparedRow, string>();
+  const hashesOf = new Map<PreparedRow, string[]>();
   for (const row of good) {
     const { idcode } = row.analysis;
     const compoundId = compoundIds.get(idcode) ?? provisional.get(idcode) ?? -(provisional.size + 1);
     if (!compoundIds.has(idcode)) provisional.set(idcode, compoundId);
-    const { structure: _structure, compoundId: _id, name: _name, ...fields } = row.record;
-    hashOf.set(row, recordContentHash({ ...fields, compoundId }));
+    hashesOf.set(row, contentHashes(row, compoundId));
   }
-  const seen = await storedHashes([...new Set(hashOf.values())].filter((hash) => hash));
+  const seen = await storedHashes([...new Set([...hashesOf.values()].flat())]);
   return rows.map((row) => {
     const base = { row: row.source.row, line: row.source.line, notes: row.notes, values: row.source.values };
     if (!row.ok) return { ...base, result: 'rejected', reason: row.reason, record: null };
-    const hash = hashOf.get(row) as string;
-    const duplicate = seen.has(hash);
-    seen.add(hash);
+    const hashes = hashesOf.get(row) as string[];
+    const duplicate = hashes.some((hash) => seen.has(hash));
+    for (const hash of hashes) seen.add(hash);
     return {
       ...base,
       result: duplicate ? 'duplicate' : 'accepted',

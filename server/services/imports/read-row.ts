@@ -7,7 +7,11 @@ import type { SourceRow } from './source';
 export type ImportFormat = 'csv' | 'sdf' | 'open-tlc';
 
 /** A row turned into a record body (still to be validated like a contributed record), with what was assumed. */
-export type RowReading = { ok: true; input: RecordInput; notes: string[] } | { ok: false; reason: string };
+/**
+ * `plainNotes` is the notes text without the date and author lines the import adds (undefined when it added
+ * none): a row that matches a stored record apart from those lines — as a re-imported export does — is a duplicate.
+ */
+export type RowReading = { ok: true; input: RecordInput; notes: string[]; plainNotes?: string | null } | { ok: false; reason: string };
 
 /** Rf the open TLC dataset reports at or below 0 (spot on the origin) is stored as this smallest readable Rf. */
 export const OPEN_TLC_MIN_RF = 0.001;
@@ -108,11 +112,14 @@ function readColumn(row: MappedRow): RecordInput['column'] {
   return Object.values(column).some((value) => value !== null) ? column : null;
 }
 
-function readNotes(row: MappedRow): string | null {
-  const lines = [row.cell('notes')];
-  if (row.cell('date')) lines.push(`Date (from the import): ${row.cell('date')}`);
-  if (row.cell('author')) lines.push(`Original author (from the import): ${row.cell('author')}`);
-  return lines.filter(Boolean).join('\n') || null;
+function readNotes(row: MappedRow): { notes: string | null; plainNotes?: string | null } {
+  const plain = row.cell('notes') || null;
+  const provenance = [
+    row.cell('date') ? `Date (from the import): ${row.cell('date')}` : '',
+    row.cell('author') ? `Original author (from the import): ${row.cell('author')}` : '',
+  ].filter(Boolean);
+  if (provenance.length === 0) return { notes: plain };
+  return { notes: [plain, ...provenance].filter(Boolean).join('\n'), plainNotes: plain };
 }
 
 /**
@@ -141,6 +148,7 @@ export function readRow(source: SourceRow, mapping: Record<string, string>, form
       notes.push('No outcome given: recorded as clean.');
     }
     const phase = row.cell('phase');
+    const notesText = readNotes(row);
     if (!phase) notes.push('No stationary phase given: silica gel assumed.');
     const input: RecordInput = {
       structure,
@@ -154,9 +162,9 @@ export function readRow(source: SourceRow, mapping: Record<string, string>, form
       outcomeReason: row.cell('outcomeReason') || null,
       column,
       notebookRef: row.cell('notebook') || null,
-      notes: readNotes(row),
+      notes: notesText.notes,
     };
-    return { ok: true, input, notes };
+    return { ok: true, input, notes, ...('plainNotes' in notesText ? { plainNotes: notesText.plainNotes } : {}) };
   } catch (error) {
     if (error instanceof RowProblem) return { ok: false, reason: error.message };
     throw error;

@@ -81,6 +81,15 @@ describe('FingerprintIndex', () => {
     expect(index.topK(fingerprints[7], 50, 0.6).every((hit) => hit.similarity >= 0.6)).toBe(true);
   });
 
+  it('gives the same k best scores as ranking every entry (the bit-count bound only skips losers)', () => {
+    const index = indexOfSet();
+    for (const query of [0, 9, 17, 33, 50]) {
+      const all = index.topK(fingerprints[query], SET.length).map((hit) => hit.similarity);
+      expect(index.topK(fingerprints[query], 7).map((hit) => hit.similarity)).toEqual(all.slice(0, 7));
+      expect(index.topK(fingerprints[query], 50, 0.4).map((hit) => hit.similarity)).toEqual(all.filter((score) => score >= 0.4));
+    }
+  });
+
   it('forgets removed entries and keeps the others findable after the swap', () => {
     const index = indexOfSet();
     expect(index.remove(0)).toBe(true);

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { flexRender, getCoreRowModel, useReactTable, type SortingState, type VisibilityState } from '@tanstack/react-table';
 import type { RecordListItem } from '../../../../shared/schemas/record';
 import { recordColumns } from './record-columns';
@@ -8,10 +9,12 @@ interface RecordsTableProps {
   sort: string;
   order: 'asc' | 'desc';
   onSort: (sortKey: string, order: 'asc' | 'desc') => void;
+  /** A control shown first in each row (the page passes the bookmark star). */
+  action?: (record: RecordListItem) => ReactNode;
 }
 
 /** The records as a table; sorting is done by the server (manualSorting) and asked for through onSort. */
-export function RecordsTable({ records, visible, sort, order, onSort }: RecordsTableProps) {
+export function RecordsTable({ records, visible, sort, order, onSort, action }: RecordsTableProps) {
   const sortedColumn = recordColumns.find((column) => column.meta.sortKey === sort)?.id;
   const sorting: SortingState = sortedColumn ? [{ id: sortedColumn, desc: order === 'desc' }] : [];
   const columnVisibility: VisibilityState = Object.fromEntries(recordColumns.map((column) => [column.id, visible.includes(column.id)]));
@@ -31,6 +34,7 @@ export function RecordsTable({ records, visible, sort, order, onSort }: RecordsT
         <thead className="border-b border-line bg-plate text-left text-xs text-ink-soft">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
+              {action && <th scope="col" className="w-10 px-2 py-2"><span className="sr-only">Bookmark</span></th>}
               {group.headers.map((header) => {
                 const meta = (header.column.columnDef as (typeof recordColumns)[number]).meta;
                 const active = meta.sortKey === sort;
@@ -54,6 +58,7 @@ export function RecordsTable({ records, visible, sort, order, onSort }: RecordsT
         <tbody>
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className="border-b border-line/70 align-middle last:border-0 hover:bg-plate/60">
+              {action && <td className="px-2 py-2">{action(row.original)}</td>}
               {row.getVisibleCells().map((cell) => <td key={cell.id} className="px-3 py-2">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>)}
             </tr>
           ))}

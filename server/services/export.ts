@@ -1,0 +1,17 @@
+import type { ExportQueryParsed } from '../../shared/schemas/search';
+import type { LoadedRecord } from '../presenters/records';
+import { loadListRecords } from './record-queries';
+import { rankedMatches } from './search/search';
+
+/** Most records one export holds; the answer says when the search matched more (header X-Export-Truncated). */
+export const EXPORT_LIMIT = 10_000;
+const CHUNK = 500;
+
+/** The records of a search (same filters and order as the search page), loaded in chunks for the export writers. */
+export async function recordsToExport(query: ExportQueryParsed): Promise<{ records: LoadedRecord[]; total: number }> {
+  const { rows } = await rankedMatches(query);
+  const ids = rows.slice(0, EXPORT_LIMIT).map((row) => row.id);
+  const records: LoadedRecord[] = [];
+  for (let start = 0; start < ids.length; start += CHUNK) records.push(...(await loadListRecords(ids.slice(start, start + CHUNK))).records);
+  return { records, total: rows.length };
+}

@@ -1,0 +1,89 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Op } from 'sequelize';
+import { createApp } from '../../server/app';
+import { Compound, ConditionRecord, ImportRow } from '../../server/models';
+import { importEvents } from '../../server/services/imports/commit-batch';
+import { agentFor, type Agent } from '../helpers/agent';
+import { runTag, settled, upload } from '../helpers/imports';
+import { startPostgres, stopPostgres } from '../helpers/pg-control';
+
+const { app, close } = createApp();
+let curator: Agent;
+const tag = runTag();
+
+/** n-alkyl chains CnH2n+1–OH, n = 30…: a homologous series no other test file uses. */
+const alcohol = (carbons: number) => `${'C'.repeat(carbons)}O`;
+const ROWS = 1000;
+
+/**
+ * 1,000 rows (five batches of 200): rows 1–400 use alcohols C30–C39, rows 401–600 (batch 3) also C40–C44,
+ * which appear nowhere else, rows 601–1000 C30–C39 again; every 50th row has an Rf above 1.
+ */
+function historyFile(): string {
+  const lines = ['name,smiles,eluent,rf,notes'];
+  for (let row = 1; row <= ROWS; row++) {
+    const carbons = row > 400 && row <= 600 && row % 2 === 0 ? 40 + (row % 5) : 30 + (row % 10);
+    const rf = row % 50 === 0 ? '1.5' : (0.1 + (row % 80) / 100).toFixed(2);
+    lines.push(`C${carbons} alcohol,${alcohol(carbons)},EtOAc/hexanes 1:${1 + (row % 7)},${rf},${tag} row ${row}`);
+  }
+  return lines.join('\n');
+}
+
+beforeAll(async () => {
+  curator = await agentFor(app, 'curator');
+});
+afterAll(close);
+
+describe('when PostgreSQL stops in the middle of an import', () => {
+  it('leaves nothing of the failed batch, says where it stopped, and a resume completes it with the right counts', async () => {
+    let stoppedIn = 0;
+    let stopped = false;
+    // Inside batch 3's transaction, after its compounds, records and rejected rows are written, before it commits.
+    const stopInThirdBatch = ({ importId: id, batch }: { importId: number; batch: number }) => {
+      if (batch !== 3 || stopped) return;
+      stopPostgres();
+      stopped = true;
+      stoppedIn = id;
+    };
+    let importId = 0;
+    importEvents.on('writing', stopInThirdBatch);
+    try {
+      const res = await upload(curator, historyFile(), { query: 'wait=0', name: 'long-history.csv' });
+      expect(res.status).toBe(202);
+      importId = res.body.id;
+      await waitUntil(() => stopped);
+      await sleep(1_000);
+    } finally {
+      importEvents.off('writing', stopInThirdBatch);
+      if (stopped) startPostgres();
+    }
+
+    expect(stoppedIn).toBe(importId);
+    const failed = await settled(curator, importId);
+    expect(failed).toMatchObject({ status: 'failed', total: ROWS, processed: 400, lastCommittedRow: 400, batchesCommitted: 2, rejected: 8 });
+    expect(failed.error).toBe('The database became unavailable.');
+    expect(failed.accepted + failed.rejected + failed.duplicates).toBe(400);
+    expect(await ConditionRecord.count({ where: { importId } })).toBe(failed.accepted);
+    expect(await ImportRow.count({ where: { importId, rowNumber: { [Op.gt]: 400 } } })).toBe(0);
+    // C40–C44 alcohols appear only in the failed batch: not one of them was left behind.
+    expect(await Compound.count({ where: { inputStructure: [40, 41, 42, 43, 44].map(alcohol) } })).toBe(0);
+
+    const resumed = await curator.post(`/api/imports/${importId}/resume`).set('X-CSRF-Token', curator.csrf);
+    expect(resumed.status).toBe(202);
+    const done = await settled(curator, importId);
+    expect(done).toMatchObject({ status: 'completed', total: ROWS, processed: ROWS, rejected: 20, duplicates: 0, accepted: ROWS - 20, batchesCommitted: 5 });
+    expect(await ConditionRecord.count({ where: { importId } })).toBe(ROWS - 20);
+    expect(await ConditionRecord.count({ where: { notes: { [Op.like]: `${tag} row %` } } })).toBe(ROWS - 20);
+    expect(await Compound.count({ where: { inputStructure: [40, 41, 42, 43, 44].map(alcohol) } })).toBe(5);
+  });
+});
+
+const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+async function waitUntil(condition: () => boolean, timeoutMs = 30_000) {
+  const deadline = Date.now() + timeoutMs;
+  while (!condition()) {
+    if (Date.now() > deadline) throw new Error('condition not met in time');
+    await sleep(50);
+  }
+}
