@@ -16,6 +16,7 @@ const AcceptInvitationPage = lazy(() => import('./routes/accept-invitation'));
 const PasswordResetRequestPage = lazy(() => import('./routes/password-reset-request'));
 const PasswordResetPage = lazy(() => import('./routes/password-reset'));
 const CurationPage = lazy(() => import('./routes/curation'));
+const ImportsPage = lazy(() => import('./routes/imports'));
 const CurationMergePage = lazy(() => import('./routes/curation-merge'));
 const RecordsPage = lazy(() => import('./routes/records'));
 const RecordPage = lazy(() => import('./routes/record'));
@@ -54,7 +55,7 @@ export const router = createBrowserRouter([
       { path: 'bookmarks', element: <RequireRole least="viewer">{page(<BookmarksPage />)}</RequireRole> },
       { path: 'curation', element: <RequireRole least="curator">{page(<CurationPage />)}</RequireRole> },
       { path: 'curation/merge', element: <RequireRole least="curator">{page(<CurationMergePage />)}</RequireRole> },
-      { path: 'imports', element: <RequireRole least="curator">{page(<ComingPage title="Import" issue={9} />)}</RequireRole> },
+      { path: 'imports', element: <RequireRole least="curator">{page(<ImportsPage />)}</RequireRole> },
       { path: 'account', element: <RequireRole least="viewer">{page(<AccountPage />)}</RequireRole> },
       { path: 'admin/users', element: <RequireRole least="admin">{page(<AdminUsersPage />)}</RequireRole> },
       { path: 'admin/mailbox', element: <RequireRole least="admin">{page(<AdminMailboxPage />)}</RequireRole> },

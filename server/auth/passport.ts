@@ -3,6 +3,7 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { User } from '../models';
 import { dummyHash, verifyPassword } from './passwords';
+import { sessionUserRow } from './user-cache';
 import type { SessionUser } from '../../shared/schemas/auth';
 
 declare global {
@@ -33,10 +34,13 @@ passport.use(
 
 passport.serializeUser((user, done) => done(null, user.id));
 
-/** A session is honoured only for an active user who signed in after their sessions were last ended. */
+/**
+ * A session is honoured only for an active user who signed in after their sessions were last ended. The user
+ * row comes from a short-lived cache (auth/user-cache.ts), so a signed-in read costs no extra query.
+ */
 passport.deserializeUser<number, IncomingMessage>(async (req, id, done) => {
   try {
-    const user = await User.findByPk(id);
+    const user = await sessionUserRow(id);
     const signedInAt = (req as { session?: { signedInAt?: number } }).session?.signedInAt ?? 0;
     const current = user && user.status === 'active' && signedInAt >= user.sessionsValidAfter.getTime();
     done(null, current ? toSessionUser(user) : false);
@@ -45,7 +49,7 @@ passport.deserializeUser<number, IncomingMessage>(async (req, id, done) => {
   }
 });
 
-export function toSessionUser(user: User): SessionUser {
+export function toSessionUser(user: Pick<User, 'id' | 'email' | 'name' | 'role'>): SessionUser {
   return { id: user.id, email: user.email, name: user.name, role: user.role };
 }
 

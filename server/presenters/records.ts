@@ -1,3 +1,4 @@
+import type { InferAttributes } from 'sequelize';
 import type { Compound, ConditionRecord, RecordContributor, RecordPhoto, RecordSpot, RecordVisualisation, User } from '../models';
 import type { RecordDto, RecordListItem, PhotoDto } from '../../shared/schemas/record';
 import { stationaryPhaseByKey } from '../../shared/catalogue/stationary-phases';
@@ -5,17 +6,21 @@ import { stainByKey } from '../../shared/catalogue/stains';
 import { eluentSummary } from '../../shared/domain/eluent-summary';
 import { columnOf } from '../services/record-revisions';
 
-/** A record row with the associations the presenters read (loaded by services/record-queries). */
-export type LoadedRecord = ConditionRecord & {
-  compound: Compound;
-  author: User;
-  spots: RecordSpot[];
-  visualisations: RecordVisualisation[];
+type Person = Pick<User, 'id' | 'name'>;
+
+/** A record row (plain values) with the associations the presenters read (loaded by services/record-queries). */
+export type LoadedRecord = InferAttributes<ConditionRecord> & {
+  compound: Omit<InferAttributes<Compound>, 'fingerprint'>;
+  author: Person;
+  spots: InferAttributes<RecordSpot>[];
+  visualisations: InferAttributes<RecordVisualisation>[];
 };
 
+type PhotoRow = InferAttributes<RecordPhoto> & { uploader?: Person };
+
 export type FullRecord = LoadedRecord & {
-  photos: (RecordPhoto & { uploader?: User })[];
-  contributors: (RecordContributor & { user: User })[];
+  photos: PhotoRow[];
+  contributors: (InferAttributes<RecordContributor> & { user: Person })[];
 };
 
 const iso = (date: Date | null) => (date ? new Date(date).toISOString() : null);
@@ -30,7 +35,7 @@ export function visualisationLabel(method: string, note: string | null): string 
   return stainByKey(method)?.label ?? method;
 }
 
-export function presentPhoto(photo: RecordPhoto & { uploader?: User }, uploaderName = photo.uploader?.name ?? 'unknown'): PhotoDto {
+export function presentPhoto(photo: PhotoRow, uploaderName = photo.uploader?.name ?? 'unknown'): PhotoDto {
   return {
     id: photo.id,
     contentType: photo.contentType,

@@ -1,44 +1,41 @@
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Compound, ConditionRecord, RecordContributor, RecordPhoto, RecordSpot, RecordVisualisation, User } from '../models';
+import { RecordContributor, RecordPhoto } from '../models';
 import { NotFoundError } from '../errors';
 import type { RecordListQueryParsed } from '../../shared/schemas/record';
 import type { FullRecord, LoadedRecord } from '../presenters/records';
 import { recordFilterSql } from './record-filters';
-
-const listIncludes = [
-  { model: Compound, as: 'compound' },
-  { model: User, as: 'author', attributes: ['id', 'name'] },
-  { model: RecordSpot, as: 'spots' },
-  { model: RecordVisualisation, as: 'visualisations' },
-];
+import { listRowsSql, nest, selectColumns } from './record-rows-sql';
 
 /** A record with everything its page shows; 404 when there is none with this id. */
 export async function loadFullRecord(id: number): Promise<FullRecord> {
-  const record = await ConditionRecord.findByPk(id, {
-    include: [
-      ...listIncludes,
-      { model: RecordPhoto, as: 'photos', include: [{ model: User, as: 'uploader', attributes: ['id', 'name'] }] },
-      { model: RecordContributor, as: 'contributors', include: [{ model: User, as: 'user', attributes: ['id', 'name'] }] },
-    ],
-  });
-  if (!record) throw new NotFoundError('Record');
-  return record as FullRecord;
+  const [{ records }, photos, contributors] = await Promise.all([
+    loadListRecords([id]),
+    sequelize.query<FullRecord['photos'][number]>(
+      `SELECT ${selectColumns(RecordPhoto, 'p')}, u.id AS "uploader.id", u.name AS "uploader.name"
+       FROM record_photos p LEFT JOIN users u ON u.id = p.uploaded_by WHERE p.record_id = :id ORDER BY p.id`,
+      { replacements: { id }, type: QueryTypes.SELECT },
+    ),
+    sequelize.query<FullRecord['contributors'][number]>(
+      `SELECT ${selectColumns(RecordContributor, 'rc')}, u.id AS "user.id", u.name AS "user.name"
+       FROM record_contributors rc JOIN users u ON u.id = rc.user_id WHERE rc.record_id = :id ORDER BY rc.id`,
+      { replacements: { id }, type: QueryTypes.SELECT },
+    ),
+  ]);
+  if (records.length === 0) throw new NotFoundError('Record');
+  return { ...records[0], photos: photos.map(nest), contributors: contributors.map(nest) } as FullRecord;
 }
 
-/** Records by id, in the order given, with what a list row shows, and their photo counts. */
+/**
+ * Records by id, in the order given, with what a list row shows, and their photo counts: one query of plain
+ * rows (services/record-rows-sql.ts) rather than model instances joined row by row.
+ */
 export async function loadListRecords(ids: number[]): Promise<{ records: LoadedRecord[]; photoCounts: Map<number, number> }> {
   if (ids.length === 0) return { records: [], photoCounts: new Map() };
-  const rows = (await ConditionRecord.findAll({ where: { id: ids }, include: listIncludes })) as LoadedRecord[];
-  const counts = await sequelize.query<{ record_id: number; n: string }>(
-    'SELECT record_id, count(*) AS n FROM record_photos WHERE record_id IN (:ids) AND removed_at IS NULL GROUP BY record_id',
-    { replacements: { ids }, type: QueryTypes.SELECT },
-  );
-  const byId = new Map(rows.map((row) => [row.id, row]));
-  return {
-    records: ids.map((id) => byId.get(id)).filter((row): row is LoadedRecord => row !== undefined),
-    photoCounts: new Map(counts.map((row) => [row.record_id, Number(row.n)])),
-  };
+  const rows = await sequelize.query<Record<string, unknown>>(listRowsSql, { replacements: { ids }, type: QueryTypes.SELECT });
+  const byId = new Map(rows.map((row) => [row.id as number, nest(row) as LoadedRecord & { photoCount: number }]));
+  const records = ids.map((id) => byId.get(id)).filter((row): row is LoadedRecord & { photoCount: number } => row !== undefined);
+  return { records, photoCounts: new Map(records.map((record) => [record.id, record.photoCount])) };
 }
 
 const sortSql: Record<RecordListQueryParsed['sort'], string> = {

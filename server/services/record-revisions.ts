@@ -28,7 +28,7 @@ const columnAttribute = {
 export { columnAttribute };
 
 /** The column details of a record row, or null when none was recorded. */
-export function columnOf(record: ConditionRecord): Record<(typeof columnFields)[number], unknown> | null {
+export function columnOf(record: Pick<ConditionRecord, (typeof columnAttribute)[keyof typeof columnAttribute]>): Record<(typeof columnFields)[number], unknown> | null {
   const column = Object.fromEntries(columnFields.map((field) => [field, record[columnAttribute[field]] ?? null])) as Record<(typeof columnFields)[number], unknown>;
   return Object.values(column).every((value) => value === null) ? null : column;
 }

@@ -1,6 +1,7 @@
 import { NavLink, Outlet, Link } from 'react-router-dom';
 import { Wordmark } from './wordmark';
 import { AccountMenu } from './account-menu';
+import { Toaster } from './ui/toast';
 import { useMe } from '../features/auth/api/session';
 import { roleAtLeast, type Role } from '../../shared/schemas/auth';
 
@@ -60,6 +61,7 @@ export function AppLayout() {
           </Link>
         </div>
       </footer>
+      <Toaster />
     </div>
   );
 }

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
+import { Link, useLocation } from 'react-router-dom';
 import type { SearchCompoundHit, SearchRecordHit } from '../../shared/schemas/search';
 import { buttonClass, Button } from '../components/ui/button';
 import { EmptyState } from '../components/ui/empty-state';
@@ -37,6 +37,7 @@ function CopyLink() {
 /** Search: words, a similar structure or a substructure, with filters; results as a table of records or a grid of compounds. */
 export default function SearchPage() {
   const { state, update } = useSearchUrl();
+  const location = useLocation();
   const ready = state.mode === 'text' || !!state.structure;
   const search = useSearch(searchApiParams(state).toString(), ready);
   const result = search.data;
@@ -73,7 +74,7 @@ export default function SearchPage() {
               remove a filter, or switch between similar and substructure. If nobody has purified it yet, record it when you do.
             </EmptyState>
           ) : result ? (
-            <div className={search.isPlaceholderData ? 'opacity-60 transition-opacity' : ''}>
+            <div role="region" aria-label="Search results" aria-busy={search.isFetching} data-location={location.search} className={search.isPlaceholderData ? 'opacity-60 transition-opacity' : ''}>
               {state.view === 'records' ? <ResultsTable hits={records} action={recordStar} /> : <ResultsGrid hits={compounds} action={compoundStar} />}
               <div className="mt-3">
                 <Pager page={state.page} pageSize={state.pageSize} total={result.total} onPage={(page) => update({ page }, false)} onPageSize={(pageSize) => update({ pageSize })} />

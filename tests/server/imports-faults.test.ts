@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Op } from 'sequelize';
 import { createApp } from '../../server/app';
-import { Compound, ConditionRecord, ImportRow } from '../../server/models';
+import { Compound, ConditionRecord, Import, ImportRow } from '../../server/models';
 import { importEvents } from '../../server/services/imports/commit-batch';
 import { agentFor, type Agent } from '../helpers/agent';
 import { runTag, settled, upload } from '../helpers/imports';
@@ -75,6 +75,23 @@ describe('when PostgreSQL stops in the middle of an import', () => {
     expect(await ConditionRecord.count({ where: { importId } })).toBe(ROWS - 20);
     expect(await ConditionRecord.count({ where: { notes: { [Op.like]: `${tag} row %` } } })).toBe(ROWS - 20);
     expect(await Compound.count({ where: { inputStructure: [40, 41, 42, 43, 44].map(alcohol) } })).toBe(5);
+  });
+});
+
+describe('when the server process running an import ends', () => {
+  it('reports the import failed once it has been silent for two minutes, and a resume finishes it', async () => {
+    const csv = `smiles,eluent,rf,notes\n${alcohol(29)},EtOAc/hexanes 1:5,0.3,${tag} stalled 1\n${alcohol(29)},EtOAc/hexanes 1:6,0.35,${tag} stalled 2\n`;
+    const res = await upload(curator, csv, { name: 'stalled.csv' });
+    const done = await settled(curator, res.body.id);
+    // As a process that died after its first batch leaves it: still "running", last heartbeat three minutes ago.
+    await Import.update({ status: 'running', finishedAt: null, heartbeatAt: new Date(Date.now() - 3 * 60_000) }, { where: { id: done.id } });
+    const seen = await curator.get(`/api/imports/${done.id}`);
+    expect(seen.body).toMatchObject({ status: 'failed', error: 'The import stopped without finishing (its server process ended).' });
+    const resumed = await curator.post(`/api/imports/${done.id}/resume`).set('X-CSRF-Token', curator.csrf);
+    expect(resumed.status).toBe(202);
+    expect(await settled(curator, done.id)).toMatchObject({ status: 'completed', processed: 2, accepted: 2 });
+    const again = await curator.post(`/api/imports/${done.id}/resume`).set('X-CSRF-Token', curator.csrf);
+    expect(again.status).toBe(409);
   });
 });
 

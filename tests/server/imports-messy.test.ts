@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Op } from 'sequelize';
 import { createApp } from '../../server/app';
-import { ConditionRecord, Import, ImportRow } from '../../server/models';
+import { ConditionRecord, Import, ImportRow, RecordRevision } from '../../server/models';
+import { loadRecordState } from '../../server/services/record-revisions';
 import { importDtoSchema, importPreviewSchema } from '../../shared/schemas/import';
 import { agentFor, type Agent } from '../helpers/agent';
 import { csvRows, importFile, runTag, upload } from '../helpers/imports';
@@ -122,6 +123,9 @@ describe('DELETE /api/imports/:id', () => {
     expect(record.body.status).toBe('retired');
     const history = await curator.get(`/api/records/${retired[0].id}/history`);
     expect(history.body.revisions.map((revision: { action: string; number: number }) => [revision.number, revision.action])).toEqual([[2, 'retire'], [1, 'import']]);
+    // The retire revision's snapshot is the record as the records service reads it back.
+    const retireRevision = await RecordRevision.findOne({ where: { recordId: retired[0].id, number: 2 }, rejectOnEmpty: true });
+    expect(retireRevision.snapshot).toEqual(JSON.parse(JSON.stringify(await loadRecordState(retired[0].id))));
     expect(await taggedRecords()).toBe(7);
     const again = await curator.delete(`/api/imports/${firstImportId}`).set('X-CSRF-Token', curator.csrf);
     expect(again.status).toBe(409);

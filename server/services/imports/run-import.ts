@@ -14,6 +14,9 @@ const running = new Map<number, Promise<void>>();
 /** True while this process runs the import. */
 export const isRunningHere = (importId: number) => running.has(importId);
 
+/** Rows prepared between two turns of the event loop, so the previous batch's commit proceeds meanwhile. */
+const YIELD_EVERY = 20;
+
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
 /** A connection that took too long to open or to be handed out: the database is busy, not gone. */
@@ -77,9 +80,15 @@ async function execute(importId: number): Promise<void> {
     importEvents.emit('batch', { importId, batch: batch.number, lastRow: batch.rows[batch.rows.length - 1].source.row });
   };
   const step = async (rows: SourceRow[]) => {
-    const prepared = rows.map((row) => prepareRow(row, importRow.mapping, importRow.format, structures));
+    const committing = pending ? commit(pending) : null;
+    committing?.catch(() => undefined);
+    const prepared: PreparedRow[] = [];
+    for (const row of rows) {
+      prepared.push(prepareRow(row, importRow.mapping, importRow.format, structures));
+      if (prepared.length % YIELD_EVERY === 0) await new Promise((resolve) => setImmediate(resolve));
+    }
     await patiently(() => ahead.start(prepared));
-    if (pending) await commit(pending);
+    await committing;
     pending = { rows: prepared, number: ++batchNumber };
   };
   let buffer: SourceRow[] = [];
@@ -97,7 +106,8 @@ async function execute(importId: number): Promise<void> {
 
 /**
  * Runs (or resumes, from the row after `lastCommittedRow`) an import in the background of this process.
- * Batches are prepared one ahead of the commit so fingerprints overlap parsing; each batch commits in
+ * Each batch is prepared while the previous one commits, and its new compounds' fingerprints are computed
+ * in worker threads meanwhile, so the database, the workers and this thread overlap; each batch commits in
  * its own transaction (commitBatch). A failure marks the import failed with the reason; it can be resumed.
  */
 export function runImport(importId: number): Promise<void> {

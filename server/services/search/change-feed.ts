@@ -24,6 +24,8 @@ export class ChangeFeed {
   private delayMs = 250;
   private stopped = false;
   private connectedOnce = false;
+  /** Failed attempts since the feed last listened (only the first is logged as a warning). */
+  private failures = 0;
 
   constructor(private readonly url: string, private readonly handlers: ChangeFeedHandlers) {}
 
@@ -71,6 +73,8 @@ export class ChangeFeed {
       return;
     }
     this.client = client;
+    if (this.failures > 0) logger.info({ attempts: this.failures }, 'search change feed listening again');
+    this.failures = 0;
     this.delayMs = 250;
     const reconnect = this.connectedOnce;
     this.connectedOnce = true;
@@ -83,7 +87,9 @@ export class ChangeFeed {
     this.client = null;
     client.end().catch(() => undefined);
     if (this.stopped) return;
-    logger.warn({ err: error?.message }, 'search change feed lost its connection; reconnecting');
+    this.failures += 1;
+    const level = this.failures === 1 ? 'warn' : 'debug';
+    logger[level]({ err: error?.message, attempt: this.failures }, 'search change feed has no connection; retrying');
     this.timer = setTimeout(() => {
       this.timer = null;
       void this.connect();

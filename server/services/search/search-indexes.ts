@@ -24,6 +24,8 @@ export class SearchIndexes {
   readonly text = new TextIndex();
   /** Wall-clock milliseconds the last full rebuild took. */
   rebuildMs = 0;
+  /** Settles when the last rebuild's search graphs are attached (substructure search is fastest from then on). */
+  graphsReady: Promise<void> = Promise.resolve();
   private reader: ChangeLogReader | null = null;
   private feed: ChangeFeed;
   private syncing: Promise<void> | null = null;
@@ -106,7 +108,9 @@ export class SearchIndexes {
     this.rebuildMs = performance.now() - started;
     logger.info({ compounds: this.structures.size, records: records.active.length, ms: Math.round(this.rebuildMs) }, 'search indexes built');
     const needGraphs = compounds.filter((compound) => compound.fingerprint).map(({ id, idcode }) => ({ id, idcode }));
-    void attachGraphsInBackground(this.structures, needGraphs, () => generation !== this.generation);
+    this.graphsReady = attachGraphsInBackground(this.structures, needGraphs, () => generation !== this.generation).catch((error) => {
+      logger.warn({ err: error }, 'search graphs could not be attached; substructure search falls back to SSSearcher');
+    });
   }
 
   private upsertStructure(compound: IndexedCompound, graph?: Uint8Array): void {

@@ -25,8 +25,8 @@ export function SolventPairs({ pairs }: { pairs: ClassDetail['solventPairs'] }) 
       <thead className="text-left text-xs text-ink-soft">
         <tr>
           <th scope="col" className="py-1 font-medium">Solvents</th>
-          <th scope="col" className="py-1 text-right font-medium">Records</th>
-          <th scope="col" className="py-1 text-right font-medium">% strong</th>
+          <th scope="col" className="px-2 py-1 text-right font-medium">Records</th>
+          <th scope="col" className="px-2 py-1 text-right font-medium">% strong</th>
           <th scope="col" className="py-1 pl-3 font-medium">Outcomes</th>
         </tr>
       </thead>
@@ -34,8 +34,8 @@ export function SolventPairs({ pairs }: { pairs: ClassDetail['solventPairs'] }) 
         {pairs.map((pair) => (
           <tr key={pair.solvents.join('+')} className="border-t border-line/70">
             <td className="py-1.5">{pair.labels.join(' / ')}</td>
-            <td className="figure py-1.5 text-right">{pair.records}</td>
-            <td className="figure py-1.5 text-right">{pair.strongPercent ? `${formatNumber(pair.strongPercent[0], 1)}–${formatNumber(pair.strongPercent[1], 1)}` : '—'}</td>
+            <td className="figure px-2 py-1.5 text-right">{pair.records}</td>
+            <td className="figure px-2 py-1.5 text-right">{pair.strongPercent ? `${formatNumber(pair.strongPercent[0], 1)}–${formatNumber(pair.strongPercent[1], 1)}` : '—'}</td>
             <td className="py-1.5 pl-3"><OutcomeBar outcomes={pair.outcomes} /></td>
           </tr>
         ))}

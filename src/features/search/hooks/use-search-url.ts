@@ -65,8 +65,9 @@ export function useSearchUrl() {
   const state = useMemo(() => searchStateOf(params), [params]);
   const update = useCallback(
     (changes: Record<string, string | number | null | undefined>, resetPage = true) => {
-      setParams((current) => {
-        const next = new URLSearchParams(current);
+      // From the address bar, not the render's copy: two quick changes (search, then a filter) must both stick.
+      setParams(() => {
+        const next = new URLSearchParams(window.location.search);
         for (const [key, value] of Object.entries(changes)) {
           if (value === null || value === undefined || value === '') next.delete(key);
           else next.set(key, String(value));

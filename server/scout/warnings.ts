@@ -1,0 +1,31 @@
+import type { ScoutModel } from './model';
+import type { SimilarCompound } from './neighbours';
+import { measurementNotation, two } from './format';
+
+export interface ScoutWarning {
+  recordId: number | null;
+  compoundId: number;
+  compoundName: string | null;
+  similarity: number;
+  outcome: 'partial' | 'failed';
+  notation: string;
+  message: string;
+}
+
+/** Failed and partial attempts of close neighbours, most similar first: failures are knowledge too. */
+export function failureWarnings(model: ScoutModel, close: readonly SimilarCompound[]): ScoutWarning[] {
+  return close.flatMap(({ index, similarity }) => {
+    const compound = model.compounds[index];
+    return model.measurementsOf[index]
+      .filter((measurement) => measurement.outcome !== 'clean')
+      .map((measurement) => {
+        const notation = measurementNotation(measurement);
+        const who = compound.name ?? compound.smiles;
+        const verdict = measurement.outcome === 'failed' ? 'Failed' : 'Only partly separated';
+        return {
+          recordId: measurement.recordId, compoundId: compound.id, compoundName: compound.name, similarity, outcome: measurement.outcome as 'partial' | 'failed', notation,
+          message: `${verdict} for ${who} (similarity ${two(similarity)}) in ${notation}${measurement.outcomeReason ? `: ${measurement.outcomeReason}` : '.'}`,
+        };
+      });
+  });
+}

@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { importDtoSchema } from '../../../../shared/schemas/import';
+import { changedByImports, importKeys } from './keys';
+
+/** DELETE /api/imports/:id: retires every record the import added (kept, reason "import N undone"). */
+export const undoImport = (id: number) => api(`/api/imports/${id}`, { method: 'DELETE' }, importDtoSchema);
+
+export function useUndoImport() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: undoImport,
+    onSuccess: (undone) => qc.setQueryData(importKeys.detail(undone.id), undone),
+    onSettled: () => Promise.all([importKeys.all, ...changedByImports].map((queryKey) => qc.invalidateQueries({ queryKey }))),
+  });
+}
