@@ -35,7 +35,8 @@ const recordFields = z.object({
 
 /** Structure text (SMILES or molfile) or an existing compound's id; the chemistry engine checks the size and content. */
 const compoundReference = {
-  structure: z.string().trim().min(1, 'Give a structure (SMILES or molfile).').max(200_000).optional(),
+  // Not trimmed: a molfile's first (title) line may be blank and is significant.
+  structure: z.string().max(200_000).refine((s) => s.trim().length > 0, 'Give a structure (SMILES or molfile).').optional(),
   compoundId: z.number().int().positive().optional(),
   /** The compound's name; kept as its name when it has none yet, otherwise added to its synonyms. */
   name: z.string().trim().min(1).max(200).optional(),

@@ -65,6 +65,18 @@ describe('POST /api/records', () => {
     expect(res.body.compound.id).toBe(first.body.compound.id);
   });
 
+  it('when the structure is a molfile with a blank title line, then it is read as drawn (not trimmed away)', async () => {
+    // MDL CTfile format: line 1 is the title and may be empty (common practice in drawn molfiles).
+    const molfile = ['', '  hand-written', '', '  3  2  0  0  0  0  0  0  0  0999 V2000',
+      '    0.0000    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
+      '    1.2990    0.7500    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
+      '    2.5981    0.0000    0.0000 O   0  0  0  0  0  0  0  0  0  0  0  0',
+      '  1  2  1  0  0  0  0', '  2  3  1  0  0  0  0', 'M  END'].join('\n');
+    const res = await member.post('/api/records').set('X-CSRF-Token', member.csrf).send({ ...exampleRecordBody(), structure: molfile });
+    expect(res.status).toBe(201);
+    expect(res.body.compound.formula).toBe('C2H6O');
+  });
+
   it('when the compoundId is unknown, then 422', async () => {
     const res = await member.post('/api/records').set('X-CSRF-Token', member.csrf).send({ ...exampleRecordBody(), structure: undefined, compoundId: 999_999_999 });
     expect(res.status).toBe(422);
