@@ -2,18 +2,20 @@ import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
 import pg from 'pg';
 import { env } from '../config/env';
+import { cacheSessionReads } from './session-cache';
 
 const PgStore = connectPgSimple(session);
 
 /**
  * Sessions live in PostgreSQL (table `sessions`, created by a migration) so app servers stay stateless.
  * The cookie is not rolling (it ends 14 days after sign-in), so the store's expiry is written when the session
- * is saved and never "touched" by reads: a signed-in read costs one session SELECT and no write.
+ * is saved and never "touched" by reads; reads are cached briefly (auth/session-cache.ts), so a signed-in read
+ * usually costs no session query at all.
  */
 export function sessionMiddleware() {
   const pool = new pg.Pool({ connectionString: env().DATABASE_URL, max: 5, connectionTimeoutMillis: 3_000 });
   pool.on('error', () => undefined);
-  const store = new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true });
+  const store = cacheSessionReads(new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true }));
   const production = env().NODE_ENV === 'production';
   return {
     pool,

@@ -10,11 +10,14 @@ type Person = Pick<User, 'id' | 'name'>;
 
 /** A record row (plain values) with the associations the presenters read (loaded by services/record-queries). */
 export type LoadedRecord = InferAttributes<ConditionRecord> & {
-  compound: Omit<InferAttributes<Compound>, 'fingerprint'>;
+  compound: Omit<InferAttributes<Compound>, 'fingerprint' | 'molfile'>;
   author: Person;
   spots: InferAttributes<RecordSpot>[];
   visualisations: InferAttributes<RecordVisualisation>[];
 };
+
+/** A record as the exports read it: with its compound's molfile. */
+export type ExportRecord = LoadedRecord & { compound: { molfile: string } };
 
 type PhotoRow = InferAttributes<RecordPhoto> & { uploader?: Person };
 

@@ -13,6 +13,8 @@ import { structuresRouter } from './structures';
 import { curationRouter } from './curation';
 import { recordCurationRouter } from './record-curation';
 import { importsRouter } from './imports';
+import { scoutRouter } from './scout';
+import { toolsRouter } from './tools';
 import { searchRouter } from './search';
 import { bookmarksRouter } from './bookmarks';
 import { classesRouter } from './classes';
@@ -35,6 +37,8 @@ export function apiRouter(): Router {
   api.use('/structures', structuresRouter);
   api.use('/curation', curationRouter);
   api.use('/imports', importsRouter);
+  api.use('/scout', scoutRouter);
+  api.use('/tools', toolsRouter);
   api.use('/search', searchRouter);
   api.use('/bookmarks', bookmarksRouter);
   api.use('/classes', classesRouter);

@@ -2,7 +2,7 @@ import { stringify } from 'csv-stringify/sync';
 import { additiveByKey } from '../../shared/catalogue/additives';
 import { formatEluent } from '../../shared/domain/eluent-summary';
 import { techniqueLabels } from '../../shared/schemas/record-parts';
-import { phaseLabel, visualisationLabel, type LoadedRecord } from '../presenters/records';
+import { phaseLabel, visualisationLabel, type ExportRecord, type LoadedRecord } from '../presenters/records';
 
 /**
  * Columns of an export, in order. Header names are ones the import's header detection reads
@@ -77,7 +77,7 @@ const sdValue = (value: string) => value.replace(/\r\n?/g, '\n').split('\n').fil
  * Records as an SD file (MDL CTfile format): each record's compound molfile (its name on the title line)
  * followed by the export columns as data items `> <name>`, empty ones left out, then `$$$$`.
  */
-export function toSdf(records: LoadedRecord[]): string {
+export function toSdf(records: ExportRecord[]): string {
   return records
     .map((record) => {
       const cells = exportCells(record);

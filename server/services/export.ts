@@ -1,5 +1,5 @@
 import type { ExportQueryParsed } from '../../shared/schemas/search';
-import type { LoadedRecord } from '../presenters/records';
+import type { ExportRecord } from '../presenters/records';
 import { loadListRecords } from './record-queries';
 import { rankedMatches } from './search/search';
 
@@ -8,10 +8,10 @@ export const EXPORT_LIMIT = 10_000;
 const CHUNK = 500;
 
 /** The records of a search (same filters and order as the search page), loaded in chunks for the export writers. */
-export async function recordsToExport(query: ExportQueryParsed): Promise<{ records: LoadedRecord[]; total: number }> {
+export async function recordsToExport(query: ExportQueryParsed): Promise<{ records: ExportRecord[]; total: number }> {
   const { rows } = await rankedMatches(query);
   const ids = rows.slice(0, EXPORT_LIMIT).map((row) => row.id);
-  const records: LoadedRecord[] = [];
-  for (let start = 0; start < ids.length; start += CHUNK) records.push(...(await loadListRecords(ids.slice(start, start + CHUNK))).records);
+  const records: ExportRecord[] = [];
+  for (let start = 0; start < ids.length; start += CHUNK) records.push(...(await loadListRecords(ids.slice(start, start + CHUNK), { withMolfile: true })).records);
   return { records, total: rows.length };
 }

@@ -3,7 +3,7 @@ import { sequelize } from '../db/sequelize';
 import { RecordContributor, RecordPhoto } from '../models';
 import { NotFoundError } from '../errors';
 import type { RecordListQueryParsed } from '../../shared/schemas/record';
-import type { FullRecord, LoadedRecord } from '../presenters/records';
+import type { ExportRecord, FullRecord, LoadedRecord } from '../presenters/records';
 import { recordFilterSql } from './record-filters';
 import { listRowsSql, nest, selectColumns } from './record-rows-sql';
 
@@ -26,15 +26,23 @@ export async function loadFullRecord(id: number): Promise<FullRecord> {
   return { ...records[0], photos: photos.map(nest), contributors: contributors.map(nest) } as FullRecord;
 }
 
+const rowsSql = { list: listRowsSql(false), export: listRowsSql(true) };
+
 /**
  * Records by id, in the order given, with what a list row shows, and their photo counts: one query of plain
- * rows (services/record-rows-sql.ts) rather than model instances joined row by row.
+ * rows (services/record-rows-sql.ts) rather than model instances joined row by row. `withMolfile` adds the
+ * compound's molfile (SD export).
  */
-export async function loadListRecords(ids: number[]): Promise<{ records: LoadedRecord[]; photoCounts: Map<number, number> }> {
+export async function loadListRecords<M extends boolean = false>(
+  ids: number[],
+  options: { withMolfile?: M } = {},
+): Promise<{ records: (M extends true ? ExportRecord : LoadedRecord)[]; photoCounts: Map<number, number> }> {
+  type Loaded = (M extends true ? ExportRecord : LoadedRecord) & { photoCount: number };
   if (ids.length === 0) return { records: [], photoCounts: new Map() };
-  const rows = await sequelize.query<Record<string, unknown>>(listRowsSql, { replacements: { ids }, type: QueryTypes.SELECT });
-  const byId = new Map(rows.map((row) => [row.id as number, nest(row) as LoadedRecord & { photoCount: number }]));
-  const records = ids.map((id) => byId.get(id)).filter((row): row is LoadedRecord & { photoCount: number } => row !== undefined);
+  const sql = options.withMolfile ? rowsSql.export : rowsSql.list;
+  const rows = await sequelize.query<Record<string, unknown>>(sql, { replacements: { ids }, type: QueryTypes.SELECT });
+  const byId = new Map(rows.map((row) => [row.id as number, nest(row) as Loaded]));
+  const records = ids.map((id) => byId.get(id)).filter((row): row is Loaded => row !== undefined);
   return { records, photoCounts: new Map(records.map((record) => [record.id, record.photoCount])) };
 }
 
@@ -51,18 +59,16 @@ const sortSql: Record<RecordListQueryParsed['sort'], string> = {
   author: 'lower(u.name)',
 };
 
-/** One page of record ids matching the filters, sorted on the server, with the total count. */
+/** One page of record ids matching the filters, sorted on the server, with the total count (one query; a second only past the end). */
 export async function listRecordIds(query: RecordListQueryParsed): Promise<{ ids: number[]; total: number }> {
   const { where, replacements } = recordFilterSql(query);
   const from = 'FROM condition_records r JOIN compounds c ON c.id = r.compound_id JOIN users u ON u.id = r.author_id';
   const direction = query.order === 'asc' ? 'ASC' : 'DESC';
-  const [{ total }] = await sequelize.query<{ total: string }>(`SELECT count(*) AS total ${from} WHERE ${where}`, {
-    replacements,
-    type: QueryTypes.SELECT,
-  });
-  const rows = await sequelize.query<{ id: number }>(
-    `SELECT r.id ${from} WHERE ${where} ORDER BY ${sortSql[query.sort]} ${direction} NULLS LAST, r.id ${direction} LIMIT :limit OFFSET :offset`,
+  const rows = await sequelize.query<{ id: number; total: string }>(
+    `SELECT r.id, count(*) OVER () AS total ${from} WHERE ${where} ORDER BY ${sortSql[query.sort]} ${direction} NULLS LAST, r.id ${direction} LIMIT :limit OFFSET :offset`,
     { replacements: { ...replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize }, type: QueryTypes.SELECT },
   );
-  return { ids: rows.map((row) => row.id), total: Number(total) };
+  if (rows.length > 0) return { ids: rows.map((row) => row.id), total: Number(rows[0].total) };
+  const [{ total }] = await sequelize.query<{ total: string }>(`SELECT count(*) AS total ${from} WHERE ${where}`, { replacements, type: QueryTypes.SELECT });
+  return { ids: [], total: Number(total) };
 }

@@ -24,9 +24,12 @@ function childArray(model: AnyModel, table: string): string {
   return `coalesce((SELECT json_agg(json_build_object(${pairs}) ORDER BY x.position, x.id) FROM ${table} x WHERE x.record_id = r.id), '[]'::json)`;
 }
 
-/** Everything a list row shows, one row per record: the record, its compound (no fingerprint), author, spots, stains, photo count. */
-export const listRowsSql = `SELECT ${selectColumns(ConditionRecord, 'r')},
-  ${selectColumns(Compound, 'c', 'compound.', ['fingerprint'])},
+/**
+ * Everything a list row shows, one row per record: the record, its compound (without fingerprint, and
+ * without molfile unless asked: exports need it, pages do not), author, spots, stains, photo count.
+ */
+export const listRowsSql = (withMolfile: boolean) => `SELECT ${selectColumns(ConditionRecord, 'r')},
+  ${selectColumns(Compound, 'c', 'compound.', withMolfile ? ['fingerprint'] : ['fingerprint', 'molfile'])},
   u.id AS "author.id", u.name AS "author.name",
   ${childArray(RecordSpot, 'record_spots')} AS spots,
   ${childArray(RecordVisualisation, 'record_visualisations')} AS visualisations,
@@ -34,18 +37,24 @@ export const listRowsSql = `SELECT ${selectColumns(ConditionRecord, 'r')},
 FROM condition_records r JOIN compounds c ON c.id = r.compound_id JOIN users u ON u.id = r.author_id
 WHERE r.id IN (:ids)`;
 
+const splitKeys = new Map<string, readonly [string, string] | null>();
+const splitKey = (key: string) => {
+  let split = splitKeys.get(key);
+  if (split === undefined) {
+    const dot = key.indexOf('.');
+    split = dot < 0 ? null : ([key.slice(0, dot), key.slice(dot + 1)] as const);
+    splitKeys.set(key, split);
+  }
+  return split;
+};
+
 /** Splits `prefix.attribute` keys into nested objects: { "compound.name": x } → { compound: { name: x } }. */
 export function nest(row: Record<string, unknown>): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  for (const [key, value] of Object.entries(row)) {
-    const dot = key.indexOf('.');
-    if (dot < 0) {
-      out[key] = value;
-      continue;
-    }
-    const head = key.slice(0, dot);
-    const inner = (out[head] ??= {}) as Record<string, unknown>;
-    inner[key.slice(dot + 1)] = value;
+  for (const key in row) {
+    const split = splitKey(key);
+    if (!split) out[key] = row[key];
+    else ((out[split[0]] ??= {}) as Record<string, unknown>)[split[1]] = row[key];
   }
   return out;
 }

@@ -40,7 +40,7 @@ describe('an export imported back (both written by server/services/export-format
   });
 
   it('when the SDF export is imported, then the same holds', async () => {
-    const { records } = await loadListRecords(ids);
+    const { records } = await loadListRecords(ids, { withMolfile: true });
     const done = await importFile(curator, toSdf(records), { name: 'export.sdf' });
     expect(done).toMatchObject({ status: 'completed', format: 'sdf', total: 3, rejected: 0, accepted: 0, duplicates: 3 });
   });

@@ -4,7 +4,7 @@ import initRDKitModule from '@rdkit/rdkit';
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/db/sequelize';
 import { agentFor, type Agent } from '../helpers/agent';
-import { createRecord, recordHits, searchFor } from '../helpers/search';
+import { createRecord, recordHits, searchFor, uniqueWord } from '../helpers/search';
 
 type RDKitMol = { get_substruct_match: (query: RDKitMol) => string; delete: () => void };
 type RDKitModule = { get_mol: (smiles: string) => RDKitMol | null; get_qmol: (smarts: string) => RDKitMol | null };
@@ -26,6 +26,7 @@ const structures = {
   '5-dodecylpyrimidine': 'CCCCCCCCCCCCc1cncnc1',
 } as const;
 const records = new Map<string, { id: number; compoundId: number }>();
+const word = uniqueWord();
 
 /** RDKit MinimalLib's substructure answer (an independent implementation of aromatic ring matching). */
 function rdkitHasSubstructure(smiles: string, query: string): boolean {
@@ -60,7 +61,7 @@ beforeAll(async () => {
   viewer = await agentFor(app, 'viewer');
   rdkit = (await (initRDKitModule as unknown as () => Promise<RDKitModule>)());
   for (const [name, smiles] of Object.entries(structures)) {
-    const record = await createRecord(member, { structure: smiles, name, notes: null });
+    const record = await createRecord(member, { structure: smiles, name, notes: `structure set ${word}` });
     records.set(name, { id: record.id, compoundId: record.compound.id });
   }
 });
@@ -68,7 +69,7 @@ afterAll(close);
 
 describe('GET /api/search?mode=substructure', () => {
   it('when the query is pyridine, then exactly the records whose compounds RDKit finds a pyridine ring in are returned (benzene, piperidine and pyrimidine are not)', async () => {
-    const result = await searchFor(viewer, { mode: 'substructure', structure: 'c1ccncc1', pageSize: 200 });
+    const result = await searchFor(viewer, { mode: 'substructure', structure: 'c1ccncc1', q: word, limit: 5000, pageSize: 200 });
     const found = new Set(recordHits(result).map((hit) => hit.recordId));
     for (const [name, smiles] of Object.entries(structures)) {
       expect(found.has(records.get(name)!.id), name).toBe(rdkitHasSubstructure(smiles, 'c1ccncc1'));
@@ -78,8 +79,8 @@ describe('GET /api/search?mode=substructure', () => {
 
   it('when the query is a drawn molfile of pyridine, then it finds the same records as the SMILES', async () => {
     const molfile = (await member.post('/api/structures/parse').set('X-CSRF-Token', member.csrf).send({ structure: 'c1ccncc1' })).body.molfile as string;
-    const bySmiles = await searchFor(viewer, { mode: 'substructure', structure: 'c1ccncc1', pageSize: 200 });
-    const byMolfile = await searchFor(viewer, { mode: 'substructure', structure: molfile, pageSize: 200 });
+    const bySmiles = await searchFor(viewer, { mode: 'substructure', structure: 'c1ccncc1', q: word, pageSize: 200 });
+    const byMolfile = await searchFor(viewer, { mode: 'substructure', structure: molfile, q: word, pageSize: 200 });
     expect(recordHits(byMolfile).map((hit) => hit.recordId).sort()).toEqual(recordHits(bySmiles).map((hit) => hit.recordId).sort());
   });
 
@@ -105,7 +106,7 @@ describe('GET /api/search?mode=similar', () => {
   });
 
   it('when a neighbour is scored, then its similarity equals the Tanimoto of the stored fingerprints counted independently', async () => {
-    const hits = recordHits(await searchFor(viewer, { mode: 'similar', structure: structures['4-dodecylpyridine'], threshold: 0, pageSize: 200 }));
+    const hits = recordHits(await searchFor(viewer, { mode: 'similar', structure: structures['4-dodecylpyridine'], threshold: 0, limit: 5000, q: word, pageSize: 200 }));
     const query = records.get('4-dodecylpyridine')!.compoundId;
     for (const name of ['dodecylbenzene', '5-dodecylpyrimidine', '3-methylpyridine'] as const) {
       const hit = hits.find((item) => item.recordId === records.get(name)!.id);

@@ -20,6 +20,9 @@ export interface RecordDoc {
 /** Fuzzy-match scores by id: 0 is a perfect match, 1 none. */
 export type TextHits = Map<number, number>;
 
+/** How much worse than the best match a match may be and still count (Fuse score units). */
+const RELATIVE_CUTOFF = 0.2;
+
 /** Names weigh most, then synonyms, then class names. */
 const compoundFields = (doc: CompoundDoc): WeightedFields => [
   { text: doc.name, weight: 1 },
@@ -65,10 +68,18 @@ export class TextIndex {
     for (const doc of records) this.records.set(doc.id, recordFields(doc));
   }
 
-  /** Compounds and records matching every word; ties between compounds go to the shorter name (the closer match). */
+  /**
+   * Compounds and records matching every word; ties between compounds go to the shorter name (the closer
+   * match). Matches much worse than the best one (by more than RELATIVE_CUTOFF) are dropped: when a name
+   * matches exactly, a word two letters away in another name ("cinnam" in "nicotinamide") is noise.
+   */
   search(text: string): { compounds: TextHits; records: TextHits } {
     const compounds = this.compounds.search(text);
     for (const [id, score] of compounds) compounds.set(id, score + Math.min(this.nameLength.get(id) ?? 0, 200) / 1e5);
-    return { compounds, records: this.records.search(text) };
+    const records = this.records.search(text);
+    let best = Number.POSITIVE_INFINITY;
+    for (const hits of [compounds, records]) for (const score of hits.values()) best = Math.min(best, score);
+    for (const hits of [compounds, records]) for (const [id, score] of hits) if (score > best + RELATIVE_CUTOFF) hits.delete(id);
+    return { compounds, records };
   }
 }

@@ -11,6 +11,9 @@ interface SearchFormProps {
   onSearch: (changes: { mode: SearchMode; q: string | null; structure: string | null; threshold: string | null }) => void;
 }
 
+/** Text with no spaces made of SMILES characters and holding a bond, branch, ring or bracket mark (a guess, only to offer a switch). */
+const looksLikeSmiles = (text: string) => text.length > 3 && /^[A-Za-z0-9@+\-[\]()=#\\/%.]+$/.test(text) && /[=#()[\]]|[a-z]\d|\d[a-z]/i.test(text) && !/^[A-Za-z]+-\d+$/.test(text);
+
 /**
  * The one search box: words, or a structure (drawn, pasted or dropped) for a similarity or substructure
  * search — the words then narrow the structure's hits. A structure the server has read goes into the URL
@@ -42,6 +45,7 @@ export function SearchForm({ state, onSearch }: SearchFormProps) {
     if (result) setParsed({ text: value, smiles: result.canonicalSmiles });
   };
   const needsStructure = mode !== 'text';
+  const smilesLike = mode === 'text' && looksLikeSmiles(text.trim());
   return (
     <form role="search" aria-label="Search the group’s records" onSubmit={submit} className="space-y-3 rounded-plate border border-line bg-surface p-4">
       <ModeSwitch mode={mode} onChange={changeMode} />
@@ -71,6 +75,14 @@ export function SearchForm({ state, onSearch }: SearchFormProps) {
           Search
         </Button>
       </div>
+      {smilesLike && (
+        <p className="text-sm text-ink-soft">
+          That looks like a SMILES.{' '}
+          <Button size="sm" variant="quiet" onClick={() => onSearch({ mode: 'similar', q: null, structure: text.trim(), threshold })}>
+            Search it as a structure (similar)
+          </Button>
+        </p>
+      )}
       {needsStructure && <StructureInput label="Structure to search with" value={structure} onChange={onStructure} defaultMode="paste" />}
     </form>
   );

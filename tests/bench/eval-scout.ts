@@ -1,0 +1,58 @@
+/**
+ * `npm run eval:scout` — measured accuracy of Scout on the open TLC data (H. Xu, J. Lin, D. Zhang, F. Mo et al.,
+ * Chem 2022, arXiv 2202.05962; Apache-2.0; tests/fixtures/open-tlc). Default: leave one compound out at a time
+ * from tlc-rf.csv — the model is rebuilt from the other compounds only (the engine the API uses, server/scout)
+ * and predicts each of the held-out compound's Rf values. `--train FILE --test FILE`: learn from one file and
+ * predict every compound of the other (compounds present in both are left out of the training set).
+ * Prints MAE, the structure-blind baseline (mean Rf per eluent, from the same training compounds) and the hit
+ * rate; the last line is `MAE=<number> hit=<fraction>`.
+ */
+import { resolve } from 'node:path';
+import { parseArgs } from 'node:util';
+import { openTlcKnowledge, withoutCompound } from './open-tlc-knowledge';
+import { foldOf, scoreCompound, summarise, hitWindow, type CompoundScore } from './scout-scoring';
+import type { KnowledgeSet } from '../../server/scout/types';
+import { closeFingerprintPool } from '../../server/chem';
+
+const { values } = parseArgs({ options: { train: { type: 'string' }, test: { type: 'string' } } });
+if (Boolean(values.train) !== Boolean(values.test)) throw new Error('Give both --train FILE and --test FILE, or neither.');
+
+const started = Date.now();
+const scores: CompoundScore[] = [];
+const progress = (done: number, total: number) => {
+  if (done % 25 === 0 || done === total) process.stderr.write(`  ${done}/${total} compounds, ${((Date.now() - started) / 1000).toFixed(0)} s\n`);
+};
+
+if (values.train && values.test) {
+  const train = openTlcKnowledge(resolve(values.train));
+  const test = openTlcKnowledge(resolve(values.test));
+  const smilesInTest = new Set(test.compounds.map((compound) => compound.smiles));
+  const shared = new Set(train.compounds.filter((compound) => smilesInTest.has(compound.smiles)).map((compound) => compound.id));
+  const knowledge: KnowledgeSet = [...shared].reduce((set, id) => withoutCompound(set, id), train);
+  console.log(`train ${values.train}: ${knowledge.compounds.length} compounds (${shared.size} also in the test file left out); test ${values.test}: ${test.compounds.length} compounds`);
+  const fold = foldOf(knowledge);
+  test.compounds.forEach((compound, index) => {
+    scores.push(scoreCompound(fold, compound, test.measurements.filter((item) => item.compoundId === compound.id)));
+    progress(index + 1, test.compounds.length);
+  });
+} else {
+  const knowledge = openTlcKnowledge(resolve('tests/fixtures/open-tlc/tlc-rf.csv'));
+  console.log(`leave-one-compound-out on tests/fixtures/open-tlc/tlc-rf.csv: ${knowledge.compounds.length} compounds, ${knowledge.measurements.length} Rf values`);
+  knowledge.compounds.forEach((compound, index) => {
+    scores.push(scoreCompound(foldOf(withoutCompound(knowledge, compound.id)), compound, knowledge.measurements.filter((item) => item.compoundId === compound.id)));
+    progress(index + 1, knowledge.compounds.length);
+  });
+}
+await closeFingerprintPool();
+
+const summary = summarise(scores);
+const f3 = (value: number) => value.toFixed(3);
+console.log('Data: Xu et al., Chem 2022 (Apache-2.0), open TLC Rf on silica.');
+console.log(`Rf values predicted: ${summary.measurements}`);
+console.log(`Scout MAE (Rf):                      ${f3(summary.mae)}`);
+console.log(`structure-blind baseline MAE (Rf):   ${f3(summary.baselineMae)}  (mean Rf per eluent over the training compounds)`);
+console.log(`90 % interval coverage:              ${f3(summary.coverage)}`);
+console.log(`hit rate (hexane/EtOAc ratio for Rf 0.3 gives ${hitWindow[0]}–${hitWindow[1]} on the compound's measured curve): ${f3(summary.hit)} of ${summary.hitCompounds} compounds with a curve`);
+for (const [level, group] of Object.entries(summary.byConfidence)) console.log(`  confidence ${level}: ${group.compounds} compounds, MAE ${Number.isNaN(group.mae) ? '–' : f3(group.mae)}`);
+console.log(`time: ${((Date.now() - started) / 1000).toFixed(1)} s`);
+console.log(`MAE=${summary.mae.toFixed(4)} hit=${summary.hit.toFixed(4)}`);
