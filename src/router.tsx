@@ -7,7 +7,6 @@ import { PageLoading } from './components/ui/page-loading';
 import { HomePage } from './routes/home';
 import { SignInPage } from './routes/sign-in';
 import { NotFoundPage } from './routes/not-found';
-import { ComingPage } from './routes/coming';
 
 const AccountPage = lazy(() => import('./routes/account'));
 const AdminUsersPage = lazy(() => import('./routes/admin-users'));
@@ -27,6 +26,9 @@ const SearchPage = lazy(() => import('./routes/search'));
 const BookmarksPage = lazy(() => import('./routes/bookmarks'));
 const ClassesPage = lazy(() => import('./routes/classes'));
 const ClassPage = lazy(() => import('./routes/class-detail'));
+const ScoutPage = lazy(() => import('./routes/scout'));
+const ToolsPage = lazy(() => import('./routes/tools'));
+const CautionsPage = lazy(() => import('./routes/cautions'));
 
 /** Pages are lazily loaded, so the first load carries only the shell. */
 const page = (node: ReactNode) => <Suspense fallback={<PageLoading />}>{node}</Suspense>;
@@ -41,15 +43,15 @@ export const router = createBrowserRouter([
     errorElement: <RouteError />,
     children: [
       { index: true, element: <HomePage /> },
-      { path: 'cautions', element: page(<ComingPage title="Lab cautions" issue={6} />) },
+      { path: 'cautions', element: page(<CautionsPage />) },
       { path: 'search', element: <RequireRole least="viewer">{page(<SearchPage />)}</RequireRole> },
       { path: 'records', element: <RequireRole least="viewer">{page(<RecordsPage />)}</RequireRole> },
       { path: 'records/:id', element: <RequireRole least="viewer">{page(<RecordPage />)}</RequireRole> },
       { path: 'records/:id/edit', element: <RequireRole least="member">{page(<RecordEditPage />)}</RequireRole> },
       { path: 'contribute', element: <RequireRole least="member">{page(<ContributePage />)}</RequireRole> },
       { path: 'compounds/:id', element: <RequireRole least="viewer">{page(<CompoundPage />)}</RequireRole> },
-      { path: 'scout', element: <RequireRole least="viewer">{page(<ComingPage title="Scout" issue={6} />)}</RequireRole> },
-      { path: 'tools', element: <RequireRole least="viewer">{page(<ComingPage title="Column planner and eluent translator" issue={6} />)}</RequireRole> },
+      { path: 'scout', element: <RequireRole least="viewer">{page(<ScoutPage />)}</RequireRole> },
+      { path: 'tools', element: <RequireRole least="viewer">{page(<ToolsPage />)}</RequireRole> },
       { path: 'classes', element: <RequireRole least="viewer">{page(<ClassesPage />)}</RequireRole> },
       { path: 'classes/:key', element: <RequireRole least="viewer">{page(<ClassPage />)}</RequireRole> },
       { path: 'bookmarks', element: <RequireRole least="viewer">{page(<BookmarksPage />)}</RequireRole> },

@@ -7,6 +7,8 @@
  * Routes the app does not answer yet are left out and named. Prints per-route figures, the load average
  * of the machine (shared, 2 cores) and, last, `rps=<n> p99_ms=<n> errors=<n>` (errors = non-2xx + socket
  * errors + timeouts). Goal: rps ≥ 500, p99 ≤ 250 ms, errors 0.
+ * Shares of the mix (load-mix.ts): records list 30 %, record page 35 %, text search 15 %, similarity 10 %,
+ * Scout 10 %; `--equal` gives each route the same share.
  * `--app http://127.0.0.1:<port>` loads an app already running there (loopback only) instead of starting one.
  */
 import autocannon from 'autocannon';
@@ -24,6 +26,7 @@ const CONNECTIONS = option('connections', 100);
 const DURATION_S = option('duration', 20);
 const WARMUP_S = option('warmup', 5);
 const DEMO_PASSWORD = process.env.RFOLIO_DEMO_PASSWORD ?? 'rfolio-demo-2026';
+const EQUAL = process.argv.includes('--equal');
 const loadAverage = () => os.loadavg().map((value) => value.toFixed(2)).join(' ');
 
 async function getJson<T>(app: RunningApp, session: Session, path: string): Promise<T> {
@@ -58,7 +61,7 @@ async function probe(app: RunningApp, routes: MixRoute[], session: Session) {
 
 async function load(app: RunningApp, routes: MixRoute[], sessions: Session[], durationS: number) {
   const stats = new RouteStats();
-  const instance = autocannon({ url: app.base, connections: CONNECTIONS, duration: durationS, timeout: 10, requests: autocannonRequests(routes, sessions) });
+  const instance = autocannon({ url: app.base, connections: CONNECTIONS, duration: durationS, timeout: 10, requests: autocannonRequests(routes, sessions, EQUAL) });
   instance.on('response', (client, status, _bytes, ms) => stats.add(client.requestIterator.currentRequest.label ?? '?', status, ms));
   const result = await instance;
   return { result, stats };
@@ -82,7 +85,8 @@ try {
   const inputs = await mixInputs(app, sessions[0]);
   console.log(`demo data: ${inputs.recordIds.length} records, ${inputs.structures.length} structures, ${inputs.words.length} name words; ${sessions.length} users signed in`);
   const { kept, skipped } = await probe(app, mixRoutes(inputs), sessions[0]);
-  console.log(`mix: ${kept.map((route) => route.label).join(', ')}`);
+  const shares = kept.map((route) => `${route.label} ${EQUAL ? 1 : route.weight}`);
+  console.log(`mix (relative shares): ${shares.join(', ')}`);
   if (skipped.length > 0) console.log(`skipped: ${skipped.join('; ')}`);
   if (WARMUP_S > 0) await load(app, kept, sessions, WARMUP_S);
   console.log(`load average before the run: ${loadAverage()}`);

@@ -11,7 +11,7 @@ beforeAll(async () => {
 });
 afterAll(close);
 
-const post = (path: string, body: unknown) => viewer.post(path).set('X-CSRF-Token', viewer.csrf).send(body);
+const post = (path: string, body: object) => viewer.post(path).set('X-CSRF-Token', viewer.csrf).send(body);
 
 /** Still, Kahn & Mitra, J. Org. Chem. 1978, 43, 2923 (REFERENCE.md, confirmed): diameter, eluent, load ΔRf ≥ 0.2, load ΔRf ≥ 0.1, fraction. */
 const stillRows = [
