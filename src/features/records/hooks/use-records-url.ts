@@ -30,8 +30,9 @@ export function useRecordsUrl() {
 
   const update = useCallback(
     (changes: Record<string, string | number | null | undefined>, resetPage = true) => {
-      setParams((current) => {
-        const next = new URLSearchParams(current);
+      // Read the address bar, not React Router's copy: two quick updates before a re-render must not lose the first.
+      setParams(() => {
+        const next = new URLSearchParams(window.location.search);
         for (const [key, value] of Object.entries(changes)) {
           if (value === null || value === undefined || value === '') next.delete(key);
           else next.set(key, String(value));
