@@ -1,9 +1,9 @@
-import { createServer } from 'node:http';
 import { env } from './config/env';
 import { logger } from './logger';
 import { migrator } from './db/migrator';
 import { sequelize } from './db/sequelize';
 import { createApp } from './app';
+import { createHttpServer } from './http-server';
 import { seedDemoOnce, demoAccounts } from '../seeders';
 import { startMailCatcher } from './mail/catcher';
 import { usesMailCatcher } from './mail/send';
@@ -25,7 +25,7 @@ const mailCatcherPort = usesMailCatcher() ? await startMailCatcher(config.MAIL_C
 if (!usesMailCatcher() && !config.SMTP_HOST) logger.warn('SMTP_HOST is not set: invitations and password resets cannot be e-mailed.');
 
 const { app, close } = createApp();
-const server = createServer(app);
+const server = createHttpServer(app);
 server.keepAliveTimeout = 65_000;
 server.listen(config.PORT, config.HOST, () => {
   const url = `http://${config.HOST}:${config.PORT}`;

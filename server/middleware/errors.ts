@@ -16,6 +16,12 @@ export function isDatabaseDown(err: unknown): boolean {
 
 /** Maps every failure onto `{ error: { code, message, details? } }` with a fitting status; internals never leak. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+  // A failure after the answer started (e.g. a session save at shutdown) can no longer be reported to the client.
+  if (res.headersSent) {
+    if (!isDatabaseDown(err)) logger.warn({ err, path: req.path }, 'error after the response was sent');
+    req.socket.destroy();
+    return;
+  }
   let appErr: AppError;
   if (err instanceof AppError) appErr = err;
   else if (isDatabaseDown(err)) appErr = new DatabaseUnavailableError();

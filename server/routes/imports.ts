@@ -4,6 +4,7 @@ import { idParamSchema } from '../../shared/schemas/common';
 import { importMappingSchema, importUploadQuerySchema } from '../../shared/schemas/import';
 import { allow, currentUser } from '../middleware/access';
 import { handle } from '../middleware/validate';
+import { readableMultipart } from '../middleware/multipart';
 import { BadRequestError, PayloadTooLargeError, ValidationError } from '../errors';
 import { presentImport } from '../presenters/imports';
 import { createImport, getImport, listImports, resumeImport, settle, sha256Of } from '../services/imports/imports';
@@ -16,7 +17,7 @@ export const MAX_IMPORT_BYTES = 20 * 1024 * 1024;
 
 export const importsRouter = Router();
 
-const multipart = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 5 } }).single('file');
+const multipart = readableMultipart(multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 5 } }).single('file'));
 
 /** The upload, with a size refusal that says the limit. */
 const upload: RequestHandler = (req, res, next) =>

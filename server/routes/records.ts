@@ -3,6 +3,7 @@ import multer from 'multer';
 import { z } from 'zod';
 import { allow, currentUser } from '../middleware/access';
 import { handle } from '../middleware/validate';
+import { readableMultipart } from '../middleware/multipart';
 import { idParamSchema } from '../../shared/schemas/common';
 import { recordInputSchema, recordListQuerySchema, recordUpdateSchema } from '../../shared/schemas/record';
 import { createRecord, retireRecord, updateRecord, canEditRecord } from '../services/records';
@@ -55,7 +56,7 @@ recordsRouter.get('/:id/history', allow('viewer'), handle({ params: idParamSchem
   res.json(await recordHistory(params.id));
 }));
 
-recordsRouter.post('/:id/photos', allow('member'), upload.single('photo'), handle({ params: idParamSchema }, async ({ params }, req, res) => {
+recordsRouter.post('/:id/photos', allow('member'), readableMultipart(upload.single('photo')), handle({ params: idParamSchema }, async ({ params }, req, res) => {
   if (!req.file) throw new BadRequestError('Attach the photo as multipart field "photo".');
   const user = currentUser(req);
   const photo = await addPhoto(params.id, req.file, user);

@@ -29,7 +29,10 @@ export function stainAdvice(model: ScoutModel, close: readonly SimilarCompound[]
       const stain = stainByKey(key)!;
       const suggestion = byClass.get(key);
       const neighbourCount = used.get(key) ?? 0;
-      const reasons = [...(suggestion?.reasons ?? [])];
+      const reasons: string[] = [];
+      if (suggestion?.matchedClasses.length) reasons.push(`the query is ${suggestion.matchedClasses.map((name) => name.replace(/-/g, ' ')).join(', ')}`);
+      if (suggestion?.matchedClasses.length && stain.nonDestructive) reasons.push('non-destructive: look before dipping in any stain');
+      if (suggestion && suggestion.matchedClasses.length === 0 && stain.selectivity === 'general') reasons.push('general stain');
       if (neighbourCount > 0) reasons.push(`seen with it in ${neighbourCount} of ${records.length} close neighbours' records`);
       return { stain: key, label: stain.label, shows: stain.shows, reasons, neighbourCount, source: stain.source, score: (suggestion?.score ?? 0) + (records.length ? (3 * neighbourCount) / records.length : 0) };
     })

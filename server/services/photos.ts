@@ -2,7 +2,7 @@ import sharp, { type Metadata } from 'sharp';
 import { createHash } from 'node:crypto';
 import { sequelize } from '../db/sequelize';
 import { ConditionRecord, RecordPhoto } from '../models';
-import { ConflictError, ForbiddenError, NotFoundError, UnsupportedMediaTypeError } from '../errors';
+import { ConflictError, ForbiddenError, NotFoundError, UnprocessableError, UnsupportedMediaTypeError } from '../errors';
 import { roleAtLeast, type SessionUser } from '../../shared/schemas/auth';
 import { blobStorage } from '../storage';
 import { canEditRecord } from './records';
@@ -32,8 +32,13 @@ async function inspect(bytes: Buffer): Promise<{ contentType: PhotoContentType; 
   return { contentType, width: turned ? metadata.height : metadata.width, height: turned ? metadata.width : metadata.height };
 }
 
-async function thumbnail(bytes: Buffer): Promise<Buffer> {
-  return sharp(bytes).rotate().resize({ width: THUMB_SIZE_PX, height: THUMB_SIZE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
+/** The thumbnail; an image whose header reads but whose pixels do not (truncated, damaged) is refused with 422. */
+async function thumbnail(bytes: Buffer, contentType: PhotoContentType): Promise<Buffer> {
+  try {
+    return await sharp(bytes).rotate().resize({ width: THUMB_SIZE_PX, height: THUMB_SIZE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
+  } catch {
+    throw new UnprocessableError(`The file starts like ${contentType} but its image data cannot be decoded (truncated or damaged); upload the photo again.`);
+  }
 }
 
 /** Adds a plate photo to a record (author, curator or admin): stores the bytes and a thumbnail, and a revision. */
@@ -43,7 +48,7 @@ export async function addPhoto(recordId: number, file: { buffer: Buffer; origina
   if (!canEditRecord(user, record)) throw new ForbiddenError('Only the record’s author, a curator or an admin may add photos.');
   if (record.status === 'merged') throw new ConflictError(`This record was merged into record ${record.mergedIntoId}; add the photo there.`);
   const { contentType, width, height } = await inspect(file.buffer);
-  const thumb = await thumbnail(file.buffer);
+  const thumb = await thumbnail(file.buffer, contentType);
   return sequelize.transaction(async (transaction) => {
     const storage = blobStorage();
     const blobKey = await storage.put(file.buffer, contentType, transaction);

@@ -25,7 +25,7 @@ const progress = (done: number, total: number) => {
 
 if (values.train && values.test) {
   const train = openTlcKnowledge(resolve(values.train));
-  const test = openTlcKnowledge(resolve(values.test));
+  const test = openTlcKnowledge(resolve(values.test), 1_000_000);
   const smilesInTest = new Set(test.compounds.map((compound) => compound.smiles));
   const shared = new Set(train.compounds.filter((compound) => smilesInTest.has(compound.smiles)).map((compound) => compound.id));
   const knowledge: KnowledgeSet = [...shared].reduce((set, id) => withoutCompound(set, id), train);

@@ -59,8 +59,8 @@ export function componentsOf(row: Row): { solvent: string; parts: number }[] {
   return openTlcColumns.map(([column, solvent]) => ({ solvent, parts: Number(row[column]) })).filter((part) => part.parts > 0);
 }
 
-/** Reads a CSV with the columns of tlc-rf.csv into a knowledge set (phase: silica TLC plates). */
-export function openTlcKnowledge(path: string): KnowledgeSet {
+/** Reads a CSV with the columns of tlc-rf.csv into a knowledge set (phase: silica TLC plates); ids count from `idBase` + 1. */
+export function openTlcKnowledge(path: string, idBase = 0): KnowledgeSet {
   const rows = parse(readFileSync(path), { columns: true, skip_empty_lines: true }) as Row[];
   const analysed = analyseSmiles([...new Set(rows.map((row) => row.smiles))]);
   const ids = new Map<string, number>();
@@ -70,7 +70,7 @@ export function openTlcKnowledge(path: string): KnowledgeSet {
     const structure = analysed.get(row.smiles) as Analysed;
     let id = ids.get(structure.idcode);
     if (id === undefined) {
-      id = compounds.length + 1;
+      id = idBase + compounds.length + 1;
       ids.set(structure.idcode, id);
       compounds.push({ id, name: row.name || null, smiles: structure.smiles, descriptors: structure.descriptors, classes: structure.classes, fingerprint: structure.fingerprint });
     }

@@ -84,7 +84,7 @@ export const foldOf = (knowledge: KnowledgeSet): Fold => ({ knowledge, model: bu
 
 /** Predicts every measurement of a held-out compound from a training fold that does not contain it. */
 export function scoreCompound({ knowledge, model, means }: Fold, compound: ScoutCompound, measurements: readonly ScoutMeasurement[]): CompoundScore {
-  if (knowledge.compounds.some((other) => other.id === compound.id)) throw new Error('The held-out compound is in the knowledge set.');
+  if (knowledge.compounds.some((other) => other.id === compound.id || other.smiles === compound.smiles)) throw new Error('The held-out compound is in the knowledge set.');
   const query = { id: null, smiles: compound.smiles, descriptors: compound.descriptors, classes: compound.classes, fingerprint: compound.fingerprint };
   const score: CompoundScore = { compoundId: compound.id, errors: [], baselineErrors: [], hit: null, confidence: 'low', covered: 0 };
   for (const measurement of measurements) {

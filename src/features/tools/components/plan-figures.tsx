@@ -28,8 +28,8 @@ export function PlanFigures({ plan }: { plan: ColumnPlanResult }) {
         <Figure label="Target elutes after" value={formatNumber(plan.cvTarget, 1)} unit="CV" source={s.cvTarget} />
         <Figure label="Band separation" value={plan.deltaCv === null ? '—' : formatNumber(plan.deltaCv, 1)} unit={plan.deltaCv === null ? 'no other spot given' : `CV (ΔRf ${formatNumber(plan.deltaRf ?? 0, 2)})`} source={s.deltaCv} />
       </dl>
-      <p className="text-sm"><strong>{plan.gradient.mode === 'isocratic' ? 'Isocratic.' : 'Step gradient.'}</strong> {plan.gradient.advice} <span className="text-2xs text-ink-soft">({s.gradient})</span></p>
-      <p className="text-sm"><strong>{plan.load.method === 'dry' ? 'Dry load.' : 'Liquid load.'}</strong> {plan.load.advice} <span className="text-2xs text-ink-soft">({s.load})</span></p>
+      <p className="text-sm"><strong>Elution ({plan.gradient.mode === 'isocratic' ? 'isocratic' : 'step gradient'}):</strong> {plan.gradient.advice} <span className="text-2xs text-ink-soft">({s.gradient})</span></p>
+      <p className="text-sm"><strong>Loading ({plan.load.method}):</strong> {plan.load.advice} <span className="text-2xs text-ink-soft">({s.load})</span></p>
       {plan.flags.length > 0 && (
         <ul className="space-y-1" aria-label="Flags">
           {plan.flags.map((flag) => <li key={flag.code} className={flagTone}>{flag.message}</li>)}
