@@ -19,6 +19,7 @@ import { ColumnDetailsView } from '../features/records/components/column-details
 import { MergedNotice } from '../features/curation/components/merged-notice';
 import { RetireControl } from '../features/curation/components/retire-control';
 import { BookmarkToggle } from '../features/bookmarks/components/bookmark-toggle';
+import { ColumnPlanPanel } from '../features/tools/components/column-plan-panel';
 
 /** A condition record with every field, its depiction and plate strip, photos, cautions and history. */
 export default function RecordPage() {
@@ -34,6 +35,7 @@ export default function RecordPage() {
     flashColumn: record.technique === 'flash',
   });
   const title = record.compound.name ?? record.compound.canonicalSmiles;
+  const plateForPlan = columnInputs(record.spots);
   return (
     <article className="space-y-5">
       {notice && <p role="status" className="rounded-plate border border-line bg-surface px-3 py-2 text-sm">{notice}</p>}
@@ -90,6 +92,7 @@ export default function RecordPage() {
         </Card>
       </div>
 
+      {plateForPlan && <ColumnPlanPanel title="Plan a column from this plate" rfTarget={plateForPlan.target} rfImpurity={plateForPlan.nearest} sampleMg={record.column?.sampleMg ?? undefined} />}
       <Card title="Plate photos"><RecordPhotos record={record} /></Card>
       <Card title="Contributors">
         <ul className="flex flex-wrap gap-3 text-sm">
@@ -99,4 +102,13 @@ export default function RecordPage() {
       <Card title="History"><HistoryList recordId={record.id} /></Card>
     </article>
   );
+}
+
+/** The target's Rf and the closest other spot's, to prefill the column plan from this plate. */
+function columnInputs(spots: { role: string; rf: number }[]): { target: number; nearest: number | null } | null {
+  const target = spots.find((spot) => spot.role === 'target');
+  if (!target) return null;
+  const others = spots.filter((spot) => spot !== target).map((spot) => spot.rf);
+  const nearest = others.length ? others.reduce((a, b) => (Math.abs(b - target.rf) < Math.abs(a - target.rf) ? b : a)) : null;
+  return { target: target.rf, nearest };
 }

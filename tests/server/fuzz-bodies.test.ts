@@ -1,16 +1,21 @@
 import { afterAll, beforeAll, describe, it } from 'vitest';
 import { createApp } from '../../server/app';
-import { prepareFuzz, type FuzzContext } from '../helpers/fuzz/context';
+import { prepareFuzz, serveOnLoopback, type FuzzContext } from '../helpers/fuzz/context';
 import { bodyCases, pathCases, rawCases } from '../helpers/fuzz/families';
 import { expectNoServerErrors } from '../helpers/fuzz/property';
 
 const { app, close } = createApp();
 let ctx: FuzzContext;
+let served: Awaited<ReturnType<typeof serveOnLoopback>>;
 
 beforeAll(async () => {
-  ctx = await prepareFuzz(app);
+  served = await serveOnLoopback(app);
+  ctx = await prepareFuzz(app, served.base);
 });
-afterAll(close);
+afterAll(async () => {
+  await served?.stop();
+  await close();
+});
 
 describe('hostile requests to every route of the route table (fast-check; the 10,000-case run is `npm run bench:fuzz`)', () => {
   it('JSON bodies of the wrong shape for every POST and PATCH route: never a 5xx, every refusal says why', async () => {

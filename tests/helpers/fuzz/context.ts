@@ -1,5 +1,7 @@
 import type { Express } from 'express';
+import type { AddressInfo } from 'node:net';
 import request from 'supertest';
+import { createHttpServer } from '../../../server/http-server';
 import sharp from 'sharp';
 import { createUser, TEST_PASSWORD, type Agent } from '../agent';
 import { postRecord } from '../records';
@@ -73,4 +75,15 @@ export async function prepareFuzz(app: Express, target: Express | string = app):
     paramRoutes: api.filter((route) => route.method === 'GET' && route.path.includes(':')),
     png,
   };
+}
+
+/**
+ * The app behind the project's own HTTP server (server/http-server.ts, as server/index.ts runs it), listening
+ * on 127.0.0.1 only; fuzz cases go to its URL so refusals Node makes before the app are checked too.
+ */
+export async function serveOnLoopback(app: Express): Promise<{ base: string; stop: () => Promise<void> }> {
+  const server = createHttpServer(app);
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  return { base, stop: () => new Promise<void>((resolve) => server.close(() => resolve())) };
 }
