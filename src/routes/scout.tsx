@@ -1,3 +1,5 @@
+import { useEffect } from 'react';
+import { useSearchParams } from 'react-router-dom';
 import { Card } from '../components/ui/card';
 import { HazardLine } from '../components/ui/hazard-line';
 import { EmptyState } from '../components/ui/empty-state';
@@ -13,6 +15,13 @@ import { ColumnPlanPanel } from '../features/tools/components/column-plan-panel'
 export default function ScoutPage() {
   const scout = useScout();
   const result = scout.data;
+  // A structure handed over in the address (e.g. from the home page's quick box) is scouted straight away.
+  const [params] = useSearchParams();
+  const handedOver = params.get('structure') ?? '';
+  const { mutate } = scout;
+  useEffect(() => {
+    if (handedOver.trim()) mutate({ structure: handedOver, targetRf: 0.3 });
+  }, [handedOver, mutate]);
   return (
     <section className="space-y-4">
       <header className="space-y-1">
@@ -22,7 +31,7 @@ export default function ScoutPage() {
           Scout estimates; run a TLC plate before the column.
         </p>
       </header>
-      <Card><ScoutForm onSubmit={(input) => scout.mutate(input)} busy={scout.isPending} /></Card>
+      <Card><ScoutForm key={handedOver} initialStructure={handedOver} onSubmit={(input) => scout.mutate(input)} busy={scout.isPending} /></Card>
       {scout.error && <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-sm text-failed">{scout.error.message}</p>}
       {!result && !scout.error && (
         <EmptyState title="Nothing scouted yet">Draw or paste a structure (SMILES or molfile), pick the Rf you want and press “Scout conditions”.</EmptyState>

@@ -24,9 +24,9 @@ const phaseOptions = [
 ];
 
 /** Structure, target Rf (0.15–0.45), preferred pair and phase; submits one Scout question. */
-export function ScoutForm({ onSubmit, busy }: { onSubmit: (input: ScoutInput) => void; busy: boolean }) {
+export function ScoutForm({ onSubmit, busy, initialStructure = '' }: { onSubmit: (input: ScoutInput) => void; busy: boolean; initialStructure?: string }) {
   const id = useId();
-  const [structure, setStructure] = useState('');
+  const [structure, setStructure] = useState(initialStructure);
   const [targetRf, setTargetRf] = useState(0.3);
   const [pair, setPair] = useState('');
   const [phase, setPhase] = useState('');
