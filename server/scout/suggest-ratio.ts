@@ -61,15 +61,23 @@ function tier(pair: SolventPair): number {
   return 3;
 }
 
-/** The suggestion in the first pair (by tier) that reaches the target; when none does, the one closest to it. */
+/** RM units one tier of the common-practice order is worth against the prediction's standard deviation. */
+const TIER_COST_RM = 0.15;
+
+/**
+ * Among pairs whose predicted curve reaches the target, the one with the best balance of common-practice order
+ * (tier) and certainty (the predicted RM's sd): a familiar pair wins unless another one is much better evidenced,
+ * e.g. when the nearest neighbours were all recorded in DCM/MeOH. When none reaches, the one closest to the target.
+ */
 export function suggestBestPair(model: ScoutModel, adsorbent: Adsorbent, variant: ModelVariant, kernel: QueryKernel, targetRf: number): RatioSuggestion | null {
   const candidates = model.pairsOn(adsorbent)
     .filter((data) => data.anchors.length > 0)
     .sort((a, b) => tier(a.pair) - tier(b.pair) || compoundsIn(b) - compoundsIn(a))
     .map((data) => suggestRatio(model, adsorbent, data.pair, variant, kernel, targetRf))
     .filter((suggestion): suggestion is RatioSuggestion => suggestion !== null);
-  const within = candidates.find((suggestion) => suggestion.reach === 'within');
-  if (within) return within;
+  const cost = (suggestion: RatioSuggestion) => suggestion.point.sd + TIER_COST_RM * tier(suggestion.pair);
+  const within = candidates.filter((suggestion) => suggestion.reach === 'within');
+  if (within.length > 0) return within.reduce((best, next) => (cost(next) < cost(best) ? next : best));
   const targetRm = rfToRm(targetRf);
   return candidates.sort((a, b) => Math.abs(a.point.rm - targetRm) - Math.abs(b.point.rm - targetRm))[0] ?? null;
 }

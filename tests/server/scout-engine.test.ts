@@ -103,6 +103,19 @@ describe('Scout on a small knowledge set', () => {
     expect(result.evidence.map((line) => line.quantity)).toContain('pair translation');
   });
 
+  it('when the compound and its neighbours were only ever run in DCM/MeOH, then Scout suggests DCM/MeOH, not a weakly evidenced alkane pair', () => {
+    // Invented values for the test: polar anilides recorded at three DCM/MeOH ratios (common practice for such compounds).
+    const anilides = [compound(21, 'CC(=O)Nc1ccc(O)cc1'), compound(22, 'CC(=O)Nc1ccc(OC)cc1'), compound(23, 'CC(=O)Nc1ccc(N)cc1'), compound(24, 'CCC(=O)Nc1ccc(O)cc1')];
+    const polarPlates = anilides.flatMap((item, index) => [
+      plate(item.id, 'methanol', 'dichloromethane', 1, 30, 0.12 + 0.02 * index), plate(item.id, 'methanol', 'dichloromethane', 1, 10, 0.3 + 0.02 * index), plate(item.id, 'methanol', 'dichloromethane', 1, 5, 0.5 + 0.02 * index),
+    ]);
+    const set: KnowledgeSet = { version: 'mixed', compounds: [ester, ...others, ...anilides], measurements: [...measurements, ...polarPlates] };
+    const result = scout(buildScoutModel(set), asQuery(anilides[0]));
+    expect(result.suggestion?.pair).toMatchObject({ weak: 'dichloromethane', strong: 'methanol' });
+    expect(result.suggestion?.predictedRf).toBeGreaterThan(0.15);
+    expect(result.suggestion?.predictedRf).toBeLessThan(0.45);
+  });
+
   it('when nothing has been recorded yet, then there is no suggestion, a reason why, and no neighbours', () => {
     const result = scout(buildScoutModel({ version: 'empty', compounds: [], measurements: [] }), asQuery(ester));
     expect(result.suggestion).toBeNull();
