@@ -75,8 +75,34 @@ function checkV3000(lines: string[]): MolfileHeader {
   if ((bondBlock?.length ?? 0) !== bonds) {
     throw invalid(`The BOND block has ${bondBlock?.length ?? 0} lines but COUNTS announces ${bonds} bonds.`, (bondBlock?.start ?? countsIndex) + 1);
   }
+  const atomIndices = checkV3000Atoms(lines, atomBlock.start, atoms);
+  if (bondBlock) checkV3000Bonds(lines, bondBlock.start, bonds, atomIndices);
   checkEnd(lines, countsIndex);
   return { version: 'V3000', atoms, bonds };
+}
+
+/** Each V3000 atom line is "M  V30 index element x y z aamap …" (CTfile format); returns the indices given. */
+function checkV3000Atoms(lines: string[], start: number, atoms: number): Set<number> {
+  const indices = new Set<number>();
+  for (let i = 1; i <= atoms; i++) {
+    const fields = lines[start + i].slice(7).trim().split(/\s+/);
+    const [index, x, y, z] = [Number(fields[0]), Number(fields[2]), Number(fields[3]), Number(fields[4])];
+    if (!(Number.isInteger(index) && index >= 1) || !fields[1] || ![x, y, z].every(Number.isFinite) || indices.has(index)) {
+      throw invalid(`Line ${start + i + 1}: expected atom ${i} of ${atoms} (index element x y z), found "${lines[start + i].trim().slice(0, 40)}".`, start + i + 1);
+    }
+    indices.add(index);
+  }
+  return indices;
+}
+
+/** Each V3000 bond line is "M  V30 index type atom1 atom2 …"; both atoms must be indices of the ATOM block. */
+function checkV3000Bonds(lines: string[], start: number, bonds: number, atomIndices: Set<number>) {
+  for (let i = 1; i <= bonds; i++) {
+    const [, type, a, b] = lines[start + i].slice(7).trim().split(/\s+/).map(Number);
+    if (!Number.isInteger(type) || !atomIndices.has(a) || !atomIndices.has(b)) {
+      throw invalid(`Line ${start + i + 1}: expected bond ${i} of ${bonds} between atoms of the ATOM block, found "${lines[start + i].trim().slice(0, 40)}".`, start + i + 1);
+    }
+  }
 }
 
 /** Joins V3000 continuation lines (a trailing "-" continues on the next "M  V30 " line). */

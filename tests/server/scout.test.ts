@@ -64,7 +64,8 @@ describe('POST /api/scout', () => {
     const recorded = result.neighbours.filter((neighbour) => ketoneCompoundIds.has(neighbour.compoundId));
     expect(recorded.length).toBeGreaterThanOrEqual(4);
     expect(result.neighbours[0].similarity).toBeGreaterThan(0.6);
-    expect(result.neighbours[0].conditions.some((condition) => condition.recordId !== null && condition.notation.includes('EtOAc'))).toBe(true);
+    // Other test files share the database, so the check is on this file's own analogues, not whichever compound ranks first.
+    expect(recorded[0].conditions.some((condition) => condition.recordId !== null && condition.notation.includes('EtOAc'))).toBe(true);
     const suggestion = result.suggestion!;
     expect(suggestion.pair).toMatchObject({ weak: 'hexanes', strong: 'ethyl-acetate' });
     // Its analogues run at Rf 0.27–0.32 in 1 : 9, so a ratio for Rf 0.3 lies between 1 : 19 and 1 : 4 (5–20 % EtOAc).
