@@ -42,7 +42,7 @@ export function createApp(): AppHandle {
     pinoHttp({
       logger,
       autoLogging: { ignore: (req) => req.url === '/api/health' },
-      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+      customLogLevel: (_req, res, err) => (res.statusCode === 503 ? 'warn' : err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
     }),
   );
   app.use('/api', express.json({ limit: '1mb' }));

@@ -3,7 +3,7 @@ import { MulterError } from 'multer';
 import { AppError, DatabaseUnavailableError, NotFoundError } from '../errors';
 import { logger } from '../logger';
 
-const DB_DOWN = /ECONNREFUSED|ECONNRESET|terminating connection|Connection terminated|the database system is (shutting down|starting up)|connect ETIMEDOUT|Connection.*timeout/i;
+const DB_DOWN = /ECONNREFUSED|not queryable|ECONNRESET|terminating connection|Connection terminated|the database system is (shutting down|starting up)|connect ETIMEDOUT|Connection.*timeout/i;
 
 /** True for the errors PostgreSQL and its driver give when the database is unreachable or shutting down. */
 export function isDatabaseDown(err: unknown): boolean {
