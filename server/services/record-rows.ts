@@ -32,11 +32,10 @@ export async function writeVisualisations(recordId: number, items: readonly Visu
   );
 }
 
-/** The condition_records row of a new record (derived columns and content hash included). */
-function recordAttributes(content: RecordContent, options: NewRecordOptions) {
+/** The condition_records columns that follow from a record's content (derived columns and content hash included). */
+export function contentColumns(content: RecordContent) {
   return {
     compoundId: content.compoundId,
-    authorId: options.authorId,
     technique: content.technique as ConditionRecord['technique'],
     stationaryPhase: content.stationaryPhase,
     stationaryPhaseOther: content.stationaryPhaseOther,
@@ -47,8 +46,16 @@ function recordAttributes(content: RecordContent, options: NewRecordOptions) {
     ...columnAttributes(content.column),
     notebookRef: content.notebookRef,
     notes: content.notes,
-    importId: options.importId ?? null,
     contentHash: recordContentHash(content),
+  };
+}
+
+/** The condition_records row of a new record. */
+function recordAttributes(content: RecordContent, options: NewRecordOptions) {
+  return {
+    ...contentColumns(content),
+    authorId: options.authorId,
+    importId: options.importId ?? null,
     demo: options.demo ?? false,
     ...(options.createdAt ? { createdAt: options.createdAt, updatedAt: options.createdAt } : {}),
   };

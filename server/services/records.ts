@@ -4,9 +4,9 @@ import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '.
 import { roleAtLeast, type SessionUser } from '../../shared/schemas/auth';
 import type { RecordInputParsed, RecordUpdateParsed } from '../../shared/schemas/record';
 import { resolveCompound } from './compounds';
-import { columnAttributes, derivedColumns, recordContentHash, type RecordContent } from './record-columns';
+import type { RecordContent } from './record-columns';
 import { addRevision, diffStates, loadRecordState } from './record-revisions';
-import { insertRecord, writeSpots, writeVisualisations } from './record-rows';
+import { contentColumns, insertRecord, writeSpots, writeVisualisations } from './record-rows';
 import { AuditEntry } from '../models';
 
 /** Members edit their own records; curators and admins edit any. */
@@ -69,20 +69,7 @@ export async function updateRecord(id: number, patch: RecordUpdateParsed, user: 
     }
     if (content.stationaryPhase !== 'other') content.stationaryPhaseOther = null;
     await record.update(
-      {
-        compoundId,
-        technique: content.technique as ConditionRecord['technique'],
-        stationaryPhase: content.stationaryPhase,
-        stationaryPhaseOther: content.stationaryPhaseOther,
-        eluent: content.eluent,
-        ...derivedColumns(content),
-        outcome: content.outcome as ConditionRecord['outcome'],
-        outcomeReason: content.outcomeReason,
-        ...columnAttributes(content.column),
-        notebookRef: content.notebookRef,
-        notes: content.notes,
-        contentHash: recordContentHash(content),
-      },
+      contentColumns(content),
       { transaction },
     );
     if (patch.spots) {

@@ -1,5 +1,6 @@
-import { useCallback, useMemo } from 'react';
+import { useMemo } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { useUrlUpdater } from '../../../lib/url-params';
 import type { RecordListQuery } from '../../../../shared/schemas/record';
 
 /** Filters a user can set on the records table; each is one URL parameter. */
@@ -13,7 +14,7 @@ export const defaultColumns = ['structure', 'compound', 'plate', 'eluent', 'phas
  * so a link reproduces the view. Changing a filter returns to page 1.
  */
 export function useRecordsUrl() {
-  const [params, setParams] = useSearchParams();
+  const [params] = useSearchParams();
   const query = useMemo<RecordListQuery>(() => {
     const out: Record<string, string | number> = {};
     for (const key of filterKeys) {
@@ -28,20 +29,6 @@ export function useRecordsUrl() {
   }, [params]);
   const columns = useMemo(() => params.get('cols')?.split(',').filter(Boolean) ?? defaultColumns, [params]);
 
-  const update = useCallback(
-    (changes: Record<string, string | number | null | undefined>, resetPage = true) => {
-      // Read the address bar, not React Router's copy: two quick updates before a re-render must not lose the first.
-      setParams(() => {
-        const next = new URLSearchParams(window.location.search);
-        for (const [key, value] of Object.entries(changes)) {
-          if (value === null || value === undefined || value === '') next.delete(key);
-          else next.set(key, String(value));
-        }
-        if (resetPage && !('page' in changes)) next.delete('page');
-        return next;
-      });
-    },
-    [setParams],
-  );
+  const update = useUrlUpdater();
   return { query, columns, update, params };
 }

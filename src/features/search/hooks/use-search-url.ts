@@ -1,5 +1,6 @@
-import { useCallback, useMemo } from 'react';
+import { useMemo } from 'react';
 import { useSearchParams } from 'react-router-dom';
+import { useUrlUpdater } from '../../../lib/url-params';
 import type { SearchMode, SearchSort, SearchView } from '../../../../shared/schemas/search';
 
 /** Filters of a search; each is one URL parameter and one API parameter of the same name. */
@@ -61,22 +62,8 @@ export function searchApiParams(state: SearchState, options: { paged?: boolean }
 
 /** The search page's state in the URL; `update` changes some parameters and, unless told otherwise, returns to page 1. */
 export function useSearchUrl() {
-  const [params, setParams] = useSearchParams();
+  const [params] = useSearchParams();
   const state = useMemo(() => searchStateOf(params), [params]);
-  const update = useCallback(
-    (changes: Record<string, string | number | null | undefined>, resetPage = true) => {
-      // From the address bar, not the render's copy: two quick changes (search, then a filter) must both stick.
-      setParams(() => {
-        const next = new URLSearchParams(window.location.search);
-        for (const [key, value] of Object.entries(changes)) {
-          if (value === null || value === undefined || value === '') next.delete(key);
-          else next.set(key, String(value));
-        }
-        if (resetPage && !('page' in changes)) next.delete('page');
-        return next;
-      });
-    },
-    [setParams],
-  );
+  const update = useUrlUpdater();
   return { state, update };
 }
