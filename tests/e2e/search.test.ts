@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import sharp from 'sharp';
+import { carbonPositions, chooseTool, clickDrawingArea, openDrawTab } from './drawing';
 import { openBrowser, shot, signIn } from './browser';
 
 const baseUrl = inject('baseUrl');
@@ -33,32 +33,14 @@ async function pasteStructure(text: string) {
  * atom is found from the editor's molfile (shown in the paste tab) scaled onto the drawn pixels.
  */
 async function drawPyridine() {
-  await page.getByRole('tab', { name: 'Draw' }).click();
-  const toolbar = page.locator('canvas').first();
-  const editor = page.locator('canvas').nth(1);
-  await editor.waitFor();
-  const tools = (await toolbar.boundingBox())!;
-  const area = (await editor.boundingBox())!;
-  await page.mouse.click(tools.x + 34, tools.y + 201);
-  await page.mouse.click(area.x + area.width / 2, area.y + area.height / 2);
-  await page.getByRole('tab', { name: 'Paste or file' }).click();
-  const atoms = (await page.getByLabel('SMILES or molfile').inputValue()).split('\n').filter((line) => / C /.test(line)).map((line) => line.trim().split(/\s+/).slice(0, 2).map(Number));
+  await openDrawTab(page);
+  await chooseTool(page, 'benzene');
+  await clickDrawingArea(page);
+  const atoms = await carbonPositions(page);
   expect(atoms).toHaveLength(6);
-  await page.getByRole('tab', { name: 'Draw' }).click();
-  const { data, info } = await sharp(await editor.screenshot()).raw().toBuffer({ resolveWithObject: true });
-  let [left, top, right] = [Infinity, Infinity, -1];
-  for (let y = 0; y < info.height; y++) {
-    for (let x = 0; x < info.width; x++) {
-      const at = (y * info.width + x) * info.channels;
-      if (data[at] < 120 && data[at + 1] < 120 && data[at + 2] < 120) [left, top, right] = [Math.min(left, x), Math.min(top, y), Math.max(right, x)];
-    }
-  }
-  const xs = atoms.map(([x]) => x);
-  const ys = atoms.map(([, y]) => y);
-  const scale = (right - left) / (Math.max(...xs) - Math.min(...xs));
-  const [topX, topY] = atoms.reduce((best, atom) => (atom[1] > best[1] ? atom : best));
-  await page.mouse.click(tools.x + 12, tools.y + 264);
-  await page.mouse.click(area.x + left + (topX - Math.min(...xs)) * scale, area.y + top + (Math.max(...ys) - topY) * scale);
+  const topAtom = atoms.reduce((best, atom) => (atom.y < best.y ? atom : best));
+  await chooseTool(page, 'N');
+  await page.mouse.click(topAtom.x, topAtom.y);
 }
 
 describe('a member searches the demo group’s records', () => {
