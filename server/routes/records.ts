@@ -12,6 +12,8 @@ import { recordHistory } from '../services/record-history';
 import { addPhoto, MAX_PHOTO_BYTES } from '../services/photos';
 import { presentPhoto, presentRecord, presentRecordListItem } from '../presenters/records';
 import { BadRequestError } from '../errors';
+import { dataStamp } from '../services/data-stamp';
+import { jsonBody, responseCache, sendJsonBody, StampedCache } from '../services/read-cache';
 
 export const recordsRouter = Router();
 
@@ -23,10 +25,17 @@ async function recordResponse(id: number, user: Parameters<typeof canEditRecord>
   return presentRecord(record, canEditRecord(user, record));
 }
 
+/** Records as their page reads them, at a data stamp (the page's answer differs only in `canEdit`). */
+const fullRecords = new StampedCache<Awaited<ReturnType<typeof loadFullRecord>>>({ max: 5_000 });
+
+/** The same list for everyone who may read it: kept per data stamp (services/read-cache.ts), so never stale after a write. */
 recordsRouter.get('/', allow('viewer'), handle({ query: recordListQuerySchema }, async ({ query }, _req, res) => {
-  const { ids, total } = await listRecordIds(query);
-  const { records, photoCounts } = await loadListRecords(ids);
-  res.json({ items: records.map((record) => presentRecordListItem(record, photoCounts.get(record.id) ?? 0)), total, page: query.page, pageSize: query.pageSize });
+  const stamp = await dataStamp();
+  sendJsonBody(res, await responseCache.get(`records:${JSON.stringify(query)}`, stamp, async () => {
+    const { ids, total } = await listRecordIds(query);
+    const { records, photoCounts } = await loadListRecords(ids);
+    return jsonBody({ items: records.map((record) => presentRecordListItem(record, photoCounts.get(record.id) ?? 0)), total, page: query.page, pageSize: query.pageSize });
+  }));
 }));
 
 recordsRouter.post('/', allow('member'), handle({ body: recordInputSchema }, async ({ body }, req, res) => {
@@ -36,7 +45,10 @@ recordsRouter.post('/', allow('member'), handle({ body: recordInputSchema }, asy
 }));
 
 recordsRouter.get('/:id', allow('viewer'), handle({ params: idParamSchema }, async ({ params }, req, res) => {
-  res.json(await recordResponse(params.id, req.user));
+  const stamp = await dataStamp();
+  const record = await fullRecords.get(String(params.id), stamp, () => loadFullRecord(params.id));
+  const canEdit = canEditRecord(req.user, record);
+  sendJsonBody(res, await responseCache.get(`record:${params.id}:${canEdit}`, stamp, () => jsonBody(presentRecord(structuredClone(record), canEdit))));
 }));
 
 recordsRouter.patch('/:id', allow('member'), handle({ params: idParamSchema, body: recordUpdateSchema }, async ({ params, body }, req, res) => {

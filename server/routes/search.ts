@@ -1,15 +1,31 @@
+import { createHash } from 'node:crypto';
+import { performance } from 'node:perf_hooks';
 import { Router } from 'express';
 import { allow } from '../middleware/access';
 import { handle } from '../middleware/validate';
 import { searchQuerySchema } from '../../shared/schemas/search';
 import { search } from '../services/search/search';
 import { searchContributors } from '../services/search/contributors';
+import { dataStamp } from '../services/data-stamp';
+import { responseCache } from '../services/read-cache';
 
 export const searchRouter = Router();
 
 /** Text, similarity and substructure search over active records, with the shared filters; see services/search. */
+/**
+ * Answers are the same for every reader, so they are kept per data stamp (services/read-cache.ts): any write
+ * makes the next search compute afresh. `tookMs` (last in the answer) is this request's time on the server.
+ */
 searchRouter.get('/', allow('viewer'), handle({ query: searchQuerySchema }, async ({ query }, _req, res) => {
-  res.json(await search(query));
+  const started = performance.now();
+  const stamp = await dataStamp();
+  const kept = await responseCache.get(`search:${JSON.stringify(query)}`, stamp, async () => {
+    const { tookMs: _tookMs, ...answer } = await search(query);
+    const bytes = Buffer.from(JSON.stringify(answer).slice(0, -1));
+    return { bytes, etag: `W/"${createHash('sha1').update(bytes).digest('base64url')}"` };
+  });
+  const tookMs = Math.round((performance.now() - started) * 10) / 10;
+  res.set('ETag', kept.etag).type('application/json').send(Buffer.concat([kept.bytes, Buffer.from(`,"tookMs":${tookMs}}`)]));
 }));
 
 /** The people the contributor filter offers. */

@@ -7,9 +7,6 @@ import type { KnowledgeSet, ScoutCompound, ScoutMeasurement } from '../scout/typ
 import type { Eluent } from '../../shared/schemas/eluent';
 import { fingerprintFromBytes } from './compound-fingerprints';
 
-/** How often the database is asked whether records changed (ms); in between, the cached model is used as is. */
-export const knowledgeCheckIntervalMs = 3000;
-
 const signatureSql = `
   SELECT (SELECT count(*) FROM condition_records WHERE status = 'active') AS active,
          (SELECT coalesce(max(updated_at)::text, '') || ':' || coalesce(sum(revision), 0) FROM condition_records) AS records,
@@ -68,33 +65,35 @@ function fallbackFingerprint(idcode: string): Int32Array {
   return words;
 }
 
-let cached: { signature: string; model: ScoutModel; checkedAt: number } | null = null;
-let pending: Promise<ScoutModel> | null = null;
+let cached: { signature: string; model: ScoutModel; stamp: string } | null = null;
+let pending: { stamp: string; promise: Promise<ScoutModel> } | null = null;
 
-async function refresh(): Promise<ScoutModel> {
+async function refresh(stamp: string): Promise<ScoutModel> {
   const signature = await knowledgeSignature();
   if (cached && cached.signature === signature) {
-    cached.checkedAt = Date.now();
+    cached.stamp = stamp;
     return cached.model;
   }
   const model = buildScoutModel(await loadKnowledge(signature));
-  cached = { signature, model, checkedAt: Date.now() };
+  cached = { signature, model, stamp };
   return model;
 }
 
 /**
- * The Scout model of the current records, cached in this process. At most every few seconds a cheap signature
- * query (counts and latest change times) decides whether to reload; other processes do the same, so every
- * process follows the database without messages between them.
+ * The Scout model of the records as of the data stamp `stamp` (services/data-stamp.ts), cached in this process.
+ * While the stamp is unchanged (no commit anywhere since) the model is used as is; after a change a cheap
+ * signature query (counts and latest change times) decides whether to reload. So every process follows every
+ * committed write on its next Scout, without messages between processes.
  */
-export async function currentScoutModel(): Promise<ScoutModel> {
-  if (cached && Date.now() - cached.checkedAt < knowledgeCheckIntervalMs) return cached.model;
-  pending ??= refresh().finally(() => {
-    pending = null;
+export async function currentScoutModel(stamp: string): Promise<ScoutModel> {
+  if (cached && cached.stamp === stamp) return cached.model;
+  if (pending?.stamp === stamp) return pending.promise;
+  const promise = refresh(stamp).finally(() => {
+    if (pending?.promise === promise) pending = null;
   });
-  return pending;
+  pending = { stamp, promise };
+  return promise;
 }
-
 /** Forgets the cached model (tests, or after a bulk change made in this process). */
 export function forgetScoutModel(): void {
   cached = null;

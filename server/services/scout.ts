@@ -1,3 +1,4 @@
+import { LRUCache } from 'lru-cache';
 import { analyseStructure, fingerprintMolecule } from '../chem';
 import { Compound } from '../models';
 import { UnprocessableError } from '../errors';
@@ -5,25 +6,53 @@ import { scout, ScoutOptionError } from '../scout/engine';
 import type { ScoutInputParsed, ScoutResult } from '../../shared/schemas/scout';
 import { fingerprintFromBytes } from './compound-fingerprints';
 import { currentScoutModel } from './scout-knowledge';
+import { dataStamp } from './data-stamp';
+
+/** What Scout needs of a structure text; it depends on the text alone, so it is kept (LRU) across data changes. */
+interface ReadStructure {
+  idcode: string;
+  canonicalSmiles: string;
+  descriptors: ReturnType<typeof analyseStructure>['descriptors'];
+  classes: ReturnType<typeof analyseStructure>['classes'];
+  svg: string;
+  /** Fingerprint of the neutral parent, computed on first need (a stored compound's fingerprint is used instead). */
+  parentFingerprint: () => Int32Array;
+}
+
+const readStructures = new LRUCache<string, ReadStructure>({ max: 2_000 });
+
+/** Parses and describes a structure text once (~10–20 ms); StructureError (400/413/422) for input the engine refuses. */
+function readStructure(text: string): ReadStructure {
+  const hit = readStructures.get(text);
+  if (hit) return hit;
+  const analysis = analyseStructure(text);
+  let fingerprint: Int32Array | undefined;
+  const read: ReadStructure = {
+    idcode: analysis.identity.idcode, canonicalSmiles: analysis.identity.canonicalSmiles, descriptors: analysis.descriptors, classes: analysis.classes, svg: analysis.svg,
+    parentFingerprint: () => (fingerprint ??= fingerprintMolecule(analysis.parent)),
+  };
+  readStructures.set(text, read);
+  return read;
+}
 
 /**
  * Scout for a structure text: the chemistry engine parses it (its StructureError gives 400/413/422 with the
  * reason), the stored fingerprint is used when the compound is already known, and the engine answers from the
- * cached model of the active records.
+ * model of the active records as of `stamp` (services/data-stamp.ts; the current one when not given).
  */
-export async function runScout(input: ScoutInputParsed): Promise<ScoutResult> {
-  const analysis = analyseStructure(input.structure);
-  const existing = await Compound.findOne({ where: { idcode: analysis.identity.idcode }, attributes: ['id', 'fingerprint'] });
-  const fingerprint = existing?.fingerprint ? fingerprintFromBytes(existing.fingerprint) : fingerprintMolecule(analysis.parent);
-  const model = await currentScoutModel();
-  const query = { id: existing?.id ?? null, smiles: analysis.identity.canonicalSmiles, descriptors: analysis.descriptors, classes: analysis.classes, fingerprint };
+export async function runScout(input: ScoutInputParsed, stamp?: string): Promise<ScoutResult> {
+  const structure = readStructure(input.structure);
+  const existing = await Compound.findOne({ where: { idcode: structure.idcode }, attributes: ['id', 'fingerprint'] });
+  const fingerprint = existing?.fingerprint ? fingerprintFromBytes(existing.fingerprint) : structure.parentFingerprint();
+  const model = await currentScoutModel(stamp ?? (await dataStamp()));
+  const query = { id: existing?.id ?? null, smiles: structure.canonicalSmiles, descriptors: structure.descriptors, classes: structure.classes, fingerprint };
   try {
     const result = scout(model, query, { targetRf: input.targetRf, solventPair: input.solventPair, phase: input.phase });
-    const { descriptors } = analysis;
+    const { descriptors } = structure;
     return {
       query: {
-        canonicalSmiles: analysis.identity.canonicalSmiles, formula: descriptors.formula, mw: descriptors.mw, clogp: descriptors.clogp, tpsa: descriptors.tpsa,
-        hbd: descriptors.hbd, hba: descriptors.hba, classes: analysis.classes, svg: analysis.svg, existingCompoundId: existing?.id ?? null,
+        canonicalSmiles: structure.canonicalSmiles, formula: descriptors.formula, mw: descriptors.mw, clogp: descriptors.clogp, tpsa: descriptors.tpsa,
+        hbd: descriptors.hbd, hba: descriptors.hba, classes: structure.classes, svg: structure.svg, existingCompoundId: existing?.id ?? null,
       },
       ...result,
     };

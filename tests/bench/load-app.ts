@@ -24,10 +24,16 @@ export interface RunningApp {
   stop: () => Promise<void>;
 }
 
+/**
+ * Extra Node flags for the app process, from RFOLIO_BENCH_APP_NODE_FLAGS (space-separated), e.g.
+ * `--cpu-prof --cpu-prof-dir=/tmp/prof` to profile the app under load (Node refuses --cpu-prof in NODE_OPTIONS).
+ */
+const appNodeFlags = () => (process.env.RFOLIO_BENCH_APP_NODE_FLAGS ?? '').split(/\s+/).filter(Boolean);
+
 /** Starts the app with NODE_ENV=production, a random SESSION_SECRET and RFOLIO_SEED_DEMO=1; resolves once /api/health is 200. */
 export async function startApp(databaseUrl: string): Promise<RunningApp> {
   const port = await freePort();
-  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  const child: ChildProcess = spawn(process.execPath, [...appNodeFlags(), '--import', 'tsx', 'server/index.ts'], {
     cwd: projectRoot,
     env: {
       ...process.env,
