@@ -1,4 +1,5 @@
 import { popcount32 } from '../chem/similarity-index';
+import { polarGroupCountsOfSmiles } from '../chem/polar-groups';
 import { classVector, descriptorVector, Standardiser } from './features';
 import type { ScoutDescriptors } from './types';
 
@@ -41,22 +42,31 @@ function bitCount(words: Int32Array): number {
   return sum;
 }
 
+interface KernelInput {
+  smiles: string;
+  descriptors: ScoutDescriptors;
+  classes: readonly string[];
+}
+
+/** Descriptors (features.ts) followed by the polar group counts (server/chem/polar-groups.ts). */
+const numericFeatures = (compound: KernelInput) => [...descriptorVector(compound.descriptors), ...polarGroupCountsOfSmiles(compound.smiles)];
+
 /** Prepares kernel points with standardisers fitted on the knowledge set's compounds. */
 export class KernelSpace {
   private readonly descriptorScale: Standardiser;
   private readonly classScale: Standardiser;
 
-  constructor(compounds: readonly { descriptors: ScoutDescriptors; classes: readonly string[] }[], readonly weights: KernelWeights = defaultKernelWeights) {
-    this.descriptorScale = new Standardiser(compounds.map((compound) => descriptorVector(compound.descriptors)));
+  constructor(compounds: readonly KernelInput[], readonly weights: KernelWeights = defaultKernelWeights) {
+    this.descriptorScale = new Standardiser(compounds.map(numericFeatures));
     this.classScale = new Standardiser(compounds.map((compound) => classVector(compound.classes)));
   }
 
-  point(compound: { descriptors: ScoutDescriptors; classes: readonly string[]; fingerprint: ArrayLike<number> }): KernelPoint {
+  point(compound: KernelInput & { fingerprint: ArrayLike<number> }): KernelPoint {
     const fingerprint = Int32Array.from(compound.fingerprint, (word) => word | 0);
     return {
       fingerprint,
       bits: bitCount(fingerprint),
-      descriptors: this.descriptorScale.apply(descriptorVector(compound.descriptors)),
+      descriptors: this.descriptorScale.apply(numericFeatures(compound)),
       classes: this.classScale.apply(classVector(compound.classes)),
     };
   }
