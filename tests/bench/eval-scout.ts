@@ -13,6 +13,7 @@ import { openTlcKnowledge, withoutCompound } from './open-tlc-knowledge';
 import { foldOf, scoreCompound, summarise, hitWindow, type CompoundScore } from './scout-scoring';
 import type { KnowledgeSet } from '../../server/scout/types';
 import { closeFingerprintPool } from '../../server/chem';
+import { transferCeilings } from './transfer-ceiling';
 
 const { values } = parseArgs({ options: { train: { type: 'string' }, test: { type: 'string' } } });
 if (Boolean(values.train) !== Boolean(values.test)) throw new Error('Give both --train FILE and --test FILE, or neither.');
@@ -54,5 +55,12 @@ console.log(`structure-blind baseline MAE (Rf):   ${f3(summary.baselineMae)}  (m
 console.log(`90 % interval coverage:              ${f3(summary.coverage)}`);
 console.log(`hit rate (hexane/EtOAc ratio for Rf 0.3 gives ${hitWindow[0]}–${hitWindow[1]} on the compound's measured curve): ${f3(summary.hit)} of ${summary.hitCompounds} compounds with a curve`);
 for (const [level, group] of Object.entries(summary.byConfidence)) console.log(`  confidence ${level}: ${group.compounds} compounds, MAE ${Number.isNaN(group.mae) ? '–' : f3(group.mae)}`);
+if (!values.train) {
+  // Yardstick (tests/bench/transfer-ceiling.ts): the error left when the held-out compound's own Rf in one eluent is known.
+  console.log('yardstick — one measured plate of the held-out compound carried to the other eluents by lines over the other compounds:');
+  for (const row of transferCeilings(openTlcKnowledge(resolve('tests/fixtures/open-tlc/tlc-rf.csv')))) {
+    console.log(`  known in ${row.reference.padEnd(44)} MAE ${f3(row.mae)}  hit ${f3(row.hit)} of ${row.hitCompounds}`);
+  }
+}
 console.log(`time: ${((Date.now() - started) / 1000).toFixed(1)} s`);
 console.log(`MAE=${summary.mae.toFixed(4)} hit=${summary.hit.toFixed(4)}`);

@@ -14,7 +14,7 @@ export const hitWindow = [0.15, 0.45] as const;
 const hexanes = 'hexanes';
 const ethylAcetate = 'ethyl-acetate';
 
-const eluentKey = (components: ScoutMeasurement['components']) =>
+export const eluentKey = (components: ScoutMeasurement['components']) =>
   [...components].filter((part) => part.parts > 0).sort((a, b) => a.solvent.localeCompare(b.solvent)).map((part) => `${part.solvent}:${(part.parts / components.reduce((sum, item) => sum + item.parts, 0)).toFixed(4)}`).join('|');
 
 /** Mean Rf per eluent over a knowledge set: the structure-blind baseline. */
