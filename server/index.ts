@@ -1,15 +1,11 @@
-import { env } from './config/env';
+import cluster, { type Worker } from 'node:cluster';
+import { env, type Env } from './config/env';
 import { logger } from './logger';
 import { migrator } from './db/migrator';
 import { sequelize } from './db/sequelize';
-import { createApp } from './app';
-import { createHttpServer } from './http-server';
 import { seedDemoOnce, demoAccounts } from '../seeders';
-import { startMailCatcher } from './mail/catcher';
-import { usesMailCatcher } from './mail/send';
-import { searchIndexes } from './services/search/process-indexes';
 
-let config;
+let config: Env;
 try {
   config = env();
 } catch (err) {
@@ -17,19 +13,11 @@ try {
   process.exit(1);
 }
 
-await migrator.up();
-if (config.demo) await seedDemoOnce();
-await searchIndexes().catch((error) => logger.warn({ err: error }, 'search indexes not built at start; the first search retries'));
+const url = `http://${config.HOST}:${config.PORT}`;
 
-const mailCatcherPort = usesMailCatcher() ? await startMailCatcher(config.MAIL_CATCHER_PORT) : null;
-if (!usesMailCatcher() && !config.SMTP_HOST) logger.warn('SMTP_HOST is not set: invitations and password resets cannot be e-mailed.');
-
-const { app, close } = createApp();
-const server = createHttpServer(app);
-server.keepAliveTimeout = 65_000;
-server.listen(config.PORT, config.HOST, () => {
-  const url = `http://${config.HOST}:${config.PORT}`;
-  console.log(`\nRfolio is serving ${url}`);
+/** What `npm start` prints once the port is served. */
+function announce(mailCatcherPort: number | null) {
+  console.log(`\nRfolio is serving ${url}${config.workers > 1 ? ` (${config.workers} app processes)` : ''}`);
   if (config.demo) {
     console.log('Demo sign-ins (invented group, invented records):');
     for (const a of demoAccounts()) console.log(`  ${a.role.padEnd(8)} ${a.email}  password: ${a.password}`);
@@ -38,18 +26,85 @@ server.listen(config.PORT, config.HOST, () => {
     console.log(`Mail catcher (not in production): smtp://127.0.0.1:${mailCatcherPort}, read it as an admin at ${url}/admin/mailbox`);
   }
   console.log('Stop with Ctrl+C.\n');
-});
-
-let closing = false;
-async function shutdown(signal: string) {
-  if (closing) return;
-  closing = true;
-  logger.info({ signal }, 'shutting down');
-  server.close();
-  server.closeAllConnections();
-  await close().catch(() => undefined);
-  await sequelize.close().catch(() => undefined);
-  process.exit(0);
 }
-process.on('SIGINT', () => void shutdown('SIGINT'));
-process.on('SIGTERM', () => void shutdown('SIGTERM'));
+
+/** One app process: search indexes, (outside production) the mail catcher, the HTTP server. */
+async function serve(options: { announce: boolean }) {
+  const [{ createApp }, { createHttpServer }, { startMailCatcher }, { usesMailCatcher }, { searchIndexes }] = await Promise.all([
+    import('./app'), import('./http-server'), import('./mail/catcher'), import('./mail/send'), import('./services/search/process-indexes'),
+  ]);
+  await searchIndexes().catch((error) => logger.warn({ err: error }, 'search indexes not built at start; the first search retries'));
+  const mailCatcherPort = usesMailCatcher() ? await startMailCatcher(config.MAIL_CATCHER_PORT) : null;
+  if (options.announce && !usesMailCatcher() && !config.SMTP_HOST) logger.warn('SMTP_HOST is not set: invitations and password resets cannot be e-mailed.');
+
+  const { app, close } = createApp();
+  const server = createHttpServer(app);
+  server.keepAliveTimeout = 65_000;
+  server.listen(config.PORT, config.HOST, () => {
+    if (options.announce) announce(mailCatcherPort);
+  });
+
+  let closing = false;
+  async function shutdown(signal: string) {
+    if (closing) return;
+    closing = true;
+    logger.info({ signal }, 'shutting down');
+    server.close();
+    server.closeAllConnections();
+    await close().catch(() => undefined);
+    await sequelize.close().catch(() => undefined);
+    process.exit(0);
+  }
+  process.on('SIGINT', () => void shutdown('SIGINT'));
+  process.on('SIGTERM', () => void shutdown('SIGTERM'));
+}
+
+/**
+ * The primary of RFOLIO_WORKERS app processes (node:cluster, connections shared round-robin): it migrates and
+ * seeds once, then forks the workers, replaces one that dies, and on SIGINT/SIGTERM stops them all before it
+ * exits. Everything the workers share lives in PostgreSQL (sessions, throttle counters, records); each keeps
+ * its own search indexes (current through LISTEN/NOTIFY) and per-data-stamp answers.
+ */
+async function supervise(count: number) {
+  let closing = false;
+  let listening = 0;
+  const fork = () => cluster.fork();
+  cluster.on('listening', () => {
+    listening += 1;
+    if (listening === count) announce(null);
+  });
+  cluster.on('exit', (worker: Worker, code, signal) => {
+    if (closing) return;
+    logger.warn({ worker: worker.id, code, signal }, 'an app process exited; starting another');
+    setTimeout(fork, 1_000).unref();
+  });
+  for (let i = 0; i < count; i++) fork();
+
+  const stop = async (signal: string) => {
+    if (closing) return;
+    closing = true;
+    logger.info({ signal }, 'stopping the app processes');
+    const workers = Object.values(cluster.workers ?? {}).filter((worker): worker is Worker => worker !== undefined && !worker.isDead());
+    await Promise.all(workers.map((worker) => new Promise((resolve) => {
+      worker.once('exit', resolve);
+      worker.process.kill('SIGTERM');
+    })));
+    await sequelize.close().catch(() => undefined);
+    process.exit(0);
+  };
+  process.on('SIGINT', () => void stop('SIGINT'));
+  process.on('SIGTERM', () => void stop('SIGTERM'));
+}
+
+if (cluster.isWorker) {
+  await serve({ announce: false });
+} else {
+  await migrator.up();
+  if (config.demo) await seedDemoOnce();
+  if (config.workers > 1) {
+    await sequelize.close();
+    await supervise(config.workers);
+  } else {
+    await serve({ announce: true });
+  }
+}

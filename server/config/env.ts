@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 const envSchema = z
@@ -24,6 +25,8 @@ const envSchema = z
     SIGNIN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
     /** Where throttle counters live; default postgres in production, memory elsewhere. */
     SIGNIN_THROTTLE_STORE: z.enum(['memory', 'postgres']).optional(),
+    /** App processes serving the port (node:cluster); default one per core in production, 1 elsewhere. */
+    RFOLIO_WORKERS: z.coerce.number().int().min(1).max(64).optional(),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
     RFOLIO_PG_BIN: z.string().optional(),
     RFOLIO_PGDATA: z.string().optional(),
@@ -32,6 +35,12 @@ const envSchema = z
     if (env.NODE_ENV === 'production' && !env.SESSION_SECRET) {
       ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'required in production (≥ 32 characters)' });
     }
+    if ((env.RFOLIO_WORKERS ?? 1) > 1 && env.NODE_ENV !== 'production') {
+      ctx.addIssue({ code: 'custom', path: ['RFOLIO_WORKERS'], message: 'above 1 only in production: elsewhere the local mail catcher keeps its messages in one process' });
+    }
+    if ((env.RFOLIO_WORKERS ?? 1) > 1 && env.SIGNIN_THROTTLE_STORE === 'memory') {
+      ctx.addIssue({ code: 'custom', path: ['SIGNIN_THROTTLE_STORE'], message: 'memory counts per process; use postgres with RFOLIO_WORKERS above 1' });
+    }
   });
 
 export type Env = z.infer<typeof envSchema> & {
@@ -39,6 +48,8 @@ export type Env = z.infer<typeof envSchema> & {
   demo: boolean;
   sessionSecret: string;
   appUrl: string;
+  /** App processes to run (RFOLIO_WORKERS, or one per core in production). */
+  workers: number;
 };
 
 /** Parses the environment once at start; exits with a clear message when it is unusable. */
@@ -55,6 +66,7 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
     demo: !production && env.NODE_ENV !== 'test' ? true : env.RFOLIO_SEED_DEMO === '1',
     sessionSecret: env.SESSION_SECRET ?? 'rfolio-development-only-secret-not-for-production',
     appUrl: env.APP_URL ?? `http://${env.HOST}:${env.PORT}`,
+    workers: env.RFOLIO_WORKERS ?? (production ? availableParallelism() : 1),
   };
 }
 

@@ -12,12 +12,12 @@ export interface StructureQuery {
   smiles: string;
 }
 
-const CACHE_SIZE = 64;
+const CACHE_SIZE = 1024;
 const cache = new Map<string, StructureQuery>();
 
 /**
  * Parses a SMILES or molfile query with the chemistry engine (bad input → its 400/413/422) and computes
- * the parent's fingerprint (~9 ms). Memoised by text for the pages of one search (LRU of 64).
+ * the parent's fingerprint (~9 ms). Memoised by text (LRU of 1024): pages of one search, and every search again after a write, reuse it.
  */
 export function readStructureQuery(text: string): StructureQuery {
   // A molfile's first lines may be blank (name, program), so only single-line input (SMILES) is trimmed.
