@@ -67,20 +67,29 @@ async function serve(options: { announce: boolean }) {
  */
 async function supervise(count: number) {
   let closing = false;
-  let listening = 0;
+  let announced = false;
+  const listened = new Set<number>();
   const fork = () => cluster.fork();
-  cluster.on('listening', () => {
-    listening += 1;
-    if (listening === count) announce(null);
+  cluster.on('listening', (worker: Worker) => {
+    listened.add(worker.id);
+    if (!announced && listened.size === count) {
+      announced = true;
+      announce(null);
+    }
   });
   cluster.on('exit', (worker: Worker, code, signal) => {
     if (closing) return;
+    if (!listened.has(worker.id)) {
+      // It never served (port taken, database unusable): starting more would fail the same way.
+      logger.error({ worker: worker.id, code, signal }, 'an app process exited before serving; stopping');
+      void stop('start failed', 1);
+      return;
+    }
     logger.warn({ worker: worker.id, code, signal }, 'an app process exited; starting another');
-    setTimeout(fork, 1_000).unref();
+    setTimeout(fork, 1_000);
   });
-  for (let i = 0; i < count; i++) fork();
 
-  const stop = async (signal: string) => {
+  const stop = async (signal: string, exitCode = 0) => {
     if (closing) return;
     closing = true;
     logger.info({ signal }, 'stopping the app processes');
@@ -90,10 +99,11 @@ async function supervise(count: number) {
       worker.process.kill('SIGTERM');
     })));
     await sequelize.close().catch(() => undefined);
-    process.exit(0);
+    process.exit(exitCode);
   };
   process.on('SIGINT', () => void stop('SIGINT'));
   process.on('SIGTERM', () => void stop('SIGTERM'));
+  for (let i = 0; i < count; i++) fork();
 }
 
 if (cluster.isWorker) {
