@@ -55,3 +55,19 @@ export async function carbonPositions(page: Page): Promise<{ x: number; y: numbe
   const scale = (right - left) / (Math.max(...xs) - Math.min(...xs));
   return atoms.map(([x, y]) => ({ x: box.x + left + (x - Math.min(...xs)) * scale, y: box.y + top + (Math.max(...ys) - y) * scale }));
 }
+
+/**
+ * Draws pyridine in OpenChemLib's editor with the mouse: the benzene tool, a click in the drawing area,
+ * then the N tool on the ring's top atom. Tool positions are those of OpenChemLib 9.25's toolbar; the
+ * atom is found from the editor's molfile (shown in the paste tab) scaled onto the drawn pixels.
+ */
+export async function drawPyridine(page: Page) {
+  await openDrawTab(page);
+  await chooseTool(page, 'benzene');
+  await clickDrawingArea(page);
+  const atoms = await carbonPositions(page);
+  if (atoms.length !== 6) throw new Error(`Expected the drawn benzene ring to have 6 carbons, found ${atoms.length}.`);
+  const topAtom = atoms.reduce((best, atom) => (atom.y < best.y ? atom : best));
+  await chooseTool(page, 'N');
+  await page.mouse.click(topAtom.x, topAtom.y);
+}

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openBrowser, shot, signIn } from './browser';
+import { drawPyridine } from './drawing';
 
 const baseUrl = inject('baseUrl');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -42,5 +43,21 @@ describe('Scout in the browser', () => {
     await plan.getByText('Column diameter').waitFor();
     await expect(plan.textContent()).resolves.toMatch(/Still, Kahn & Mitra, J\. Org\. Chem\. 1978/);
     await shot(page, 'scout-column-plan');
+  });
+
+  it('when the demo member draws a molecule in the editor and asks Scout, then a first plate for it appears with its predicted Rf, interval and cautions', async () => {
+    await page.goto(`${baseUrl}/scout`);
+    await page.getByRole('heading', { level: 1, name: 'Scout' }).waitFor();
+    await drawPyridine(page);
+    await page.getByText('C5H5N').first().waitFor({ timeout: 20_000 }); // the server read the drawing as pyridine
+    await page.getByRole('button', { name: 'Scout conditions' }).click();
+    const heading = page.locator('#scout-suggestion');
+    await heading.waitFor({ timeout: 30_000 });
+    expect(await heading.textContent()).toMatch(/^\S+ : \S+ [\d.]+ : [\d.]+ \([\d.]+ % \S+\)$|^100 % /);
+    const expected = await page.locator('text=Expected Rf').locator('..').textContent();
+    expect(expected).toMatch(/0\.\d\d/);
+    await expect(page.getByTestId('scout-confidence').textContent()).resolves.toMatch(/Confidence: (high|medium|low)/);
+    await expect(page.locator('body').textContent()).resolves.toMatch(/safety data sheet/i);
+    await shot(page, 'scout-drawn-pyridine');
   });
 });

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { carbonPositions, chooseTool, clickDrawingArea, openDrawTab } from './drawing';
+import { drawPyridine as drawPyridineIn } from './drawing';
 import { openBrowser, shot, signIn } from './browser';
 
 const baseUrl = inject('baseUrl');
@@ -27,21 +27,7 @@ async function pasteStructure(text: string) {
   await page.getByText('Accepted').first().waitFor({ timeout: 20_000 });
 }
 
-/**
- * Draws pyridine in OpenChemLib's editor with the mouse: the benzene tool, a click in the drawing area,
- * then the N tool on the ring's top atom. Tool positions are those of OpenChemLib 9.25's toolbar; the
- * atom is found from the editor's molfile (shown in the paste tab) scaled onto the drawn pixels.
- */
-async function drawPyridine() {
-  await openDrawTab(page);
-  await chooseTool(page, 'benzene');
-  await clickDrawingArea(page);
-  const atoms = await carbonPositions(page);
-  expect(atoms).toHaveLength(6);
-  const topAtom = atoms.reduce((best, atom) => (atom.y < best.y ? atom : best));
-  await chooseTool(page, 'N');
-  await page.mouse.click(topAtom.x, topAtom.y);
-}
+const drawPyridine = () => drawPyridineIn(page);
 
 describe('a member searches the demo group’s records', () => {
   it('finds records by part of a compound name', async () => {
