@@ -13,6 +13,7 @@ import { errorHandler, apiNotFound } from './middleware/errors';
 import { apiRouter } from './routes';
 import { stopMailCatcher } from './mail/catcher';
 import { stopSearchIndexes } from './services/search/process-indexes';
+import { noteArrival } from './services/data-stamp';
 
 const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
 
@@ -24,6 +25,7 @@ export function createApp(): AppHandle {
   const production = env().NODE_ENV === 'production';
   const sessions = sessionMiddleware();
   app.disable('x-powered-by');
+  app.use(noteArrival);
   app.set('trust proxy', 'loopback');
   app.use(
     helmet({

@@ -40,7 +40,7 @@ passport.serializeUser((user, done) => done(null, user.id));
  */
 passport.deserializeUser<number, IncomingMessage>(async (req, id, done) => {
   try {
-    const user = await sessionUserRow(id);
+    const user = await sessionUserRow(id, req);
     const signedInAt = (req as { session?: { signedInAt?: number } }).session?.signedInAt ?? 0;
     const current = user && user.status === 'active' && signedInAt >= user.sessionsValidAfter.getTime();
     done(null, current ? toSessionUser(user) : false);

@@ -1,10 +1,10 @@
 import type { SessionData, Store } from 'express-session';
+import { dataStamp } from '../services/data-stamp';
 
 /**
- * How long a session read from PostgreSQL is reused by this process (ms). Writes and sign-outs through this
- * process update or drop it at once. Another process's sign-out shows here within this time; ending a
- * person's sessions (disable, password change) also moves their `sessions_valid_after`, which the user
- * check (auth/user-cache.ts, same bound) enforces on every request.
+ * How long a session read from PostgreSQL is reused by this process at most (ms). It is reused only while the
+ * data stamp (services/data-stamp.ts) is unchanged, so a sign-out or any other change to the sessions table —
+ * through this process, another one or plain SQL — applies to the very next request.
  */
 export const SESSION_CACHE_TTL_MS = 5_000;
 const MAX_ENTRIES = 10_000;
@@ -17,32 +17,38 @@ type StoreMethods = Pick<Store, 'get' | 'set' | 'destroy'>;
  * query while the cache is fresh. Entries are kept as JSON (express-session mutates what `get` returns) and
  * never outlive the session's own expiry.
  */
-export function cacheSessionReads<S extends StoreMethods>(store: S): S {
-  const entries = new Map<string, { json: string; until: number }>();
+export function cacheSessionReads<S extends StoreMethods>(store: S, currentStamp: () => Promise<string> = dataStamp): S {
+  const entries = new Map<string, { json: string; until: number; stamp: string }>();
   const get = store.get.bind(store);
   const set = store.set.bind(store);
   const destroy = store.destroy.bind(store);
 
-  const remember = (sid: string, session: SessionData) => {
+  const remember = (sid: string, session: SessionData, stamp: string) => {
     const expires = session.cookie?.expires ? new Date(session.cookie.expires).getTime() : Infinity;
     entries.delete(sid);
-    entries.set(sid, { json: JSON.stringify(session), until: Math.min(Date.now() + SESSION_CACHE_TTL_MS, expires) });
+    entries.set(sid, { json: JSON.stringify(session), until: Math.min(Date.now() + SESSION_CACHE_TTL_MS, expires), stamp });
     if (entries.size > MAX_ENTRIES) entries.delete(entries.keys().next().value as string);
   };
 
   store.get = (sid: string, callback: Callback<SessionData | null>) => {
-    const hit = entries.get(sid);
-    if (hit && hit.until > Date.now()) return callback(null, JSON.parse(hit.json) as SessionData);
-    entries.delete(sid);
-    get(sid, (err: unknown, session?: SessionData | null) => {
-      if (!err && session) remember(sid, session);
-      callback(err, session);
-    });
+    currentStamp().then(
+      (stamp) => {
+        const hit = entries.get(sid);
+        if (hit && hit.until > Date.now() && hit.stamp === stamp) return callback(null, JSON.parse(hit.json) as SessionData);
+        entries.delete(sid);
+        get(sid, (err: unknown, session?: SessionData | null) => {
+          if (!err && session) remember(sid, session, stamp);
+          callback(err, session);
+        });
+      },
+      (err: unknown) => callback(err),
+    );
   };
+  // A write moves the data stamp, so what was written is read back once rather than kept under a stamp it predates.
   store.set = (sid: string, session: SessionData, callback?: Callback) => {
     entries.delete(sid);
     set(sid, session, (err: unknown) => {
-      if (!err) remember(sid, session);
+      entries.delete(sid);
       callback?.(err);
     });
   };

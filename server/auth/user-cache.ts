@@ -1,6 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { User } from '../models';
 import type { Role } from '../../shared/schemas/auth';
+import { dataStamp, requestStamp } from '../services/data-stamp';
 
 /** What a request needs of its signed-in user's row to honour the session. */
 export interface SessionUserRow {
@@ -13,14 +14,14 @@ export interface SessionUserRow {
 }
 
 /**
- * How long a user row read for a session is reused (ms). Changes made through the models in this process
- * evict it at once (hooks below, again after their transaction commits); a change made by another process
- * shows within this time. Ending someone's sessions deletes their session rows, which is never cached.
+ * How long a user row read for a session is reused at most (ms). It is reused only while the data stamp
+ * (services/data-stamp.ts) is unchanged, so any committed change — by this process, another one or plain SQL —
+ * applies to the very next request; changes made through the models in this process also evict it at once.
  */
 export const USER_CACHE_TTL_MS = 5_000;
 
-const entries = new Map<number, { row: SessionUserRow; until: number }>();
-const loading = new Map<number, Promise<SessionUserRow | null>>();
+const entries = new Map<number, { row: SessionUserRow; until: number; stamp: string }>();
+const loading = new Map<number, { stamp: string; promise: Promise<SessionUserRow | null> }>();
 let generation = 0;
 
 /** Drops one user's cached row (or every row): the next request reads the database again. */
@@ -40,20 +41,21 @@ async function read(id: number): Promise<SessionUserRow | null> {
   return row ? { ...row, sessionsValidAfter: new Date(row.sessionsValidAfter) } : null;
 }
 
-/** The user row behind a session: from the cache when fresh, otherwise one query shared by concurrent requests. */
-export async function sessionUserRow(id: number): Promise<SessionUserRow | null> {
+/** The user row behind a session (of request `req`): from the cache while fresh at the request's data stamp, otherwise one query shared by concurrent requests. */
+export async function sessionUserRow(id: number, req?: object): Promise<SessionUserRow | null> {
+  const stamp = await (req ? requestStamp(req) : dataStamp());
   const cached = entries.get(id);
-  if (cached && cached.until > Date.now()) return cached.row;
+  if (cached && cached.until > Date.now() && cached.stamp === stamp) return cached.row;
   const inFlight = loading.get(id);
-  if (inFlight) return inFlight;
+  if (inFlight && inFlight.stamp === stamp) return inFlight.promise;
   const startedAt = generation;
   const promise = read(id).finally(() => {
-    if (loading.get(id) === promise) loading.delete(id);
+    if (loading.get(id)?.promise === promise) loading.delete(id);
   });
-  loading.set(id, promise);
+  loading.set(id, { stamp, promise });
   const row = await promise;
   // A change while the row was being read may have made it stale: use it for this request, do not keep it.
-  if (row && startedAt === generation) entries.set(id, { row, until: Date.now() + USER_CACHE_TTL_MS });
+  if (row && startedAt === generation) entries.set(id, { row, until: Date.now() + USER_CACHE_TTL_MS, stamp });
   return row;
 }
 

@@ -3,7 +3,7 @@ import { allow } from '../middleware/access';
 import { handle } from '../middleware/validate';
 import { scoutInputSchema } from '../../shared/schemas/scout';
 import { runScout } from '../services/scout';
-import { dataStamp } from '../services/data-stamp';
+import { requestStamp } from '../services/data-stamp';
 import { jsonBody, responseCache, sendJsonBody } from '../services/read-cache';
 
 export const scoutRouter = Router();
@@ -12,7 +12,7 @@ export const scoutRouter = Router();
  * Starting conditions for a structure from the recorded neighbours, with the evidence for every number. The
  * answer is the same for every reader, so it is kept per data stamp (services/read-cache.ts): never stale after a write.
  */
-scoutRouter.post('/', allow('viewer'), handle({ body: scoutInputSchema }, async ({ body }, _req, res) => {
-  const stamp = await dataStamp();
+scoutRouter.post('/', allow('viewer'), handle({ body: scoutInputSchema }, async ({ body }, req, res) => {
+  const stamp = await requestStamp(req);
   sendJsonBody(res, await responseCache.get(`scout:${JSON.stringify(body)}`, stamp, async () => jsonBody(await runScout(body, stamp))));
 }));

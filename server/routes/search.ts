@@ -6,7 +6,7 @@ import { handle } from '../middleware/validate';
 import { searchQuerySchema } from '../../shared/schemas/search';
 import { search } from '../services/search/search';
 import { searchContributors } from '../services/search/contributors';
-import { dataStamp } from '../services/data-stamp';
+import { requestStamp } from '../services/data-stamp';
 import { responseCache } from '../services/read-cache';
 
 export const searchRouter = Router();
@@ -16,9 +16,9 @@ export const searchRouter = Router();
  * Answers are the same for every reader, so they are kept per data stamp (services/read-cache.ts): any write
  * makes the next search compute afresh. `tookMs` (last in the answer) is this request's time on the server.
  */
-searchRouter.get('/', allow('viewer'), handle({ query: searchQuerySchema }, async ({ query }, _req, res) => {
+searchRouter.get('/', allow('viewer'), handle({ query: searchQuerySchema }, async ({ query }, req, res) => {
   const started = performance.now();
-  const stamp = await dataStamp();
+  const stamp = await requestStamp(req);
   const kept = await responseCache.get(`search:${JSON.stringify(query)}`, stamp, async () => {
     const { tookMs: _tookMs, ...answer } = await search(query);
     const bytes = Buffer.from(JSON.stringify(answer).slice(0, -1));
