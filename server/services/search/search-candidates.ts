@@ -28,10 +28,10 @@ interface CandidateInput {
  * the fingerprint pre-screen, then exact matching of the survivors, stopping after `limit` matches so the
  * work stays bounded (`truncated` then says so).
  */
-export function findCandidates(indexes: SearchIndexes, input: CandidateInput): Candidates {
+export async function findCandidates(indexes: SearchIndexes, input: CandidateInput): Promise<Candidates> {
   const candidates: Candidates = {};
   if (input.mode !== 'text' && input.structure) {
-    const query = readStructureQuery(input.structure);
+    const query = await readStructureQuery(input.structure);
     if (input.mode === 'similar') {
       const hits = indexes.structures.similar({ fingerprint: query.fingerprint }, { limit: input.limit, threshold: input.threshold });
       candidates.structure = {

@@ -21,7 +21,7 @@ async function presented(ids: number[]) {
 /** Every matching active record, scored and sorted (export uses this too). */
 export async function rankedMatches(query: Omit<SearchQueryParsed, 'page' | 'pageSize' | 'view'>): Promise<{ rows: RankedRow[]; candidates: Candidates }> {
   const indexes = await currentSearchIndexes();
-  const candidates = findCandidates(indexes, query);
+  const candidates = await findCandidates(indexes, query);
   const rows = await matchingRows(query, candidates, query.mode === 'substructure');
   return { rows: rankRows(rows, candidates, query.sort), candidates };
 }

@@ -1,5 +1,5 @@
 import type { Molecule } from 'openchemlib';
-import { fingerprintIdcodeSync, parentOf, parseStructure } from '../../chem';
+import { fingerprintIdcodes, parentOf, parseStructure } from '../../chem';
 import { popcount32 } from '../../chem/similarity-index';
 
 /** A structure query read once: what similarity and substructure search need of it. */
@@ -13,13 +13,14 @@ export interface StructureQuery {
 }
 
 const CACHE_SIZE = 1024;
-const cache = new Map<string, StructureQuery>();
+const cache = new Map<string, Promise<StructureQuery>>();
 
 /**
  * Parses a SMILES or molfile query with the chemistry engine (bad input → its 400/413/422) and computes
- * the parent's fingerprint (~9 ms). Memoised by text (LRU of 1024): pages of one search, and every search again after a write, reuse it.
+ * the parent's fingerprint (~9 ms) in the chemistry engine's worker threads, so other requests go on
+ * meanwhile. Memoised by text (LRU of 1024): pages of one search, and every search again after a write, reuse it.
  */
-export function readStructureQuery(text: string): StructureQuery {
+export async function readStructureQuery(text: string): Promise<StructureQuery> {
   // A molfile's first lines may be blank (name, program), so only single-line input (SMILES) is trimmed.
   const key = text.includes('\n') ? text.trimEnd() : text.trim();
   const hit = cache.get(key);
@@ -30,8 +31,12 @@ export function readStructureQuery(text: string): StructureQuery {
   }
   const input = parseStructure(key).molecule;
   const { parent } = parentOf(input);
-  const query = { input, fingerprint: fingerprintIdcodeSync(parent.getIDCode()), smiles: parent.toIsomericSmiles() };
+  const smiles = parent.toIsomericSmiles();
+  const query = fingerprintIdcodes([parent.getIDCode()]).then(([fingerprint]) => ({ input, fingerprint, smiles }));
   cache.set(key, query);
+  query.catch(() => {
+    if (cache.get(key) === query) cache.delete(key);
+  });
   if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value as string);
   return query;
 }
