@@ -36,7 +36,7 @@ function ethylAcetateFraction(components: ScoutMeasurement['components']): numbe
   return (components.find((part) => part.solvent === ethylAcetate)?.parts ?? 0) / total;
 }
 
-const clampedRm = (rf: number) => rfToRm(Math.min(Math.max(rf, rfClampRange[0]), rfClampRange[1]));
+export const clampedRm = (rf: number) => rfToRm(Math.min(Math.max(rf, rfClampRange[0]), rfClampRange[1]));
 
 /**
  * The compound's own measured Rf at an EtOAc fraction: RM interpolated linearly against log10 of the fraction

@@ -1,8 +1,7 @@
 import { rfToRm, rmToRf } from '../../shared/domain/rf';
-import { rfClampRange } from '../../shared/domain/soczewinski';
 import { ladderSteps } from '../../server/scout/ratio-ladder';
 import type { KnowledgeSet, ScoutMeasurement } from '../../server/scout/types';
-import { eluentKey, hitWindow, measuredRfAt } from './scout-scoring';
+import { clampedRm, eluentKey, hitWindow, measuredRfAt } from './scout-scoring';
 
 /**
  * A yardstick for the evaluation, not part of Scout: how well could anyone do who *had measured* the held-out
@@ -13,7 +12,6 @@ import { eluentKey, hitWindow, measuredRfAt } from './scout-scoring';
  * is the data's own scatter and the eluents' different selectivities rather than a lack of structure knowledge.
  */
 
-const clampedRm = (rf: number) => rfToRm(Math.min(Math.max(rf, rfClampRange[0]), rfClampRange[1]));
 const hexaneEtOAc = (components: ScoutMeasurement['components']) => components.every((part) => part.solvent === 'hexanes' || part.solvent === 'ethyl-acetate');
 const etoacFraction = (components: ScoutMeasurement['components']) =>
   (components.find((part) => part.solvent === 'ethyl-acetate')?.parts ?? 0) / components.reduce((sum, part) => sum + part.parts, 0);
