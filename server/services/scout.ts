@@ -1,10 +1,10 @@
 import { LRUCache } from 'lru-cache';
-import { analyseStructure, fingerprintMolecule } from '../chem';
+import { analyseStructure, type CompoundDescriptors } from '../chem';
 import { Compound } from '../models';
 import { UnprocessableError } from '../errors';
 import { scout, ScoutOptionError } from '../scout/engine';
 import type { ScoutInputParsed, ScoutResult } from '../../shared/schemas/scout';
-import { fingerprintFromBytes } from './compound-fingerprints';
+import { fingerprintOfIdcode } from './compound-fingerprints';
 import { currentScoutModel } from './scout-knowledge';
 import { dataStamp } from './data-stamp';
 
@@ -12,11 +12,11 @@ import { dataStamp } from './data-stamp';
 interface ReadStructure {
   idcode: string;
   canonicalSmiles: string;
-  descriptors: ReturnType<typeof analyseStructure>['descriptors'];
-  classes: ReturnType<typeof analyseStructure>['classes'];
+  descriptors: CompoundDescriptors;
+  classes: string[];
   svg: string;
-  /** Fingerprint of the neutral parent, computed on first need (a stored compound's fingerprint is used instead). */
-  parentFingerprint: () => Int32Array;
+  /** Fingerprint of the neutral parent from its ID code, as stored ones are; computed in the worker pool on first need (a stored compound's is used instead). */
+  parentFingerprint: () => Promise<Int32Array>;
 }
 
 const readStructures = new LRUCache<string, ReadStructure>({ max: 2_000 });
@@ -26,10 +26,14 @@ function readStructure(text: string): ReadStructure {
   const hit = readStructures.get(text);
   if (hit) return hit;
   const analysis = analyseStructure(text);
-  let fingerprint: Int32Array | undefined;
+  const { idcode, canonicalSmiles } = analysis.identity;
+  let fingerprint: Promise<Int32Array> | undefined;
   const read: ReadStructure = {
-    idcode: analysis.identity.idcode, canonicalSmiles: analysis.identity.canonicalSmiles, descriptors: analysis.descriptors, classes: analysis.classes, svg: analysis.svg,
-    parentFingerprint: () => (fingerprint ??= fingerprintMolecule(analysis.parent)),
+    idcode, canonicalSmiles, descriptors: analysis.descriptors, classes: analysis.classes, svg: analysis.svg,
+    parentFingerprint: () => (fingerprint ??= fingerprintOfIdcode(idcode).catch((error: unknown) => {
+      fingerprint = undefined;
+      throw error;
+    })),
   };
   readStructures.set(text, read);
   return read;
@@ -43,7 +47,7 @@ function readStructure(text: string): ReadStructure {
 export async function runScout(input: ScoutInputParsed, stamp?: string): Promise<ScoutResult> {
   const structure = readStructure(input.structure);
   const existing = await Compound.findOne({ where: { idcode: structure.idcode }, attributes: ['id', 'fingerprint'] });
-  const fingerprint = existing?.fingerprint ? fingerprintFromBytes(existing.fingerprint) : structure.parentFingerprint();
+  const fingerprint = await (existing?.fingerprint ? fingerprintOfIdcode(structure.idcode, existing.fingerprint) : structure.parentFingerprint());
   const model = await currentScoutModel(stamp ?? (await dataStamp()));
   const query = { id: existing?.id ?? null, smiles: structure.canonicalSmiles, descriptors: structure.descriptors, classes: structure.classes, fingerprint };
   try {

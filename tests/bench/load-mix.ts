@@ -2,12 +2,16 @@
 import type { AutocannonRequest } from 'autocannon';
 import { behindTlsProxy, type Session } from './load-app';
 
+type Built = Pick<AutocannonRequest, 'method' | 'path' | 'body'>;
+
 export interface MixRoute {
   label: string;
   /** Share of the requests, in twentieths: a group browses records far more often than it runs Scout. */
   weight: number;
   /** Builds one request (path, method, body) from random picks. */
-  build: () => Pick<AutocannonRequest, 'method' | 'path' | 'body'>;
+  build: () => Built;
+  /** Every distinct request of the route (each page, record, word or structure once), for the cold pass. */
+  all: () => Built[];
 }
 
 export interface MixInputs {
@@ -21,18 +25,20 @@ export interface MixInputs {
 
 const pick = <T>(items: readonly T[]): T => items[Math.floor(Math.random() * items.length)];
 
+/** A route whose requests are `request(item)` for an item of `items`, drawn at random. */
+function route<T>(label: string, weight: number, items: readonly T[], request: (item: T) => Built): MixRoute {
+  return { label, weight, build: () => request(pick(items)), all: () => items.map(request) };
+}
+
 /** Every route of the mix; the benchmark probes each and leaves out those the app does not (yet) answer. */
 export function mixRoutes(inputs: MixInputs): MixRoute[] {
+  const pages = Array.from({ length: inputs.pages }, (_, i) => i + 1);
   return [
-    { label: 'records list', weight: 6, build: () => ({ method: 'GET', path: `/api/records?page=${1 + Math.floor(Math.random() * inputs.pages)}` }) },
-    { label: 'record page', weight: 7, build: () => ({ method: 'GET', path: `/api/records/${pick(inputs.recordIds)}` }) },
-    { label: 'text search', weight: 3, build: () => ({ method: 'GET', path: `/api/search?q=${encodeURIComponent(pick(inputs.words))}` }) },
-    {
-      label: 'similarity search',
-      weight: 2,
-      build: () => ({ method: 'GET', path: `/api/search?mode=similar&structure=${encodeURIComponent(pick(inputs.structures))}` }),
-    },
-    { label: 'scout', weight: 2, build: () => ({ method: 'POST', path: '/api/scout', body: JSON.stringify({ structure: pick(inputs.structures) }) }) },
+    route('records list', 6, pages, (page) => ({ method: 'GET', path: `/api/records?page=${page}` })),
+    route('record page', 7, inputs.recordIds, (id) => ({ method: 'GET', path: `/api/records/${id}` })),
+    route('text search', 3, inputs.words, (word) => ({ method: 'GET', path: `/api/search?q=${encodeURIComponent(word)}` })),
+    route('similarity search', 2, inputs.structures, (smiles) => ({ method: 'GET', path: `/api/search?mode=similar&structure=${encodeURIComponent(smiles)}` })),
+    route('scout', 2, inputs.structures, (smiles) => ({ method: 'POST', path: '/api/scout', body: JSON.stringify({ structure: smiles }) })),
   ];
 }
 

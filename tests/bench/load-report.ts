@@ -34,8 +34,12 @@ function figures(latencies: number[], non2xx: number): Figures {
 export class RouteStats {
   private readonly latencies = new Map<string, number[]>();
   private readonly failures = new Map<string, Map<number, number>>();
+  /** When each response came (ms since the first) and how long it took, for the time slices. */
+  private readonly timeline: { at: number; ms: number }[] = [];
+  private readonly started = performance.now();
 
   add(label: string, status: number, ms: number) {
+    this.timeline.push({ at: performance.now() - this.started, ms });
     if (!this.latencies.has(label)) this.latencies.set(label, []);
     this.latencies.get(label)!.push(ms);
     if (status < 200 || status >= 300) {
@@ -55,6 +59,17 @@ export class RouteStats {
     return { ...figures(this.latencies.get(label) ?? [], non2xx), statuses: [...byStatus].map(([status, n]) => `${status}×${n}`).join(' ') };
   }
 
+  /** p50/p99 of the responses that came in each `seconds`-long slice of the run (shows a warm-up tail apart from the steady state). */
+  slices(seconds: number): { from: number; figures: Figures }[] {
+    const bySlice = new Map<number, number[]>();
+    for (const { at, ms } of this.timeline) {
+      const slice = Math.floor(at / 1000 / seconds);
+      if (!bySlice.has(slice)) bySlice.set(slice, []);
+      bySlice.get(slice)!.push(ms);
+    }
+    return [...bySlice].sort(([a], [b]) => a - b).map(([slice, latencies]) => ({ from: slice * seconds, figures: figures(latencies, 0) }));
+  }
+
   overall(): Figures {
     const all = [...this.latencies.values()].flat();
     const non2xx = [...this.failures.values()].flatMap((byStatus) => [...byStatus.values()]).reduce((sum, n) => sum + n, 0);
@@ -71,6 +86,8 @@ export function printRouteTable(stats: RouteStats, durationS: number) {
     const cells = [label.padEnd(20), (r.count / durationS).toFixed(1).padStart(7), ...[r.p50, r.p90, r.p99, r.max].map((v) => v.toFixed(1).padStart(7)), String(r.non2xx).padStart(8)];
     console.log(`${cells.join(' ')}${r.statuses ? `  (${r.statuses})` : ''}`);
   }
+  const slices = stats.slices(5).map(({ from, figures: f }) => `${from}–${from + 5} s p50=${f.p50} p99=${f.p99}`);
+  console.log(`by time: ${slices.join('; ')}`);
   const all = stats.overall();
   console.log(`${'all'.padEnd(20)} ${(all.count / durationS).toFixed(1).padStart(7)} ${[all.p50, all.p90, all.p99, all.max].map((v) => v.toFixed(1).padStart(7)).join(' ')} ${String(all.non2xx).padStart(8)}  (ms)`);
 }

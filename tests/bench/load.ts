@@ -4,7 +4,13 @@
  * From a fresh clone, one command: a throwaway database in the benchmarks' own PostgreSQL cluster, the app
  * (server/index.ts, NODE_ENV=production, demo group seeded) on 127.0.0.1 only, four demo users signed in,
  * then autocannon with 100 connections for 20 s over a mix of signed-in reads (tests/bench/load-mix.ts).
- * Routes the app does not answer yet are left out and named. Prints per-route figures, the load average
+ * Routes the app does not answer yet are left out and named. First a cold pass sends every distinct read of
+ * the mix (each list page, record, word and structure) `--cold-repeats` times (default 3, shuffled, as many at
+ * a time as there are connections) to the freshly started app and prints its figures: the cost of empty caches,
+ * as after a start (a write empties the per-data-stamp answers too, but not the structure reads). Then
+ * `--warmup` seconds of the mix unmeasured, then the measured run. `--write-every S` adds a real write every S
+ * seconds of the measured run (a member bookmarks a record, or takes the bookmark off), each of which moves the
+ * data stamp and so makes every later read recompute once. Prints per-route figures, the load average
  * of the machine (shared, 2 cores) and, last, `rps=<n> p99_ms=<n> errors=<n>` (errors = non-2xx + socket
  * errors + timeouts). Goal: rps ≥ 500, p99 ≤ 250 ms, errors 0.
  * Shares of the mix (load-mix.ts): records list 30 %, record page 35 %, text search 15 %, similarity 10 %,
@@ -27,6 +33,8 @@ const DURATION_S = option('duration', 20);
 const WARMUP_S = option('warmup', 5);
 const DEMO_PASSWORD = process.env.RFOLIO_DEMO_PASSWORD ?? 'rfolio-demo-2026';
 const EQUAL = process.argv.includes('--equal');
+const COLD_REPEATS = option('cold-repeats', 3);
+const WRITE_EVERY_S = option('write-every', 0);
 const loadAverage = () => os.loadavg().map((value) => value.toFixed(2)).join(' ');
 
 async function getJson<T>(app: RunningApp, session: Session, path: string): Promise<T> {
@@ -59,6 +67,29 @@ async function probe(app: RunningApp, routes: MixRoute[], session: Session) {
   return { kept, skipped };
 }
 
+/** Every distinct read `repeats` times in random order, `CONNECTIONS` at a time, each by a random signed-in user. */
+async function coldPass(app: RunningApp, routes: MixRoute[], sessions: Session[], repeats: number) {
+  const requests = routes.flatMap((route) => Array.from({ length: repeats }, () => route.all().map((request) => ({ label: route.label, ...request }))).flat());
+  for (let i = requests.length - 1; i > 0; i--) {
+    const j = Math.floor(Math.random() * (i + 1));
+    [requests[i], requests[j]] = [requests[j], requests[i]];
+  }
+  const stats = new RouteStats();
+  let next = 0;
+  const started = performance.now();
+  await Promise.all(Array.from({ length: CONNECTIONS }, async () => {
+    while (next < requests.length) {
+      const { label, method = 'GET', path, body } = requests[next++];
+      const session = sessions[Math.floor(Math.random() * sessions.length)];
+      const sent = performance.now();
+      const res = await fetch(app.base + path!, { method, body, headers: sessionHeaders(session, method) });
+      await res.arrayBuffer();
+      stats.add(label, res.status, performance.now() - sent);
+    }
+  }));
+  return { stats, durationS: (performance.now() - started) / 1000, count: requests.length };
+}
+
 async function load(app: RunningApp, routes: MixRoute[], sessions: Session[], durationS: number) {
   const stats = new RouteStats();
   const instance = autocannon({ url: app.base, connections: CONNECTIONS, duration: durationS, timeout: 10, requests: autocannonRequests(routes, sessions, EQUAL) });
@@ -76,6 +107,27 @@ function runningApp(): RunningApp | undefined {
   return { base: url.origin, port: Number(url.port), stop: async () => undefined };
 }
 
+/** A write every `everyS` seconds until stopped: bookmark a random record, or remove the bookmark made before. */
+function writer(app: RunningApp, session: Session, recordIds: number[], everyS: number) {
+  const statuses = new Map<number, number>();
+  let marked: number | null = null;
+  const write = async () => {
+    const method = marked === null ? 'POST' : 'DELETE';
+    const recordId = marked ?? recordIds[Math.floor(Math.random() * recordIds.length)];
+    const path = method === 'POST' ? '/api/bookmarks' : `/api/bookmarks?recordId=${recordId}`;
+    const res = await fetch(app.base + path, { method, headers: sessionHeaders(session, method), body: method === 'POST' ? JSON.stringify({ recordId }) : undefined });
+    await res.arrayBuffer();
+    statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
+    if (res.ok) marked = method === 'POST' ? recordId : null;
+  };
+  const timer = setInterval(() => void write().catch(() => statuses.set(0, (statuses.get(0) ?? 0) + 1)), everyS * 1000);
+  return {
+    stop: () => clearInterval(timer),
+    summary: () => [...statuses].map(([status, n]) => `${status}×${n}`).join(' ') || 'none',
+    failed: () => [...statuses].filter(([status]) => status < 200 || status >= 300).reduce((sum, [, n]) => sum + n, 0),
+  };
+}
+
 let app = runningApp();
 const database = app ? undefined : throwawayDatabase('load');
 try {
@@ -88,12 +140,22 @@ try {
   const shares = kept.map((route) => `${route.label} ${EQUAL ? 1 : route.weight}`);
   console.log(`mix (relative shares): ${shares.join(', ')}`);
   if (skipped.length > 0) console.log(`skipped: ${skipped.join('; ')}`);
+  if (COLD_REPEATS > 0) {
+    const cold = await coldPass(app, kept, sessions, COLD_REPEATS);
+    const all = cold.stats.overall();
+    console.log(`cold pass: every distinct read ×${COLD_REPEATS}, ${cold.count} requests, ${CONNECTIONS} at a time, in ${cold.durationS.toFixed(1)} s`);
+    printRouteTable(cold.stats, cold.durationS);
+    console.log(`cold_rps=${Math.round(cold.count / cold.durationS)} cold_p99_ms=${all.p99} cold_errors=${all.non2xx}`);
+  }
   if (WARMUP_S > 0) await load(app, kept, sessions, WARMUP_S);
   console.log(`load average before the run: ${loadAverage()}`);
+  const writes = WRITE_EVERY_S > 0 ? writer(app, sessions[2], inputs.recordIds, WRITE_EVERY_S) : null;
   const { result, stats } = await load(app, kept, sessions, DURATION_S);
+  writes?.stop();
+  if (writes) console.log(`writes during the run (one every ${WRITE_EVERY_S} s, bookmarks by a member): ${writes.summary()}`);
   console.log(`load average after the run: ${loadAverage()}`);
   printRouteTable(stats, result.duration);
-  const errors = result.non2xx + result.errors + result.timeouts;
+  const errors = result.non2xx + result.errors + result.timeouts + (writes?.failed() ?? 0);
   console.log(`connections=${CONNECTIONS} duration_s=${result.duration} requests=${result.requests.total} non2xx=${result.non2xx} socket_errors=${result.errors} timeouts=${result.timeouts}`);
   console.log(`rps=${Math.round(result.requests.total / result.duration)} p99_ms=${stats.overall().p99} errors=${errors}`);
 } finally {

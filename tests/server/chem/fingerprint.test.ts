@@ -4,6 +4,7 @@ import {
   closeFingerprintPool, FINGERPRINT_WORDS, fingerprintIdcodes, fingerprintIdcodeSync, searchKeysForIdcodes,
 } from '../../../server/chem/fingerprint';
 import { searchGraphOf } from '../../../server/chem/fingerprint-worker.mjs';
+import { fingerprintBytes, fingerprintOfIdcode } from '../../../server/services/compound-fingerprints';
 
 const SMILES = ['CC(=O)Oc1ccccc1C(=O)O', 'c1ccc2[nH]ccc2c1', 'CCN(CC)CC', 'O=C(NCc1ccccc1)c1ccncc1', 'CS(=O)(=O)N1CCOCC1', 'OC[C@H]1OC(O)[C@H](O)[C@@H](O)[C@@H]1O'];
 const idcodes = SMILES.map((smiles) => Molecule.fromSmiles(smiles).getIDCode());
@@ -19,6 +20,15 @@ describe('fingerprints in worker threads', () => {
       expect(fingerprint).toHaveLength(FINGERPRINT_WORDS);
       expect(Array.from(fingerprint)).toEqual(Array.from(Molecule.fromIDCode(idcodes[i % idcodes.length], false).getIndex()));
     });
+  });
+
+  it('a stored fingerprint read back (as search and Scout use it for a known compound) equals the one computed from the ID code', async () => {
+    const stored = await fingerprintBytes(idcodes);
+    for (const [i, idcode] of idcodes.entries()) {
+      const computed = Array.from(Molecule.fromIDCode(idcode, false).getIndex());
+      expect(Array.from(await fingerprintOfIdcode(idcode, stored[i]))).toEqual(computed);
+      expect(Array.from(await fingerprintOfIdcode(idcode, null))).toEqual(computed);
+    }
   });
 
   it('the synchronous variant gives the same words', () => {
