@@ -12,7 +12,7 @@ import { recordHistory } from '../services/record-history';
 import { addPhoto, MAX_PHOTO_BYTES } from '../services/photos';
 import { presentPhoto, presentRecord, presentRecordListItem } from '../presenters/records';
 import { BadRequestError } from '../errors';
-import { requestStamp } from '../services/data-stamp';
+import { requestContentStamp } from '../services/data-stamp';
 import { jsonBody, responseCache, sendJsonBody, StampedCache } from '../services/read-cache';
 
 export const recordsRouter = Router();
@@ -30,7 +30,7 @@ const fullRecords = new StampedCache<Awaited<ReturnType<typeof loadFullRecord>>>
 
 /** The same list for everyone who may read it: kept per data stamp (services/read-cache.ts), so never stale after a write. */
 recordsRouter.get('/', allow('viewer'), handle({ query: recordListQuerySchema }, async ({ query }, req, res) => {
-  const stamp = await requestStamp(req);
+  const stamp = await requestContentStamp(req);
   sendJsonBody(res, await responseCache.get(`records:${JSON.stringify(query)}`, stamp, async () => {
     const { ids, total } = await listRecordIds(query);
     const { records, photoCounts } = await loadListRecords(ids);
@@ -45,7 +45,7 @@ recordsRouter.post('/', allow('member'), handle({ body: recordInputSchema }, asy
 }));
 
 recordsRouter.get('/:id', allow('viewer'), handle({ params: idParamSchema }, async ({ params }, req, res) => {
-  const stamp = await requestStamp(req);
+  const stamp = await requestContentStamp(req);
   const record = await fullRecords.get(String(params.id), stamp, () => loadFullRecord(params.id));
   const canEdit = canEditRecord(req.user, record);
   sendJsonBody(res, await responseCache.get(`record:${params.id}:${canEdit}`, stamp, () => jsonBody(presentRecord(structuredClone(record), canEdit))));

@@ -3,7 +3,7 @@ import { allow } from '../middleware/access';
 import { handle } from '../middleware/validate';
 import { scoutInputSchema } from '../../shared/schemas/scout';
 import { runScout } from '../services/scout';
-import { requestStamp } from '../services/data-stamp';
+import { requestContentStamp } from '../services/data-stamp';
 import { jsonBody, responseCache, sendJsonBody } from '../services/read-cache';
 
 export const scoutRouter = Router();
@@ -13,6 +13,6 @@ export const scoutRouter = Router();
  * answer is the same for every reader, so it is kept per data stamp (services/read-cache.ts): never stale after a write.
  */
 scoutRouter.post('/', allow('viewer'), handle({ body: scoutInputSchema }, async ({ body }, req, res) => {
-  const stamp = await requestStamp(req);
+  const stamp = await requestContentStamp(req);
   sendJsonBody(res, await responseCache.get(`scout:${JSON.stringify(body)}`, stamp, async () => jsonBody(await runScout(body, stamp))));
 }));

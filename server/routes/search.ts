@@ -6,7 +6,7 @@ import { handle } from '../middleware/validate';
 import { searchQuerySchema } from '../../shared/schemas/search';
 import { search } from '../services/search/search';
 import { searchContributors } from '../services/search/contributors';
-import { requestStamp } from '../services/data-stamp';
+import { requestContentStamp } from '../services/data-stamp';
 import { responseCache } from '../services/read-cache';
 
 export const searchRouter = Router();
@@ -18,7 +18,7 @@ export const searchRouter = Router();
  */
 searchRouter.get('/', allow('viewer'), handle({ query: searchQuerySchema }, async ({ query }, req, res) => {
   const started = performance.now();
-  const stamp = await requestStamp(req);
+  const stamp = await requestContentStamp(req);
   const kept = await responseCache.get(`search:${JSON.stringify(query)}`, stamp, async () => {
     const { tookMs: _tookMs, ...answer } = await search(query);
     const bytes = Buffer.from(JSON.stringify(answer).slice(0, -1));

@@ -6,7 +6,7 @@ import { scout, ScoutOptionError } from '../scout/engine';
 import type { ScoutInputParsed, ScoutResult } from '../../shared/schemas/scout';
 import { fingerprintOfIdcode } from './compound-fingerprints';
 import { currentScoutModel } from './scout-knowledge';
-import { dataStamp } from './data-stamp';
+import { contentStamp } from './data-stamp';
 
 /** What Scout needs of a structure text; it depends on the text alone, so it is kept (LRU) across data changes. */
 interface ReadStructure {
@@ -48,7 +48,7 @@ export async function runScout(input: ScoutInputParsed, stamp?: string): Promise
   const structure = readStructure(input.structure);
   const existing = await Compound.findOne({ where: { idcode: structure.idcode }, attributes: ['id', 'fingerprint'] });
   const fingerprint = await (existing?.fingerprint ? fingerprintOfIdcode(structure.idcode, existing.fingerprint) : structure.parentFingerprint());
-  const model = await currentScoutModel(stamp ?? (await dataStamp()));
+  const model = await currentScoutModel(stamp ?? (await contentStamp()));
   const query = { id: existing?.id ?? null, smiles: structure.canonicalSmiles, descriptors: structure.descriptors, classes: structure.classes, fingerprint };
   try {
     const result = scout(model, query, { targetRf: input.targetRf, solventPair: input.solventPair, phase: input.phase });
