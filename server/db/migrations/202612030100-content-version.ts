@@ -1,3 +1,4 @@
+import type { QueryInterface } from 'sequelize';
 import type { Migration } from '../migrator';
 
 /**
@@ -23,6 +24,19 @@ export const NOT_CONTENT = [
 
 const usersOnlySignedIn = `(to_jsonb(OLD) - 'last_sign_in_at' - 'updated_at') IS DISTINCT FROM (to_jsonb(NEW) - 'last_sign_in_at' - 'updated_at')`;
 
+/** Adds the content triggers to a table (a later migration creating a content table calls this for it). */
+export async function watchContentTable(qi: QueryInterface, tablename: string): Promise<void> {
+  const table = `"${tablename}"`;
+  const statements = tablename === 'users'
+    ? [
+        `CREATE CONSTRAINT TRIGGER content_changed AFTER INSERT OR DELETE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION rfolio_content_changed()`,
+        `CREATE CONSTRAINT TRIGGER content_changed_update AFTER UPDATE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW WHEN (${usersOnlySignedIn}) EXECUTE FUNCTION rfolio_content_changed()`,
+      ]
+    : [`CREATE CONSTRAINT TRIGGER content_changed AFTER INSERT OR UPDATE OR DELETE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION rfolio_content_changed()`];
+  statements.push(`CREATE TRIGGER content_truncated AFTER TRUNCATE ON ${table} FOR EACH STATEMENT EXECUTE FUNCTION rfolio_content_changed()`);
+  for (const statement of statements) await qi.sequelize.query(statement);
+}
+
 export const up: Migration = async ({ context: qi }) => {
   await qi.sequelize.query(`
     CREATE TABLE data_versions (name TEXT PRIMARY KEY, version BIGINT NOT NULL);
@@ -41,17 +55,7 @@ export const up: Migration = async ({ context: qi }) => {
     `SELECT tablename FROM pg_tables WHERE schemaname = current_schema() AND tablename NOT IN (:excluded) ORDER BY tablename`,
     { replacements: { excluded: NOT_CONTENT } },
   );
-  for (const { tablename } of rows as { tablename: string }[]) {
-    const table = `"${tablename}"`;
-    const statements = tablename === 'users'
-      ? [
-          `CREATE CONSTRAINT TRIGGER content_changed AFTER INSERT OR DELETE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION rfolio_content_changed()`,
-          `CREATE CONSTRAINT TRIGGER content_changed_update AFTER UPDATE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW WHEN (${usersOnlySignedIn}) EXECUTE FUNCTION rfolio_content_changed()`,
-        ]
-      : [`CREATE CONSTRAINT TRIGGER content_changed AFTER INSERT OR UPDATE OR DELETE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION rfolio_content_changed()`];
-    statements.push(`CREATE TRIGGER content_truncated AFTER TRUNCATE ON ${table} FOR EACH STATEMENT EXECUTE FUNCTION rfolio_content_changed()`);
-    for (const statement of statements) await qi.sequelize.query(statement);
-  }
+  for (const { tablename } of rows as { tablename: string }[]) await watchContentTable(qi, tablename);
 };
 
 export const down: Migration = async ({ context: qi }) => {
