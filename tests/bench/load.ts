@@ -9,8 +9,9 @@
  * a time as there are connections) to the freshly started app and prints its figures: the cost of empty caches,
  * as after a start (a write empties the per-data-stamp answers too, but not the structure reads). Then
  * `--warmup` seconds of the mix unmeasured, then the measured run. `--write-every S` adds a real write every S
- * seconds of the measured run (a member bookmarks a record, or takes the bookmark off), each of which moves the
- * data stamp and so makes every later read recompute once. Prints per-route figures, the load average
+ * seconds of the measured run: `--write-kind bookmark` (default; a member bookmarks a record, or takes the
+ * bookmark off: not content, kept answers stay) or `edit` (the admin edits a record's notes: a content change,
+ * so every kept answer is computed again once per app process). Prints per-route figures, the load average
  * of the machine (shared, 2 cores) and, last, `rps=<n> p99_ms=<n> errors=<n>` (errors = non-2xx + socket
  * errors + timeouts). Goal: rps ≥ 500, p99 ≤ 250 ms, errors 0.
  * Shares of the mix (load-mix.ts): records list 30 %, record page 35 %, text search 15 %, similarity 10 %,
@@ -35,6 +36,8 @@ const DEMO_PASSWORD = process.env.RFOLIO_DEMO_PASSWORD ?? 'rfolio-demo-2026';
 const EQUAL = process.argv.includes('--equal');
 const COLD_REPEATS = option('cold-repeats', 3);
 const WRITE_EVERY_S = option('write-every', 0);
+const WRITE_KIND = process.argv.includes('--write-kind') ? process.argv[process.argv.indexOf('--write-kind') + 1] : 'bookmark';
+if (!['bookmark', 'edit'].includes(WRITE_KIND)) throw new Error('--write-kind is bookmark or edit');
 const loadAverage = () => os.loadavg().map((value) => value.toFixed(2)).join(' ');
 
 async function getJson<T>(app: RunningApp, session: Session, path: string): Promise<T> {
@@ -107,18 +110,26 @@ function runningApp(): RunningApp | undefined {
   return { base: url.origin, port: Number(url.port), stop: async () => undefined };
 }
 
-/** A write every `everyS` seconds until stopped: bookmark a random record, or remove the bookmark made before. */
-function writer(app: RunningApp, session: Session, recordIds: number[], everyS: number) {
+/** A write every `everyS` seconds until stopped: a bookmark added or removed, or a record's notes edited. */
+function writer(app: RunningApp, session: Session, recordIds: number[], everyS: number, kind: string) {
   const statuses = new Map<number, number>();
   let marked: number | null = null;
-  const write = async () => {
-    const method = marked === null ? 'POST' : 'DELETE';
-    const recordId = marked ?? recordIds[Math.floor(Math.random() * recordIds.length)];
-    const path = method === 'POST' ? '/api/bookmarks' : `/api/bookmarks?recordId=${recordId}`;
-    const res = await fetch(app.base + path, { method, headers: sessionHeaders(session, method), body: method === 'POST' ? JSON.stringify({ recordId }) : undefined });
+  let edits = 0;
+  const send = async (method: string, path: string, body?: unknown) => {
+    const res = await fetch(app.base + path, { method, headers: sessionHeaders(session, method), body: body === undefined ? undefined : JSON.stringify(body) });
     await res.arrayBuffer();
     statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
-    if (res.ok) marked = method === 'POST' ? recordId : null;
+    return res.ok;
+  };
+  const write = async () => {
+    const recordId = marked ?? recordIds[Math.floor(Math.random() * recordIds.length)];
+    if (kind === 'edit') {
+      await send('PATCH', `/api/records/${recordId}`, { notes: `Edited during the load benchmark (${++edits}).` });
+    } else if (marked === null) {
+      if (await send('POST', '/api/bookmarks', { recordId })) marked = recordId;
+    } else if (await send('DELETE', `/api/bookmarks?recordId=${recordId}`)) {
+      marked = null;
+    }
   };
   const timer = setInterval(() => void write().catch(() => statuses.set(0, (statuses.get(0) ?? 0) + 1)), everyS * 1000);
   return {
@@ -149,10 +160,10 @@ try {
   }
   if (WARMUP_S > 0) await load(app, kept, sessions, WARMUP_S);
   console.log(`load average before the run: ${loadAverage()}`);
-  const writes = WRITE_EVERY_S > 0 ? writer(app, sessions[2], inputs.recordIds, WRITE_EVERY_S) : null;
+  const writes = WRITE_EVERY_S > 0 ? writer(app, WRITE_KIND === 'edit' ? sessions[0] : sessions[2], inputs.recordIds, WRITE_EVERY_S, WRITE_KIND) : null;
   const { result, stats } = await load(app, kept, sessions, DURATION_S);
   writes?.stop();
-  if (writes) console.log(`writes during the run (one every ${WRITE_EVERY_S} s, bookmarks by a member): ${writes.summary()}`);
+  if (writes) console.log(`writes during the run (one every ${WRITE_EVERY_S} s, ${WRITE_KIND === 'edit' ? 'record edits by the admin' : 'bookmarks by a member'}): ${writes.summary()}`);
   console.log(`load average after the run: ${loadAverage()}`);
   printRouteTable(stats, result.duration);
   const errors = result.non2xx + result.errors + result.timeouts + (writes?.failed() ?? 0);
