@@ -15,7 +15,8 @@ function readFields(lines: string[]): Record<string, string> {
   let name: string | null = null;
   let value: string[] = [];
   const flush = () => {
-    if (name !== null) fields[name] = value.join('\n').trim();
+    // defineProperty, so a data item called "__proto__" is kept like any other.
+    if (name !== null) Object.defineProperty(fields, name, { value: value.join('\n').trim(), enumerable: true, writable: true, configurable: true });
     name = null;
     value = [];
   };

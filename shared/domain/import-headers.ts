@@ -81,20 +81,21 @@ export function detectTarget(header: string): string {
  * one single-column field, the first keeps it and the later one is ignored, so the mapping stays valid.
  */
 export function detectMapping(headers: readonly string[], overrides: Record<string, string> = {}): Record<string, string> {
-  const mapping: Record<string, string> = {};
+  // Own keys only, and built with fromEntries: a column may be called "constructor" or "__proto__".
   const taken = new Set(Object.values(overrides).filter((target) => target !== IGNORE_COLUMN && target !== 'notes'));
+  const entries: [string, string][] = [];
   for (const header of headers) {
-    if (header in overrides) {
-      mapping[header] = overrides[header];
+    if (Object.hasOwn(overrides, header)) {
+      entries.push([header, overrides[header]]);
       continue;
     }
     const target = detectTarget(header);
     if (target !== IGNORE_COLUMN && target !== 'notes' && taken.has(target)) {
-      mapping[header] = IGNORE_COLUMN;
+      entries.push([header, IGNORE_COLUMN]);
       continue;
     }
     taken.add(target);
-    mapping[header] = target;
+    entries.push([header, target]);
   }
-  return mapping;
+  return Object.fromEntries(entries);
 }

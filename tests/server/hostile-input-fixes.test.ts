@@ -33,6 +33,25 @@ describe('uploads the multipart parser cannot read', () => {
   });
 });
 
+describe('columns named like JavaScript object properties', () => {
+  it('when a CSV has columns "constructor", "__proto__" and "toString" beside real ones, then the dry run maps each as a column of its own (was 500)', async () => {
+    const csv = ['SMILES,Rf,Eluent,constructor,__proto__,toString', 'OCc1ccccc1,0.3,EtOAc/hexanes 1:4,a,b,c', ''].join('\n');
+    const res = await curator.post('/api/imports?dryRun=1').set('X-CSRF-Token', curator.csrf).attach('file', Buffer.from(csv), 'history.csv');
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(Object.keys(res.body.mapping)).toEqual(['SMILES', 'Rf', 'Eluent', 'constructor', '__proto__', 'toString']);
+    expect(Object.values(res.body.mapping).every((target) => typeof target === 'string')).toBe(true);
+    expect(res.body.mapping.SMILES).toBe('structure');
+  });
+
+  it('when an SD file carries a data item called "__proto__", then it is a column like any other', async () => {
+    const sdf = ['', '  Rfolio', '', '  1  0  0  0  0  0  0  0  0  0999 V2000', '    0.0000    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0', 'M  END',
+      '> <__proto__>', 'odd', '', '> <Rf>', '0.4', '', '$$$$', ''].join('\n');
+    const res = await curator.post('/api/imports?dryRun=1').set('X-CSRF-Token', curator.csrf).attach('file', Buffer.from(sdf), 'history.sdf');
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body.headers).toContain('__proto__');
+  });
+});
+
 describe('a photo whose header reads but whose pixels do not', () => {
   it('when a PNG is cut short after its header, then 422 saying it cannot be decoded (was 500), and no photo is added', async () => {
     // Patterned pixels, so the image data is long enough that half the file keeps the header but not the pixels.

@@ -20,8 +20,10 @@ export function openSdf(text: string): ImportSource {
   async function* rows(after = 0) {
     for (const record of records) {
       if (record.index <= after) continue;
-      const values: Record<string, string> = { [MOLFILE_COLUMN]: record.molfile };
-      for (const name of fieldNames) values[headerOf.get(name) as string] = record.fields[name] ?? '';
+      // fromEntries, so a data item called "__proto__" is a column like any other.
+      const values: Record<string, string> = Object.fromEntries([
+        [MOLFILE_COLUMN, record.molfile], ...fieldNames.map((name) => [headerOf.get(name) as string, record.fields[name] ?? '']),
+      ]);
       yield { row: record.index, line: record.line, values, extraCells: [] };
     }
   }
