@@ -36,11 +36,10 @@ export function columnOf(record: Pick<ConditionRecord, (typeof columnAttribute)[
 /** Reads a record's editable state from the database (inside the caller's transaction). */
 export async function loadRecordState(recordId: number, transaction?: Transaction): Promise<RecordState> {
   const record = await ConditionRecord.findByPk(recordId, { transaction, rejectOnEmpty: true });
-  const [spots, visualisations, photos] = await Promise.all([
-    RecordSpot.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
-    RecordVisualisation.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
-    RecordPhoto.findAll({ where: { recordId, removedAt: null }, order: [['id', 'ASC']], transaction, attributes: ['id'] }),
-  ]);
+  // One after another: a transaction is one connection, which runs one query at a time (pg 9 refuses overlapping ones).
+  const spots = await RecordSpot.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+  const visualisations = await RecordVisualisation.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+  const photos = await RecordPhoto.findAll({ where: { recordId, removedAt: null }, order: [['id', 'ASC']], transaction, attributes: ['id'] });
   return {
     compoundId: record.compoundId,
     technique: record.technique,
