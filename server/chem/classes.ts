@@ -3,16 +3,34 @@ import { compoundClasses, type CompoundClass, type CompoundClassKey } from '../.
 import { classChecks } from './class-checks';
 import type { FragmentSummary } from './fragments';
 
-interface CompiledClass {
-  entry: CompoundClass;
-  include: Molecule[];
-  exclude: Molecule[];
+/** A class's fragment, with the heavy elements a match needs (atom → count), for a cheap prescreen. */
+interface Query {
+  mol: Molecule;
+  needs: [number, number][];
 }
 
-function fragment(smiles: string): Molecule {
+interface CompiledClass {
+  entry: CompoundClass;
+  include: Query[];
+  exclude: Query[];
+}
+
+/** Atoms by atomic number (explicit hydrogens included). */
+function elementCounts(mol: Molecule, heavyOnly: boolean): Map<number, number> {
+  const counts = new Map<number, number>();
+  for (let a = 0; a < mol.getAllAtoms(); a++) {
+    const element = mol.getAtomicNo(a);
+    // An atom list or pseudo atom can match several elements: it asks for none in particular.
+    if (element === 0 || (heavyOnly && element === 1) || mol.getAtomList(a) !== null) continue;
+    counts.set(element, (counts.get(element) ?? 0) + 1);
+  }
+  return counts;
+}
+
+function fragment(smiles: string): Query {
   const mol = Molecule.fromSmiles(smiles, { noCoordinates: true });
   mol.setFragment(true);
-  return mol;
+  return { mol, needs: [...elementCounts(mol, true)] };
 }
 
 let compiled: CompiledClass[] | null = null;
@@ -22,28 +40,42 @@ function compile(): CompiledClass[] {
   return compiled;
 }
 
-/** Every match of the fragment in the molecule, as fragment atom → molecule atom lists. */
-function matches(searcher: SSSearcher, query: Molecule, mol: Molecule): number[][] {
-  searcher.setFragment(query);
-  searcher.setMolecule(mol);
-  if (searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) return [];
-  return searcher.getMatchList();
+/**
+ * One molecule matched against many fragments: it is handed to the searcher once (its features are then
+ * computed once), and a fragment needing an element more often than the molecule has it is not searched.
+ */
+class Target {
+  private readonly counts: Map<number, number>;
+  private readonly searcher = new SSSearcher();
+
+  constructor(readonly mol: Molecule) {
+    this.counts = elementCounts(mol, false);
+    this.searcher.setMolecule(mol);
+  }
+
+  /** Every match of the fragment in the molecule, as fragment atom → molecule atom lists. */
+  matches(query: Query): number[][] {
+    if (query.needs.some(([element, count]) => (this.counts.get(element) ?? 0) < count)) return [];
+    this.searcher.setFragment(query.mol);
+    if (this.searcher.findFragmentInMolecule({ countMode: 'rigorous' }) === 0) return [];
+    return this.searcher.getMatchList();
+  }
 }
 
-function anchors(searcher: SSSearcher, queries: Molecule[], mol: Molecule): Set<number> {
-  return new Set(queries.flatMap((query) => matches(searcher, query, mol).map((match) => match[0])));
+function anchors(target: Target, queries: Query[]): Set<number> {
+  return new Set(queries.flatMap((query) => target.matches(query).map((match) => match[0])));
 }
 
 /** The molecule (in helper state cHelperRings) belongs to this class; see CompoundClass. */
-function belongs(searcher: SSSearcher, compiledClass: CompiledClass, mol: Molecule, neutralAcidPresent: boolean): boolean {
+function belongs(compiledClass: CompiledClass, target: Target, neutralAcidPresent: boolean): boolean {
   const { entry, include, exclude } = compiledClass;
-  const excluded = anchors(searcher, exclude, mol);
+  const excluded = anchors(target, exclude);
   const check = classChecks[entry.key];
   const found = new Set<number>();
   include.forEach((query, index) => {
-    for (const match of matches(searcher, query, mol)) {
+    for (const match of target.matches(query)) {
       if (excluded.has(match[0]) || found.has(match[0])) continue;
-      if (!check || check({ mol, match, include: index, neutralAcidPresent })) found.add(match[0]);
+      if (!check || check({ mol: target.mol, match, include: index, neutralAcidPresent })) found.add(match[0]);
     }
   });
   return found.size >= (entry.minMatches ?? 1);
@@ -62,12 +94,16 @@ export interface ClassifyInput {
  * per-class checks in class-checks.ts.
  */
 export function classify(parent: Molecule, input?: ClassifyInput): CompoundClassKey[] {
-  const searcher = new SSSearcher();
   parent.ensureHelperArrays(Molecule.cHelperRings);
   const neutralAcidPresent = input?.fragments.some((f) => f.role === 'counter-ion' && f.charge === 0) ?? false;
-  const target = input?.molecule ?? parent;
-  target.ensureHelperArrays(Molecule.cHelperRings);
+  const asEntered = input?.molecule ?? parent;
+  asEntered.ensureHelperArrays(Molecule.cHelperRings);
+  const parentTarget = new Target(parent);
+  let enteredTarget: Target | undefined;
   return compile()
-    .filter((compiledClass) => belongs(searcher, compiledClass, compiledClass.entry.key === 'ammonium-salt' ? target : parent, neutralAcidPresent))
+    .filter((compiledClass) => {
+      const target = compiledClass.entry.key === 'ammonium-salt' ? (enteredTarget ??= asEntered === parent ? parentTarget : new Target(asEntered)) : parentTarget;
+      return belongs(compiledClass, target, neutralAcidPresent);
+    })
     .map((compiledClass) => compiledClass.entry.key);
 }

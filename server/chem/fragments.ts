@@ -75,7 +75,8 @@ function larger(a: Fragment, b: Fragment): Fragment {
  */
 export function splitParent(input: Molecule): { parent: Molecule; fragments: FragmentSummary[] } {
   const all = input.getFragments().map(describe);
-  const listed = new Map(all.map((fragment) => [fragment, listedRole(fragment)]));
+  // A lone fragment is the parent whatever it is, so the (costly, ~2 ms) solvent and counter-ion check is skipped.
+  const listed = new Map(all.map((fragment) => [fragment, all.length > 1 ? listedRole(fragment) : null]));
   const pool = [all.filter((f) => listed.get(f) === null), all.filter((f) => f.hasCarbon), all].find((list) => list.length > 0) ?? all;
   const parent = pool.reduce(larger);
   const summaries = new Map<string, FragmentSummary>();
