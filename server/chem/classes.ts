@@ -15,7 +15,7 @@ interface CompiledClass {
   exclude: Query[];
 }
 
-/** Atoms by atomic number (explicit hydrogens included). */
+/** Atoms by atomic number, explicit hydrogens left out when `heavyOnly` (atom lists and pseudo atoms never counted). */
 function elementCounts(mol: Molecule, heavyOnly: boolean): Map<number, number> {
   const counts = new Map<number, number>();
   for (let a = 0; a < mol.getAllAtoms(); a++) {

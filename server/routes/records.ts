@@ -25,10 +25,10 @@ async function recordResponse(id: number, user: Parameters<typeof canEditRecord>
   return presentRecord(record, canEditRecord(user, record));
 }
 
-/** Records as their page reads them, at a data stamp (the page's answer differs only in `canEdit`). */
+/** Records as their page reads them, at a content stamp (the page's answer differs only in `canEdit`). */
 const fullRecords = new StampedCache<Awaited<ReturnType<typeof loadFullRecord>>>({ max: 5_000 });
 
-/** The same list for everyone who may read it: kept per data stamp (services/read-cache.ts), so never stale after a write. */
+/** The same list for everyone who may read it: kept per content stamp (services/data-stamp.ts), so never stale after a content write. */
 recordsRouter.get('/', allow('viewer'), handle({ query: recordListQuerySchema }, async ({ query }, req, res) => {
   const stamp = await requestContentStamp(req);
   sendJsonBody(res, await responseCache.get(`records:${JSON.stringify(query)}`, stamp, async () => {

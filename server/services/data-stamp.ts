@@ -29,7 +29,8 @@ const STAMPS_SQL = `SELECT pg_current_snapshot()::text AS data, 'content:' || (S
 function start(): Reading {
   const startedAt = performance.now();
   const promise = sequelize.query<Stamps>(STAMPS_SQL, { type: QueryTypes.SELECT }).then(([row]) => {
-    const stamps = { data: row.data, content: row.content ?? 'content:none' };
+    // Without a content version (its row gone) the snapshot serves: never a stamp that stays put through writes.
+    const stamps = { data: row.data, content: row.content ?? row.data };
     if (!latest || latest.startedAt < startedAt) latest = { startedAt, stamps };
     return stamps;
   }).finally(() => {

@@ -4,7 +4,7 @@ import { Compound } from '../models';
 import { UnprocessableError } from '../errors';
 import { scout, ScoutOptionError } from '../scout/engine';
 import type { ScoutInputParsed, ScoutResult } from '../../shared/schemas/scout';
-import { fingerprintOfIdcode } from './compound-fingerprints';
+import { fingerprintFromBytes, fingerprintOfIdcode } from './compound-fingerprints';
 import { currentScoutModel } from './scout-knowledge';
 import { contentStamp } from './data-stamp';
 
@@ -47,7 +47,7 @@ function readStructure(text: string): ReadStructure {
 export async function runScout(input: ScoutInputParsed, stamp?: string): Promise<ScoutResult> {
   const structure = readStructure(input.structure);
   const existing = await Compound.findOne({ where: { idcode: structure.idcode }, attributes: ['id', 'fingerprint'] });
-  const fingerprint = await (existing?.fingerprint ? fingerprintOfIdcode(structure.idcode, existing.fingerprint) : structure.parentFingerprint());
+  const fingerprint = existing?.fingerprint ? fingerprintFromBytes(existing.fingerprint) : await structure.parentFingerprint();
   const model = await currentScoutModel(stamp ?? (await contentStamp()));
   const query = { id: existing?.id ?? null, smiles: structure.canonicalSmiles, descriptors: structure.descriptors, classes: structure.classes, fingerprint };
   try {
