@@ -2,10 +2,10 @@
 // The record copies an invented demo record; nothing here is a measurement.
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../server/db/sequelize';
-import { findOrCreateCompound } from '../server/services/compounds';
-import { insertRecord } from '../server/services/record-rows';
-import { loadRecordState } from '../server/services/record-revisions';
-import type { RecordContent } from '../server/services/record-columns';
+import { findOrCreateCompound } from '../server/core/compounds';
+import { insertRecord } from '../server/core/record-rows';
+import { loadRecordState } from '../server/core/record-revisions';
+import type { RecordContent } from '../server/core/record-columns';
 
 /**
  * Seeds a "same compound under another name" case: 1-phenylethanol's first clean TLC entered again by a

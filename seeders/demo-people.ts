@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { User } from '../server/models';
+import { User } from '../server/db/models';
 import { hashPassword } from '../server/auth/passwords';
 
 /** The invented group's bench chemists (role member). Every name is fictional and marked "(demo)". */

@@ -1,6 +1,6 @@
 import type { Eluent } from '../shared/schemas/eluent';
 import type { Spot } from '../shared/schemas/record-parts';
-import type { RecordContent } from '../server/services/record-columns';
+import type { RecordContent } from '../server/core/record-columns';
 import type { DemoCompound } from './demo-compounds';
 import { demoColumn, demoVisualisations } from './demo-details';
 import { closestStep, demoRf, demoSystems, fractionOf, randomSource, type DemoSystem, type Random } from './demo-rf-model';

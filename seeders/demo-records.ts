@@ -2,9 +2,9 @@
 // ratio, yield, note and person here is invented for the demo (see seeders/demo-rf-model.ts for how the
 // Rf values are made plausible). None of it is a measurement; do not use it at the bench.
 import type { Transaction } from 'sequelize';
-import { User } from '../server/models';
-import { findOrCreateCompounds } from '../server/services/compounds';
-import { insertRecord } from '../server/services/record-rows';
+import { User } from '../server/db/models';
+import { findOrCreateCompounds } from '../server/core/compounds';
+import { insertRecord } from '../server/core/record-rows';
 import { demoCompounds } from './demo-compounds';
 import { planDemoRecords } from './demo-plan';
 

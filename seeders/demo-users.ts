@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { User } from '../server/models';
+import { User } from '../server/db/models';
 import { hashPassword } from '../server/auth/passwords';
 import type { Role } from '../shared/schemas/auth';
 import { env } from '../server/config/env';

@@ -1,6 +1,6 @@
 import cluster, { type Worker } from 'node:cluster';
 import { env, type Env } from './config/env';
-import { logger } from './logger';
+import { logger } from './http/logger';
 import { migrator } from './db/migrator';
 import { sequelize } from './db/sequelize';
 import { seedDemoOnce, demoAccounts } from '../seeders';
@@ -31,7 +31,7 @@ function announce(mailCatcherPort: number | null) {
 /** One app process: search indexes, (outside production) the mail catcher, the HTTP server. */
 async function serve(options: { announce: boolean }) {
   const [{ createApp }, { createHttpServer }, { startMailCatcher }, { usesMailCatcher }, { searchIndexes }] = await Promise.all([
-    import('./app'), import('./http-server'), import('./mail/catcher'), import('./mail/send'), import('./services/search/process-indexes'),
+    import('./http/app'), import('./http/http-server'), import('./mail/catcher'), import('./mail/send'), import('./features/search/process-indexes'),
   ]);
   await searchIndexes().catch((error) => logger.warn({ err: error }, 'search indexes not built at start; the first search retries'));
   const mailCatcherPort = usesMailCatcher() ? await startMailCatcher(config.MAIL_CATCHER_PORT) : null;

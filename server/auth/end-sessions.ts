@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { User } from '../models';
+import { User } from '../db/models';
 
 /**
  * Ends every session of a user at once: deletes their rows from the session store (connect-pg-simple keeps

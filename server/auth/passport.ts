@@ -1,7 +1,7 @@
 import type { IncomingMessage } from 'node:http';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import { User } from '../models';
+import { User } from '../db/models';
 import { dummyHash, verifyPassword } from './passwords';
 import { sessionUserRow } from './user-cache';
 import type { SessionUser } from '../../shared/schemas/auth';

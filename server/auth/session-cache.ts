@@ -1,5 +1,5 @@
 import type { SessionData, Store } from 'express-session';
-import { dataStamp } from '../services/data-stamp';
+import { dataStamp } from '../db/data-stamp';
 
 /**
  * How long a session read from PostgreSQL is reused by this process at most (ms). It is reused only while the

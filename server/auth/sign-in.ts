@@ -1,7 +1,7 @@
 import type { Request } from 'express';
-import { csrfToken } from '../middleware/csrf';
+import { csrfToken } from '../http/middleware/csrf';
 import type { SessionUser } from '../../shared/schemas/auth';
-import { User } from '../models';
+import { User } from '../db/models';
 
 /** Regenerates the session at sign-in (no fixation), keeps a fresh CSRF token in it and stamps the sign-in. */
 export async function signIn(req: Request, user: SessionUser): Promise<string> {

@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
-import { User } from '../models';
+import { User } from '../db/models';
 import type { Role } from '../../shared/schemas/auth';
-import { dataStamp, requestStamp } from '../services/data-stamp';
+import { dataStamp, requestStamp } from '../db/data-stamp';
 
 /** What a request needs of its signed-in user's row to honour the session. */
 export interface SessionUserRow {

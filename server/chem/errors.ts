@@ -1,4 +1,4 @@
-import { AppError } from '../errors';
+import { AppError } from '../http/errors';
 
 /** Why a structure was refused; stable codes the client can map to help text. */
 export type StructureErrorCode =

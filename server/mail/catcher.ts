@@ -2,7 +2,7 @@ import type { AddressInfo } from 'node:net';
 import { SMTPServer } from 'smtp-server';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { keepMail } from './mailbox';
-import { logger } from '../logger';
+import { logger } from '../http/logger';
 
 /**
  * The local mail catcher: an SMTP server of the app's own on loopback (smtp-server) that keeps every

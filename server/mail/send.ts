@@ -1,6 +1,6 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import { env } from '../config/env';
-import { AppError } from '../errors';
+import { AppError } from '../http/errors';
 import { mailCatcherPort, startMailCatcher } from './catcher';
 
 export type OutgoingMail = { to: string; subject: string; text: string; html?: string };

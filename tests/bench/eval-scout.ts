@@ -11,7 +11,7 @@ import { resolve } from 'node:path';
 import { parseArgs } from 'node:util';
 import { openTlcKnowledge, withoutCompound } from './open-tlc-knowledge';
 import { foldOf, scoreCompound, summarise, hitWindow, type CompoundScore } from './scout-scoring';
-import type { KnowledgeSet } from '../../server/scout/types';
+import type { KnowledgeSet } from '../../server/features/scout/engine/types';
 import { closeFingerprintPool } from '../../server/chem';
 import { transferCeilings } from './transfer-ceiling';
 

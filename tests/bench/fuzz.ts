@@ -23,8 +23,8 @@ process.env.DATABASE_URL ??= database!.url;
 process.env.NODE_ENV = 'test';
 process.env.LOG_LEVEL ??= 'silent';
 
-const { createApp } = await import('../../server/app');
-const { createHttpServer } = await import('../../server/http-server');
+const { createApp } = await import('../../server/http/app');
+const { createHttpServer } = await import('../../server/http/http-server');
 const { seedDemoOnce } = await import('../../seeders');
 const { sequelize } = await import('../../server/db/sequelize');
 const { prepareFuzz } = await import('../helpers/fuzz/context');

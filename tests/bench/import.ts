@@ -36,8 +36,8 @@ process.env.LOG_LEVEL ??= 'warn';
 async function main() {
   const { migrator } = await import('../../server/db/migrator');
   const { sequelize } = await import('../../server/db/sequelize');
-  const { createApp } = await import('../../server/app');
-  const { User } = await import('../../server/models');
+  const { createApp } = await import('../../server/http/app');
+  const { User } = await import('../../server/db/models');
   const { hashPassword } = await import('../../server/auth/passwords');
   await migrator.up();
 

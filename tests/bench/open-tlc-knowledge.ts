@@ -2,7 +2,7 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { analyseStructure, fingerprintMolecule } from '../../server/chem';
-import type { KnowledgeSet, ScoutCompound, ScoutMeasurement } from '../../server/scout/types';
+import type { KnowledgeSet, ScoutCompound, ScoutMeasurement } from '../../server/features/scout/engine/types';
 
 /**
  * Turns a CSV of the open TLC data (Xu et al., "High-throughput discovery of chemical structure-polarity

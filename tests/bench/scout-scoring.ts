@@ -1,8 +1,8 @@
 import { rfToRm, rmToRf } from '../../shared/domain/rf';
 import { rfClampRange } from '../../shared/domain/soczewinski';
-import { buildScoutModel, predictRf, scout } from '../../server/scout/engine';
-import type { ScoutModel } from '../../server/scout/model';
-import type { KnowledgeSet, ScoutCompound, ScoutMeasurement } from '../../server/scout/types';
+import { buildScoutModel, predictRf, scout } from '../../server/features/scout/engine/engine';
+import type { ScoutModel } from '../../server/features/scout/engine/model';
+import type { KnowledgeSet, ScoutCompound, ScoutMeasurement } from '../../server/features/scout/engine/types';
 
 /**
  * Scoring of Scout on held-out compounds (the evaluation of issue 6): mean absolute error of Rf over every

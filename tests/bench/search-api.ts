@@ -31,8 +31,8 @@ try {
   await insertLibrary(database.url, library);
   console.log(`loaded ${library.smiles.length} compounds and records into a throwaway database in ${((performance.now() - started) / 1000).toFixed(1)} s`);
 
-  const { createApp } = await import('../../server/app');
-  const { searchIndexes } = await import('../../server/services/search/process-indexes');
+  const { createApp } = await import('../../server/http/app');
+  const { searchIndexes } = await import('../../server/features/search/process-indexes');
   const { agentFor } = await import('../helpers/agent');
   const { sequelize } = await import('../../server/db/sequelize');
   const { closeFingerprintPool } = await import('../../server/chem');

@@ -1,6 +1,6 @@
 import { rfToRm, rmToRf } from '../../shared/domain/rf';
-import { ladderSteps } from '../../server/scout/ratio-ladder';
-import type { KnowledgeSet, ScoutMeasurement } from '../../server/scout/types';
+import { ladderSteps } from '../../server/features/scout/engine/ratio-ladder';
+import type { KnowledgeSet, ScoutMeasurement } from '../../server/features/scout/engine/types';
 import { clampedRm, eluentKey, hitWindow, measuredRfAt } from './scout-scoring';
 
 /**

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import type { Express } from 'express';
 import { randomUUID } from 'node:crypto';
-import { User } from '../../server/models';
+import { User } from '../../server/db/models';
 import { hashPassword } from '../../server/auth/passwords';
 import type { Role } from '../../shared/schemas/auth';
 

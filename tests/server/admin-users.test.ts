@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { Op } from 'sequelize';
-import { createApp } from '../../server/app';
-import { AuditEntry, User } from '../../server/models';
+import { createApp } from '../../server/http/app';
+import { AuditEntry, User } from '../../server/db/models';
 import { agentFor, createUser } from '../helpers/agent';
 
 const { app, close } = createApp();

@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { agentFor, createUser, TEST_PASSWORD } from '../helpers/agent';
 
 const { app, close } = createApp();

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { bookmarkDtoSchema, bookmarkListSchema } from '../../shared/schemas/bookmark';
 import { agentFor, type Agent } from '../helpers/agent';
 import { createRecord } from '../helpers/search';

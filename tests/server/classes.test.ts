@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { requireSolvent } from '../../shared/catalogue/solvents';
 import { classDetailSchema, classIndexSchema } from '../../shared/schemas/classes';
 import { agentFor, type Agent } from '../helpers/agent';

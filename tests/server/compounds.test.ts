@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import initRDKitModule from '@rdkit/rdkit';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { agentFor, type Agent } from '../helpers/agent';
 import { postRecord } from '../helpers/records';
 import { compoundDetailSchema, compoundPageSchema, structureParseResultSchema } from '../../shared/schemas/compound';
-import { compoundEvents } from '../../server/services/compounds';
+import { compoundEvents } from '../../server/core/compounds';
 
 const { app, close } = createApp();
 let member: Agent;

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { agentFor, type Agent } from '../helpers/agent';
 import { post, recordId } from '../helpers/curation';
 import { duplicatesResponseSchema, type DuplicateGroup } from '../../shared/schemas/curation';

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { sequelize } from '../../server/db/sequelize';
 import { agentFor, type Agent } from '../helpers/agent';
 import { addPhotoRow, post, recordId } from '../helpers/curation';

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { agentFor, type Agent } from '../helpers/agent';
 import { addBookmarkRow, addPhotoRow, dumpAffected, post, recordId, type Dump } from '../helpers/curation';
 import { mergeableFields } from '../../shared/schemas/curation';

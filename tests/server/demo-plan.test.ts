@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { parse } from 'csv-parse/sync';
 import { demoCompounds } from '../../seeders/demo-compounds';
 import { planDemoRecords, type PlannedRecord } from '../../seeders/demo-plan';
-import { analyseStructure } from '../../server/services/compound-analysis';
+import { analyseStructure } from '../../server/core/compound-analysis';
 import { recordInputSchema } from '../../shared/schemas/record';
 import { strongPercentOf } from '../../shared/domain/eluent-summary';
 

@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { randomUUID } from 'node:crypto';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { sendMail } from '../../server/mail/send';
 import { agentFor } from '../helpers/agent';
 import { lastMailId, mailedLink } from '../helpers/mail';

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import initRDKitModule from '@rdkit/rdkit';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { parseSdf } from '../../server/chem';
-import { exportColumns } from '../../server/services/export-format';
+import { exportColumns } from '../../server/features/search/export-format';
 import { agentFor, type Agent } from '../helpers/agent';
 import { createRecord, uniqueWord } from '../helpers/search';
 

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import pg from 'pg';
 import request from 'supertest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { agentFor, type Agent } from '../helpers/agent';
 import { postRecord } from '../helpers/records';
 import { startPostgres, stopPostgres } from '../helpers/pg-control';

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { agentFor, type Agent } from '../helpers/agent';
 import { postRecord } from '../helpers/records';
 import { serveOnLoopback } from '../helpers/fuzz/context';
@@ -64,7 +64,7 @@ describe('a photo whose header reads but whose pixels do not', () => {
   });
 });
 
-describe('requests Node refuses before the app sees them (server/http-server.ts)', () => {
+describe('requests Node refuses before the app sees them (server/http/http-server.ts)', () => {
   it('when the request line and headers exceed 96 KB, then 431 in the JSON error shape; a 19 KB search URL (over Node’s default 16 KB) reaches the app', async () => {
     const served = await serveOnLoopback(app);
     try {

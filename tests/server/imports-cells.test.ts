@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { readNumber, readOutcome, readTechnique, splitVisualisations } from '../../server/services/imports/cells';
-import { sniffDelimiter } from '../../server/services/imports/csv-source';
+import { readNumber, readOutcome, readTechnique, splitVisualisations } from '../../server/features/imports/cells';
+import { sniffDelimiter } from '../../server/features/imports/csv-source';
 
 describe('cells of a spreadsheet', () => {
   it.each([

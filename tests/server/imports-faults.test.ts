@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Op } from 'sequelize';
-import { createApp } from '../../server/app';
-import { Compound, ConditionRecord, Import, ImportRow } from '../../server/models';
-import { importEvents } from '../../server/services/imports/commit-batch';
+import { createApp } from '../../server/http/app';
+import { Compound, ConditionRecord, Import, ImportRow } from '../../server/db/models';
+import { importEvents } from '../../server/features/imports/commit-batch';
 import { agentFor, type Agent } from '../helpers/agent';
 import { runTag, settled, upload } from '../helpers/imports';
 import { startPostgres, stopPostgres } from '../helpers/pg-control';

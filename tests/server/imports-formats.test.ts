@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Molecule } from 'openchemlib';
-import { createApp } from '../../server/app';
-import { ConditionRecord, Import, RecordSpot } from '../../server/models';
+import { createApp } from '../../server/http/app';
+import { ConditionRecord, Import, RecordSpot } from '../../server/db/models';
 import { importPreviewSchema } from '../../shared/schemas/import';
 import { agentFor, type Agent } from '../helpers/agent';
 import { csvRows, importFile, runTag, upload } from '../helpers/imports';

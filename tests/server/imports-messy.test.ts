@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Op } from 'sequelize';
-import { createApp } from '../../server/app';
-import { ConditionRecord, Import, ImportRow, RecordRevision } from '../../server/models';
-import { loadRecordState } from '../../server/services/record-revisions';
+import { createApp } from '../../server/http/app';
+import { ConditionRecord, Import, ImportRow, RecordRevision } from '../../server/db/models';
+import { loadRecordState } from '../../server/core/record-revisions';
 import { importDtoSchema, importPreviewSchema } from '../../shared/schemas/import';
 import { agentFor, type Agent } from '../helpers/agent';
 import { csvRows, importFile, runTag, upload } from '../helpers/imports';

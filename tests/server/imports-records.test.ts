@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Op } from 'sequelize';
-import { createApp } from '../../server/app';
-import { Compound, ConditionRecord, ImportRow } from '../../server/models';
+import { createApp } from '../../server/http/app';
+import { Compound, ConditionRecord, ImportRow } from '../../server/db/models';
 import { fingerprintIdcodeSync } from '../../server/chem';
 import { agentFor, type Agent } from '../helpers/agent';
 import { importFile, runTag } from '../helpers/imports';

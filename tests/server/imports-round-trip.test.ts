@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
-import { toCsv, toSdf } from '../../server/services/export-format';
-import { loadListRecords } from '../../server/services/record-queries';
+import { createApp } from '../../server/http/app';
+import { toCsv, toSdf } from '../../server/features/search/export-format';
+import { loadListRecords } from '../../server/core/record-queries';
 import { agentFor, type Agent } from '../helpers/agent';
 import { importFile, runTag } from '../helpers/imports';
 import { postRecord } from '../helpers/records';
@@ -31,7 +31,7 @@ beforeAll(async () => {
 });
 afterAll(close);
 
-describe('an export imported back (both written by server/services/export-format.ts)', () => {
+describe('an export imported back (both written by server/features/search/export-format.ts)', () => {
   it('when the CSV export is imported, then every row is recognised as the record it came from and nothing is added', async () => {
     const { records } = await loadListRecords(ids);
     const done = await importFile(curator, toCsv(records), { name: 'export.csv' });

@@ -1,9 +1,9 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { randomUUID } from 'node:crypto';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { env } from '../../server/config/env';
-import { AuditEntry, Invitation } from '../../server/models';
+import { AuditEntry, Invitation } from '../../server/db/models';
 import { agentFor, createUser } from '../helpers/agent';
 import { lastMailId, mailedLink } from '../helpers/mail';
 

@@ -9,7 +9,7 @@ const saved = vi.hoisted(() => {
 });
 
 import request from 'supertest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { sendMail, usesMailCatcher } from '../../server/mail/send';
 import { mailCatcherPort } from '../../server/mail/catcher';
 

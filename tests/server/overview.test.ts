@@ -1,5 +1,5 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { sequelize } from '../../server/db/sequelize';
 import { overviewSchema } from '../../shared/schemas/overview';
 import { agentFor } from '../helpers/agent';

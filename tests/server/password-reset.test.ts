@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { sequelize } from '../../server/db/sequelize';
-import { AuditEntry, PasswordReset } from '../../server/models';
+import { AuditEntry, PasswordReset } from '../../server/db/models';
 import { caughtMail } from '../../server/mail/mailbox';
 import { agentFor, createUser, TEST_PASSWORD } from '../helpers/agent';
 import { lastMailId, mailedLink } from '../helpers/mail';

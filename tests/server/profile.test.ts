@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app';
-import { AuditEntry } from '../../server/models';
+import { createApp } from '../../server/http/app';
+import { AuditEntry } from '../../server/db/models';
 import { agentFor, TEST_PASSWORD } from '../helpers/agent';
 
 const { app, close } = createApp();

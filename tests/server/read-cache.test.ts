@@ -1,13 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import pg from 'pg';
-import { createApp } from '../../server/app';
-import { contentStamp, dataStamp } from '../../server/services/data-stamp';
+import { createApp } from '../../server/http/app';
+import { contentStamp, dataStamp } from '../../server/db/data-stamp';
 import { NOT_CONTENT } from '../../server/db/migrations/202612030100-content-version';
 import { agentFor, type Agent } from '../helpers/agent';
 import { createRecord, recordHits, searchFor, uniqueWord } from '../helpers/search';
 
 /**
- * The records list, record page, search and Scout keep their answers per data stamp (server/services/data-stamp.ts,
+ * The records list, record page, search and Scout keep their answers per data stamp (server/db/data-stamp.ts,
  * read-cache.ts). These checks read an answer twice (the second time it is kept), write, and expect the very next
  * read to show the write: through this app (its own process), and through a raw pg connection of its own, the
  * way another app process or a script writes, which never touches this process's memory.

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import express, { Router } from 'express';
 import type { Express } from 'express';
-import { createApp } from '../../server/app';
-import { allow } from '../../server/middleware/access';
-import { apiRouter } from '../../server/routes';
+import { createApp } from '../../server/http/app';
+import { allow } from '../../server/http/middleware/access';
+import { apiRouter } from '../../server/http/routes';
 import { roleAtLeast, roles, type AccessLevel, type Role } from '../../shared/schemas/auth';
 import { agentFor, type Agent } from '../helpers/agent';
 import { probeUrl, routeTable, type RouteEntry } from '../helpers/route-table';

@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { analyseStructure, fingerprintMolecule } from '../../server/chem';
-import { buildScoutModel, predictRf, scout } from '../../server/scout/engine';
-import { cholesky, inverseDiagonal } from '../../server/scout/linear-algebra';
-import { fitGp, predictGp } from '../../server/scout/gaussian-process';
-import { nonIncreasing } from '../../server/scout/query-curve';
-import { positionOf } from '../../server/scout/eluent-position';
+import { buildScoutModel, predictRf, scout } from '../../server/features/scout/engine/engine';
+import { cholesky, inverseDiagonal } from '../../server/features/scout/engine/linear-algebra';
+import { fitGp, predictGp } from '../../server/features/scout/engine/gaussian-process';
+import { nonIncreasing } from '../../server/features/scout/engine/query-curve';
+import { positionOf } from '../../server/features/scout/engine/eluent-position';
 import { mixtureStrength } from '../../shared/domain/eluent-strength';
-import type { KnowledgeSet, ScoutCompound, ScoutMeasurement, ScoutQuery } from '../../server/scout/types';
+import type { KnowledgeSet, ScoutCompound, ScoutMeasurement, ScoutQuery } from '../../server/features/scout/engine/types';
 
 function compound(id: number, smiles: string): ScoutCompound {
   const analysis = analyseStructure(smiles);

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';
 import { openTlcKnowledge, withoutCompound } from '../bench/open-tlc-knowledge';
 import { foldOf, scoreCompound, summarise, type Summary } from '../bench/scout-scoring';
-import type { KnowledgeSet } from '../../server/scout/types';
+import type { KnowledgeSet } from '../../server/features/scout/engine/types';
 
 /**
  * A smaller version of `npm run eval:scout` on the open TLC data (Xu et al., Chem 2022, Apache-2.0;

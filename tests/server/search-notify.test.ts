@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import pg from 'pg';
-import { createApp } from '../../server/app';
-import { analyseStructure } from '../../server/services/compound-analysis';
-import { fingerprintBytes } from '../../server/services/compound-fingerprints';
-import { searchIndexes } from '../../server/services/search/process-indexes';
+import { createApp } from '../../server/http/app';
+import { analyseStructure } from '../../server/core/compound-analysis';
+import { fingerprintBytes } from '../../server/core/compound-fingerprints';
+import { searchIndexes } from '../../server/features/search/process-indexes';
 import { agentFor, type Agent } from '../helpers/agent';
 import { recordHits, searchFor, uniqueWord } from '../helpers/search';
 

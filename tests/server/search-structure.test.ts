@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import initRDKitModule from '@rdkit/rdkit';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { sequelize } from '../../server/db/sequelize';
 import { agentFor, type Agent } from '../helpers/agent';
 import { createRecord, recordHits, searchFor, uniqueWord } from '../helpers/search';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { TextIndex } from '../../server/services/search/text-index';
+import { TextIndex } from '../../server/features/search/text-index';
 
 /** Real compound names (IUPAC/trivial names as commonly written); the notes are invented. */
 function index() {

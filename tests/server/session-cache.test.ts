@@ -1,5 +1,5 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { sequelize } from '../../server/db/sequelize';
 import { SESSION_CACHE_TTL_MS } from '../../server/auth/session-cache';
 import { USER_CACHE_TTL_MS } from '../../server/auth/user-cache';

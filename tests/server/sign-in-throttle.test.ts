@@ -10,7 +10,7 @@ const saved = vi.hoisted(() => {
 });
 
 import { randomUUID } from 'node:crypto';
-import { createApp } from '../../server/app';
+import { createApp } from '../../server/http/app';
 import { PgRateLimitStore } from '../../server/auth/pg-rate-limit-store';
 import { sequelize } from '../../server/db/sequelize';
 import { agentFor, createUser, TEST_PASSWORD } from '../helpers/agent';

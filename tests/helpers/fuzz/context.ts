@@ -1,7 +1,7 @@
 import type { Express } from 'express';
 import type { AddressInfo } from 'node:net';
 import request from 'supertest';
-import { createHttpServer } from '../../../server/http-server';
+import { createHttpServer } from '../../../server/http/http-server';
 import sharp from 'sharp';
 import { createUser, TEST_PASSWORD, type Agent } from '../agent';
 import { postRecord } from '../records';
@@ -78,7 +78,7 @@ export async function prepareFuzz(app: Express, target: Express | string = app):
 }
 
 /**
- * The app behind the project's own HTTP server (server/http-server.ts, as server/index.ts runs it), listening
+ * The app behind the project's own HTTP server (server/http/http-server.ts, as server/index.ts runs it), listening
  * on 127.0.0.1 only; fuzz cases go to its URL so refusals Node makes before the app are checked too.
  */
 export async function serveOnLoopback(app: Express): Promise<{ base: string; stop: () => Promise<void> }> {

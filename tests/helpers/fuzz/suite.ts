@@ -1,5 +1,5 @@
 import { afterAll, beforeAll } from 'vitest';
-import { createApp } from '../../../server/app';
+import { createApp } from '../../../server/http/app';
 import { prepareFuzz, serveOnLoopback, type FuzzContext } from './context';
 
 /**

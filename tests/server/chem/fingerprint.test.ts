@@ -4,7 +4,7 @@ import {
   closeFingerprintPool, FINGERPRINT_WORDS, fingerprintIdcodes, fingerprintIdcodeSync, searchKeysForIdcodes,
 } from '../../../server/chem/fingerprint';
 import { searchGraphOf } from '../../../server/chem/fingerprint-worker.mjs';
-import { fingerprintBytes, fingerprintOfIdcode } from '../../../server/services/compound-fingerprints';
+import { fingerprintBytes, fingerprintOfIdcode } from '../../../server/core/compound-fingerprints';
 
 const SMILES = ['CC(=O)Oc1ccccc1C(=O)O', 'c1ccc2[nH]ccc2c1', 'CCN(CC)CC', 'O=C(NCc1ccccc1)c1ccncc1', 'CS(=O)(=O)N1CCOCC1', 'OC[C@H]1OC(O)[C@H](O)[C@@H](O)[C@@H]1O'];
 const idcodes = SMILES.map((smiles) => Molecule.fromSmiles(smiles).getIDCode());

@@ -1,0 +1,24 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
+import { sequelize } from '../sequelize';
+
+/** A row an import rejected: its original cells (header → text), where it was and why it was refused. */
+export class ImportRow extends Model<InferAttributes<ImportRow>, InferCreationAttributes<ImportRow>> {
+  declare id: CreationOptional<number>;
+  declare importId: number;
+  declare rowNumber: number;
+  declare line: number;
+  declare cells: Record<string, string>;
+  declare reason: string;
+}
+
+ImportRow.init(
+  {
+    id: { type: DataTypes.BIGINT, primaryKey: true, autoIncrement: true },
+    importId: { type: DataTypes.INTEGER, allowNull: false },
+    rowNumber: { type: DataTypes.INTEGER, allowNull: false },
+    line: { type: DataTypes.INTEGER, allowNull: false },
+    cells: { type: DataTypes.JSONB, allowNull: false },
+    reason: { type: DataTypes.TEXT, allowNull: false },
+  },
+  { sequelize, tableName: 'import_rows', modelName: 'ImportRow', timestamps: false },
+);

@@ -1,0 +1,99 @@
+import { createHash } from 'node:crypto';
+import { Op } from 'sequelize';
+import type { SessionUser } from '../../../shared/schemas/auth';
+import { sequelize } from '../../db/sequelize';
+import { AuditEntry, Import, User } from '../../db/models';
+import { ConflictError, NotFoundError } from '../../http/errors';
+import { blobStorage } from '../../storage';
+import { formatOf, mappingFor, openUpload, requireEssentialColumns } from './open-upload';
+import { isRunningHere, runImport } from './run-import';
+
+/** Rows committed per transaction. */
+export const IMPORT_BATCH_SIZE = 200;
+
+/** An import still "running" whose heartbeat is older than this has lost its process (ms). */
+const STALE_AFTER_MS = 2 * 60_000;
+
+export interface UploadedFile {
+  bytes: Buffer;
+  name: string;
+}
+
+export const sha256Of = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
+
+/**
+ * Stores an upload (content-addressed bytes and an import row holding the mapping and the row count) and
+ * starts the import in the background. 415/422 when the file cannot be imported, before anything is stored.
+ */
+export async function createImport(file: UploadedFile, overrides: Record<string, string>, user: SessionUser): Promise<Import> {
+  const source = await openUpload(file.bytes, file.name);
+  const mapping = mappingFor(source, overrides);
+  requireEssentialColumns(mapping);
+  const created = await sequelize.transaction(async (transaction) => {
+    const key = await blobStorage().put(file.bytes, source.kind === 'sdf' ? 'chemical/x-mdl-sdfile' : 'text/csv', transaction);
+    const row = await Import.create(
+      {
+        userId: user.id, fileName: file.name, fileSha256: sha256Of(file.bytes), fileBlobKey: key, byteSize: file.bytes.length,
+        format: formatOf(source, mapping), delimiter: source.delimiter, headers: source.headers, mapping, total: source.total,
+        blankRows: source.blankRows, batchSize: IMPORT_BATCH_SIZE, heartbeatAt: new Date(),
+      },
+      { transaction },
+    );
+    await AuditEntry.create({ actorId: user.id, action: 'import.create', subjectType: 'import', subjectId: String(row.id), details: { fileName: file.name, sha256: row.fileSha256, total: source.total } }, { transaction });
+    return row;
+  });
+  void runImport(created.id);
+  return created;
+}
+
+/** Marks imports whose process stopped mid-way (no heartbeat for two minutes) as failed, so they can be resumed. */
+async function failStalled(): Promise<void> {
+  const stalled = await Import.findAll({ where: { status: 'running', heartbeatAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) } }, attributes: ['id'] });
+  const ids = stalled.map((row) => row.id).filter((id) => !isRunningHere(id));
+  if (ids.length === 0) return;
+  await Import.update(
+    { status: 'failed', error: 'The import stopped without finishing (its server process ended).', finishedAt: new Date() },
+    { where: { id: ids, status: 'running' } },
+  );
+}
+
+const withUser = { model: User, as: 'user', attributes: ['id', 'name'] };
+
+/** Past imports, newest first. */
+export async function listImports(limit = 100): Promise<Import[]> {
+  await failStalled();
+  return Import.findAll({ include: [withUser], order: [['createdAt', 'DESC'], ['id', 'DESC']], limit });
+}
+
+export async function getImport(id: number): Promise<Import> {
+  await failStalled();
+  const found = await Import.findByPk(id, { include: [withUser] });
+  if (!found) throw new NotFoundError('Import');
+  return found;
+}
+
+/** Continues a failed (or stalled) import from the row after its last committed one. 409 for any other status. */
+export async function resumeImport(id: number, user: SessionUser): Promise<Import> {
+  await getImport(id);
+  const [claimed] = await Import.update(
+    { status: 'running', error: null, finishedAt: null, heartbeatAt: new Date() },
+    { where: { id, status: 'failed' } },
+  );
+  if (claimed === 0 || isRunningHere(id)) {
+    const current = await getImport(id);
+    throw new ConflictError(`Only a failed import can be resumed; import ${id} is ${current.status}.`, { status: current.status });
+  }
+  await AuditEntry.create({ actorId: user.id, action: 'import.resume', subjectType: 'import', subjectId: String(id), details: {} });
+  void runImport(id);
+  return getImport(id);
+}
+
+/** Waits up to `ms` for an import to finish in this process (a short file answers with its final counts). */
+export async function settle(id: number, ms: number): Promise<Import> {
+  if (ms > 0 && isRunningHere(id)) {
+    let timer: NodeJS.Timeout | undefined;
+    await Promise.race([runImport(id), new Promise((resolve) => (timer = setTimeout(resolve, ms)))]);
+    clearTimeout(timer);
+  }
+  return getImport(id);
+}

@@ -1,0 +1,122 @@
+import type { Adsorbent } from '../../../../shared/catalogue/types';
+import { anchorTraining, type AnchorTraining } from './anchor-training';
+import { adsorbentOf, orderPair, pairKey } from './eluent-position';
+import { fitGp, type GpFit } from './gaussian-process';
+import { defaultKernelWeights, KernelSpace, type KernelPoint, type KernelWeights } from './kernel';
+import { buildPairData, placeMeasurements, type PairData, type PlacedMeasurement } from './pair-data';
+import type { KnowledgeSet, ScoutCompound, ScoutMeasurement, ScoutQuery, SolventPair } from './types';
+
+/** 'full': structure (Tanimoto) and descriptors; 'descriptors': descriptors and classes only, for molecules with no close analogue. */
+export type ModelVariant = 'full' | 'descriptors';
+
+/** Noise variance λ of one recorded RM relative to the kernel (see kernel.ts for how it was chosen). */
+export const measurementNoise = 0.2;
+
+export interface AnchorFit {
+  training: AnchorTraining;
+  gp: GpFit;
+}
+
+const variantWeights = (variant: ModelVariant): KernelWeights => (variant === 'full' ? defaultKernelWeights : { ...defaultKernelWeights, tanimoto: 0 });
+
+/**
+ * The Scout model of one knowledge set: compounds as kernel points, measurements placed on Snyder's ε° scale
+ * per adsorbent and pair, and Gaussian-process fits at each pair's anchors, made lazily and kept.
+ * Build one per knowledge-set version; it is immutable apart from its caches.
+ */
+export class ScoutModel {
+  readonly compounds: readonly ScoutCompound[];
+  readonly measurementsOf: ScoutMeasurement[][];
+  readonly space: KernelSpace;
+  readonly points: KernelPoint[];
+  private readonly positionOf = new Map<number, number>();
+  private readonly placed = new Map<Adsorbent, PlacedMeasurement[]>();
+  private readonly pairs = new Map<string, PairData>();
+  private readonly fits = new Map<string, AnchorFit[]>();
+  private readonly kernels = new Map<ModelVariant, Float64Array>();
+
+  constructor(readonly knowledge: KnowledgeSet) {
+    this.compounds = knowledge.compounds;
+    this.compounds.forEach((compound, index) => this.positionOf.set(compound.id, index));
+    this.measurementsOf = this.compounds.map(() => []);
+    for (const measurement of knowledge.measurements) {
+      const index = this.positionOf.get(measurement.compoundId);
+      if (index !== undefined) this.measurementsOf[index].push(measurement);
+    }
+    this.space = new KernelSpace(this.compounds);
+    this.points = this.compounds.map((compound) => this.space.point(compound));
+  }
+
+  indexOf(compoundId: number): number | undefined {
+    return this.positionOf.get(compoundId);
+  }
+
+  /** Measurements with an Rf placed on the adsorbent's ε° scale. */
+  placedOn(adsorbent: Adsorbent): PlacedMeasurement[] {
+    let placed = this.placed.get(adsorbent);
+    if (!placed) {
+      const all = this.measurementsOf.flatMap((list, compound) => list.map((measurement) => ({ compound, measurement })));
+      placed = placeMeasurements(all, adsorbent, adsorbentOf);
+      this.placed.set(adsorbent, placed);
+    }
+    return placed;
+  }
+
+  /** Every two-solvent pair recorded on the adsorbent (pure-solvent plates join the pairs that contain the solvent). */
+  pairsOn(adsorbent: Adsorbent): PairData[] {
+    const keys = new Set<string>();
+    for (const item of this.placedOn(adsorbent)) if (item.position.kind === 'pair') keys.add(item.position.key);
+    return [...keys].map((key) => this.pairData(adsorbent, { weak: key.split('|')[0], strong: key.split('|')[1] }));
+  }
+
+  pairData(adsorbent: Adsorbent, pair: SolventPair): PairData {
+    const ordered = orderPair(pair.weak, pair.strong, adsorbent) ?? pair;
+    const key = `${adsorbent}|${pairKey(ordered)}`;
+    let data = this.pairs.get(key);
+    if (!data) {
+      data = buildPairData(ordered, adsorbent, this.placedOn(adsorbent));
+      this.pairs.set(key, data);
+    }
+    return data;
+  }
+
+  /** The kernel between two knowledge compounds (cached as a full matrix for knowledge sets up to 2,500 compounds). */
+  kernel(variant: ModelVariant, i: number, j: number): number {
+    const n = this.compounds.length;
+    if (n > 2500) return this.space.value(this.points[i], this.points[j], variantWeights(variant));
+    let matrix = this.kernels.get(variant);
+    if (!matrix) {
+      matrix = new Float64Array(n * n).fill(Number.NaN);
+      this.kernels.set(variant, matrix);
+    }
+    let value = matrix[i * n + j];
+    if (Number.isNaN(value)) {
+      value = this.space.value(this.points[i], this.points[j], variantWeights(variant));
+      matrix[i * n + j] = value;
+      matrix[j * n + i] = value;
+    }
+    return value;
+  }
+
+  /** Gaussian-process fits at the pair's anchors (same order as `data.anchors`). */
+  anchorFits(data: PairData, variant: ModelVariant): AnchorFit[] {
+    const key = `${variant}|${data.adsorbent}|${data.key}`;
+    let fits = this.fits.get(key);
+    if (!fits) {
+      const others = this.pairsOn(data.adsorbent).filter((other) => other.key !== data.key);
+      fits = data.anchors.map((anchor) => {
+        const training = anchorTraining(data, anchor, others, this.compounds.length);
+        return { training, gp: fitGp(training.indices, training.y, training.weights, measurementNoise, (i, j) => this.kernel(variant, i, j)) };
+      });
+      this.fits.set(key, fits);
+    }
+    return fits;
+  }
+
+  /** Kernel values of a query against every knowledge compound, and against itself. */
+  queryKernel(query: ScoutQuery, variant: ModelVariant): { values: Float64Array; self: number } {
+    const point = this.space.point(query);
+    const weights = variantWeights(variant);
+    return { values: Float64Array.from(this.points, (other) => this.space.value(point, other, weights)), self: this.space.value(point, point, weights) };
+  }
+}
