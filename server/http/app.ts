@@ -8,6 +8,7 @@ import { logger } from './logger';
 import { env } from '../config/env';
 import { sessionMiddleware } from '../auth/session';
 import { passport } from '../auth/passport';
+import { bearerAuth } from '../auth/bearer';
 import { requireCsrf } from './middleware/csrf';
 import { errorHandler, apiNotFound } from './middleware/errors';
 import { apiRouter } from './routes';
@@ -49,6 +50,7 @@ export function createApp(): AppHandle {
   );
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api', sessions.middleware, passport.session());
+  app.use('/api', bearerAuth);
   app.use('/api', requireCsrf);
   app.use('/api', apiRouter());
   app.use('/api', apiNotFound);

@@ -20,6 +20,8 @@ import { bookmarksRouter } from '../features/bookmarks/routes';
 import { classesRouter } from '../features/classes/routes';
 import { exportRouter } from '../features/search/export-routes';
 import { overviewRouter } from '../features/home/routes';
+import { adminTokensRouter, tokensRouter } from '../features/tokens/routes';
+import { apiDocsRouter } from '../features/api-docs/routes';
 
 /** Every API router, mounted under /api. Each route's first handler is `allow(level)`. */
 export function apiRouter(): Router {
@@ -29,6 +31,9 @@ export function apiRouter(): Router {
   api.use('/auth/password-reset', passwordResetRouter);
   api.use('/auth', authRouter);
   api.use('/admin/users', adminUsersRouter);
+  api.use('/admin/tokens', adminTokensRouter);
+  api.use('/tokens', tokensRouter);
+  api.use(apiDocsRouter);
   if (usesMailCatcher()) api.use('/dev/mailbox', devMailboxRouter);
   api.use('/records', recordCurationRouter);
   api.use('/records', recordsRouter);

@@ -19,7 +19,7 @@ import type { Migration } from '../migrator';
  * per transaction (a transaction-local flag), however many rows it writes.
  */
 export const NOT_CONTENT = [
-  'sessions', 'rate_limit_hits', 'bookmarks', 'invitations', 'password_resets', 'audit_log', 'search_changes', 'schema_migrations', 'data_versions',
+  'sessions', 'rate_limit_hits', 'bookmarks', 'invitations', 'password_resets', 'audit_log', 'search_changes', 'schema_migrations', 'data_versions', 'api_tokens',
 ];
 
 const usersOnlySignedIn = `(to_jsonb(OLD) - 'last_sign_in_at' - 'updated_at') IS DISTINCT FROM (to_jsonb(NEW) - 'last_sign_in_at' - 'updated_at')`;

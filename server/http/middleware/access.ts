@@ -2,6 +2,8 @@ import type { Request, RequestHandler } from 'express';
 import { roleAtLeast, type AccessLevel } from '../../../shared/schemas/auth';
 import { ForbiddenError, UnauthenticatedError } from '../errors';
 
+const READS = new Set(['GET', 'HEAD']);
+
 /** Marks a handler as a route's declared access level; the route-matrix test looks for this tag. */
 export type AccessHandler = RequestHandler & { access: AccessLevel };
 
@@ -11,6 +13,7 @@ export type AccessHandler = RequestHandler & { access: AccessLevel };
  */
 export function allow(level: AccessLevel): AccessHandler {
   const handler = ((req, _res, next) => {
+    if (req.apiToken?.readOnly && !READS.has(req.method)) return next(new ForbiddenError('This API token is read-only.'));
     if (level === 'public') return next();
     if (!req.user) return next(new UnauthenticatedError());
     if (!roleAtLeast(req.user.role, level)) return next(new ForbiddenError());

@@ -19,6 +19,8 @@ export function csrfToken(req: Request): string {
 /** Every state-changing request must echo the session's token in `X-CSRF-Token`. */
 export const requireCsrf: RequestHandler = (req, _res, next) => {
   if (SAFE.has(req.method)) return next();
+  // A personal API token in Authorization (auth/bearer.ts) is no ambient credential a browser sends on its own.
+  if (req.apiToken) return next();
   const sent = req.get('x-csrf-token') ?? '';
   const expected = req.session?.csrfToken ?? '';
   const ok =

@@ -2,7 +2,7 @@ import type { Request, Response, NextFunction, RequestHandler } from 'express';
 import type { z } from 'zod';
 import { ValidationError } from '../errors';
 
-type Schemas = { body?: z.ZodType; query?: z.ZodType; params?: z.ZodType };
+export type Schemas = { body?: z.ZodType; query?: z.ZodType; params?: z.ZodType };
 type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType ? z.output<S[K]> : never };
 
 /** Parses body, query and params against zod schemas; the first problem names its field. */
@@ -31,12 +31,14 @@ export function parseParts<S extends Schemas>(schemas: S, req: Request): Parsed<
 export function handle<S extends Schemas>(
   schemas: S,
   fn: (input: Parsed<S>, req: Request, res: Response) => unknown,
-): RequestHandler {
-  return async (req: Request, res: Response, next: NextFunction) => {
+): RequestHandler & { schemas: S } {
+  const handler = async (req: Request, res: Response, next: NextFunction) => {
     try {
       await fn(parseParts(schemas, req), req, res);
     } catch (err) {
       next(err);
     }
   };
+  // The schemas stay readable on the handler: the OpenAPI document (features/api-docs) is generated from them.
+  return Object.assign(handler, { schemas });
 }
