@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type RequestHandler } from 'express';
 import { allow, currentUser } from '../../http/middleware/access';
 import { handle } from '../../http/middleware/validate';
 import { ForbiddenError } from '../../http/errors';
@@ -13,9 +13,11 @@ tokensRouter.get('/', allow('viewer'), handle({}, async (_input, req, res) => {
   res.json({ items: await listTokens(currentUser(req).id) });
 }));
 
-tokensRouter.post('/', allow('viewer'), handle({ body: tokenCreateSchema }, async ({ body }, req, res) => {
-  // A token cannot mint tokens: a leaked or expiring token must not be able to outlive itself.
-  if (req.apiToken) throw new ForbiddenError('Create API tokens from a signed-in session (the profile page), not with a token.');
+/** A token cannot mint tokens: a leaked or expiring token must not be able to outlive itself. */
+const sessionOnly: RequestHandler = (req, _res, next) =>
+  next(req.apiToken ? new ForbiddenError('Create API tokens from a signed-in session (the profile page), not with a token.') : undefined);
+
+tokensRouter.post('/', allow('viewer'), sessionOnly, handle({ body: tokenCreateSchema }, async ({ body }, req, res) => {
   res.status(201).json(await createToken(currentUser(req), body));
 }));
 
