@@ -29,6 +29,7 @@ const ClassPage = lazy(() => import('./routes/class-detail'));
 const ScoutPage = lazy(() => import('./routes/scout'));
 const ToolsPage = lazy(() => import('./routes/tools'));
 const CautionsPage = lazy(() => import('./routes/cautions'));
+const ApiReferencePage = lazy(() => import('./routes/api-reference'));
 
 /** Pages are lazily loaded, so the first load carries only the shell. */
 const page = (node: ReactNode) => <Suspense fallback={<PageLoading />}>{node}</Suspense>;
@@ -59,6 +60,7 @@ export const router = createBrowserRouter([
       { path: 'curation/merge', element: <RequireRole least="curator">{page(<CurationMergePage />)}</RequireRole> },
       { path: 'imports', element: <RequireRole least="curator">{page(<ImportsPage />)}</RequireRole> },
       { path: 'account', element: <RequireRole least="viewer">{page(<AccountPage />)}</RequireRole> },
+      { path: 'api-reference', element: <RequireRole least="viewer">{page(<ApiReferencePage />)}</RequireRole> },
       { path: 'admin/users', element: <RequireRole least="admin">{page(<AdminUsersPage />)}</RequireRole> },
       { path: 'admin/mailbox', element: <RequireRole least="admin">{page(<AdminMailboxPage />)}</RequireRole> },
       { path: '*', element: <NotFoundPage /> },

@@ -3,6 +3,7 @@ import { PageLoading } from '../components/ui/page-loading';
 import { useMe } from '../features/auth/api/session';
 import { ProfileNameForm } from '../features/auth/components/profile-name-form';
 import { PasswordChangeForm } from '../features/auth/components/password-change-form';
+import { TokensPanel } from '../features/tokens/components/tokens-panel';
 
 /** Profile: the signed-in person's name and password; e-mail and role are set by an admin. */
 export default function AccountPage() {
@@ -23,6 +24,9 @@ export default function AccountPage() {
       </Card>
       <Card title="Password">
         <PasswordChangeForm />
+      </Card>
+      <Card title="API tokens for scripts">
+        <TokensPanel isAdmin={user.role === 'admin'} />
       </Card>
     </section>
   );
