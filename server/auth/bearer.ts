@@ -63,9 +63,15 @@ const tokenFailuresByAddress = rateLimit({
   ...counters(),
   handler: (req, res) => {
     const resetTime = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-    const minutes = resetTime ? Math.max(1, Math.ceil((resetTime.getTime() - Date.now()) / 60_000)) : env().SIGNIN_WINDOW_MINUTES;
+    const minutes = resetTime
+      ? Math.max(1, Math.ceil((resetTime.getTime() - Date.now()) / 60_000))
+      : env().SIGNIN_WINDOW_MINUTES;
     res.status(429).json({
-      error: { code: 'too_many_attempts', message: `Too many refused API tokens from this address. Try again in ${minutes} min.`, details: { retryAfterMinutes: minutes } },
+      error: {
+        code: 'too_many_attempts',
+        message: `Too many refused API tokens from this address. Try again in ${minutes} min.`,
+        details: { retryAfterMinutes: minutes },
+      },
     });
   },
 });
@@ -79,7 +85,10 @@ async function usableToken(credential: string): Promise<TokenRow | undefined> {
             (last_used_at IS NULL OR last_used_at < now() - make_interval(secs => :granularity)) AS stale
        FROM api_tokens
       WHERE token_hash = :hash AND revoked_at IS NULL AND (expires_at IS NULL OR expires_at > now())`,
-    { replacements: { hash: hashApiToken(credential), granularity: LAST_USED_GRANULARITY_MS / 1000 }, type: QueryTypes.SELECT },
+    {
+      replacements: { hash: hashApiToken(credential), granularity: LAST_USED_GRANULARITY_MS / 1000 },
+      type: QueryTypes.SELECT,
+    },
   );
   return row;
 }
@@ -108,9 +117,11 @@ const authenticateBearer: RequestHandler = async (req, res, next) => {
     req.user = toSessionUser(owner);
     req.apiToken = { id: token.id, readOnly: token.read_only };
     if (token.stale) {
-      await sequelize.query('UPDATE api_tokens SET last_used_at = now() WHERE id = :id', { replacements: { id: token.id } }).catch((err) => {
-        logger.warn({ err, tokenId: token.id }, 'could not note when an API token was last used');
-      });
+      await sequelize
+        .query('UPDATE api_tokens SET last_used_at = now() WHERE id = :id', { replacements: { id: token.id } })
+        .catch((err) => {
+          logger.warn({ err, tokenId: token.id }, 'could not note when an API token was last used');
+        });
     }
     next();
   } catch (err) {

@@ -22,7 +22,12 @@ import { routeTable } from '../helpers/route-table';
 const { app, close } = createApp();
 afterAll(close);
 
-type Operation = { 'x-rfolio-access': string; responses: Record<string, { content?: Record<string, { schema: object }> }>; parameters?: { in: string; name: string }[]; requestBody?: object };
+type Operation = {
+  'x-rfolio-access': string;
+  responses: Record<string, { content?: Record<string, { schema: object }> }>;
+  parameters?: { in: string; name: string }[];
+  requestBody?: object;
+};
 type Doc = { openapi: string; paths: Record<string, Record<string, Operation>>; components: Record<string, unknown> };
 let doc: Doc;
 let viewer: Agent;
@@ -36,7 +41,10 @@ beforeAll(async () => {
   member = await agentFor(app, 'member');
 });
 
-const operationsOf = (d: Doc) => Object.entries(d.paths).flatMap(([path, item]) => Object.entries(item).map(([method, op]) => ({ key: `${method.toUpperCase()} ${path}`, op })));
+const operationsOf = (d: Doc) =>
+  Object.entries(d.paths).flatMap(([path, item]) =>
+    Object.entries(item).map(([method, op]) => ({ key: `${method.toUpperCase()} ${path}`, op })),
+  );
 const mounted = () => routeTable(app).filter((r) => r.path.startsWith('/api/'));
 
 describe('the OpenAPI document', () => {
@@ -48,8 +56,12 @@ describe('the OpenAPI document', () => {
   });
 
   it('documents every route Express mounts under /api, and nothing it does not mount', () => {
-    const routes = mounted().map((r) => `${r.method} ${openApiPath(r.path)}`).sort();
-    const documented = operationsOf(doc).map((o) => o.key).sort();
+    const routes = mounted()
+      .map((r) => `${r.method} ${openApiPath(r.path)}`)
+      .sort();
+    const documented = operationsOf(doc)
+      .map((o) => o.key)
+      .sort();
     expect(routes.length).toBeGreaterThan(60);
     expect(routes.filter((key) => !documented.includes(key))).toEqual([]);
     expect(documented.filter((key) => !routes.includes(key))).toEqual([]);
@@ -64,8 +76,12 @@ describe('the OpenAPI document', () => {
       expect(op['x-rfolio-access'], key).toBe(access.get(key));
       const failure = op.responses.default?.content?.['application/json']?.schema;
       expect(failure, key).toEqual({ $ref: '#/components/schemas/Error' });
-      if (op['x-rfolio-access'] !== 'public') expect(Object.keys(op.responses), key).toEqual(expect.arrayContaining(['401', '403']));
-      expect(Object.keys(op.responses).some((status) => /^2\d\d$/.test(status)), key).toBe(true);
+      if (op['x-rfolio-access'] !== 'public')
+        expect(Object.keys(op.responses), key).toEqual(expect.arrayContaining(['401', '403']));
+      expect(
+        Object.keys(op.responses).some((status) => /^2\d\d$/.test(status)),
+        key,
+      ).toBe(true);
     }
   });
 
@@ -82,7 +98,11 @@ describe('the OpenAPI document', () => {
   it('leaves out a route that has no description, so the coverage check above would fail on it', () => {
     const fresh = express();
     const extra = Router();
-    extra.get('/undocumented', allow('viewer'), handle({}, (_input, _req, res) => void res.json({})));
+    extra.get(
+      '/undocumented',
+      allow('viewer'),
+      handle({}, (_input, _req, res) => void res.json({})),
+    );
     const api = apiRouter();
     api.use('/extra', extra);
     fresh.use('/api', api);
@@ -143,7 +163,10 @@ describe('documented GETs answer as documented (real answers validated against t
   it('when an error is answered, then it matches the documented error shape', async () => {
     const res = await viewer.get('/api/records/999999999');
     expect(res.status).toBe(404);
-    const validate = ajv.compile({ ...(doc.components.schemas as Record<string, object>).Error, components: doc.components });
+    const validate = ajv.compile({
+      ...(doc.components.schemas as Record<string, object>).Error,
+      components: doc.components,
+    });
     expect(validate(res.body)).toBe(true);
     expect(validate({ error: { message: 'no code' } })).toBe(false);
   });

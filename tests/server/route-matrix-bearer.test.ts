@@ -18,11 +18,14 @@ const READS = new Set(['GET', 'HEAD']);
 /** Routes a token may never call whatever its role: a token cannot mint tokens (it must not outlive itself). */
 const SESSION_ONLY = new Set(['POST /api/tokens']);
 
-/** Routes that exist to manage a cookie session (they may set or clear one, whoever calls); no other route sets a cookie. */
+/** Routes that manage a cookie session (they may set or clear one, whoever calls); no other route sets a cookie. */
 const COOKIE_SESSION_ROUTES = new Set(['GET /api/auth/csrf', 'POST /api/auth/login', 'POST /api/auth/logout']);
 
 type Caller = { role: Role; readOnly: boolean };
-const callers: Caller[] = roles.flatMap((role) => [{ role, readOnly: false }, { role, readOnly: true }]);
+const callers: Caller[] = roles.flatMap((role) => [
+  { role, readOnly: false },
+  { role, readOnly: true },
+]);
 
 function expected(route: RouteEntry, caller: Caller): 'allowed' | 403 {
   if (caller.readOnly && !READS.has(route.method)) return 403;
@@ -36,7 +39,10 @@ let probe = 0;
 async function send(token: string, route: RouteEntry) {
   const method = route.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
   // A fresh client address per request: the refused-token throttle counts per address.
-  const req = request(app)[method](probeUrl(route.path)).set('Authorization', `Bearer ${token}`).set('X-Forwarded-For', `198.18.${Math.floor(probe / 250)}.${(probe++ % 250) + 1}`);
+  const req = request(app)
+    [method](probeUrl(route.path))
+    .set('Authorization', `Bearer ${token}`)
+    .set('X-Forwarded-For', `198.18.${Math.floor(probe / 250)}.${(probe++ % 250) + 1}`);
   return method === 'get' ? req : req.send({});
 }
 
@@ -45,25 +51,31 @@ it('walks a non-empty route table with a declared level on every route', () => {
   expect(apiRoutes.filter((r) => r.access === undefined)).toEqual([]);
 });
 
-describe.each(callers.map((c) => [`${c.readOnly ? 'read-only' : 'full'} ${c.role} token`, c] as const))('the Bearer matrix for a %s', (_name, caller) => {
-  let token: string;
-  beforeAll(async () => {
-    const owner = await agentFor(app, caller.role);
-    const res = await owner.post('/api/tokens').set('X-CSRF-Token', owner.csrf).send({ name: `matrix ${caller.role}`, readOnly: caller.readOnly });
-    expect(res.status).toBe(201);
-    token = res.body.token;
-  });
+describe.each(callers.map((c) => [`${c.readOnly ? 'read-only' : 'full'} ${c.role} token`, c] as const))(
+  'the Bearer matrix for a %s',
+  (_name, caller) => {
+    let token: string;
+    beforeAll(async () => {
+      const owner = await agentFor(app, caller.role);
+      const res = await owner
+        .post('/api/tokens')
+        .set('X-CSRF-Token', owner.csrf)
+        .send({ name: `matrix ${caller.role}`, readOnly: caller.readOnly });
+      expect(res.status).toBe(201);
+      token = res.body.token;
+    });
 
-  it.each(apiRoutes.map((r) => [`${r.method} ${r.path}`, r] as const))('%s', async (_key, route) => {
-    const res = await send(token, route);
-    const want = expected(route, caller);
-    if (want === 'allowed') expect([401, 403], `${res.status} ${JSON.stringify(res.body)}`).not.toContain(res.status);
-    else expect(res.status, JSON.stringify(res.body)).toBe(want);
-    if (!COOKIE_SESSION_ROUTES.has(`${route.method} ${route.path}`)) {
-      expect(res.headers['set-cookie'] ?? [], 'a Bearer caller gets no session cookie').toEqual([]);
-    }
-  });
-});
+    it.each(apiRoutes.map((r) => [`${r.method} ${r.path}`, r] as const))('%s', async (_key, route) => {
+      const res = await send(token, route);
+      const want = expected(route, caller);
+      if (want === 'allowed') expect([401, 403], `${res.status} ${JSON.stringify(res.body)}`).not.toContain(res.status);
+      else expect(res.status, JSON.stringify(res.body)).toBe(want);
+      if (!COOKIE_SESSION_ROUTES.has(`${route.method} ${route.path}`)) {
+        expect(res.headers['set-cookie'] ?? [], 'a Bearer caller gets no session cookie').toEqual([]);
+      }
+    });
+  },
+);
 
 describe('the Bearer matrix for an unknown token', () => {
   it.each(apiRoutes.map((r) => [`${r.method} ${r.path}`, r] as const))('%s is 401', async (_key, route) => {

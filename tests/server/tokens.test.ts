@@ -41,7 +41,13 @@ describe('personal API tokens', () => {
     const member = await agentFor(app, 'member');
     const created = await mint(member, { name: 'instrument upload', readOnly: false });
     expect(created.token).toMatch(API_TOKEN_PATTERN);
-    expect(created).toMatchObject({ name: 'instrument upload', readOnly: false, status: 'active', lastUsedAt: null, expiresAt: null });
+    expect(created).toMatchObject({
+      name: 'instrument upload',
+      readOnly: false,
+      status: 'active',
+      lastUsedAt: null,
+      expiresAt: null,
+    });
     const rows = await sequelize.query<{ token_hash: string }>('SELECT token_hash FROM api_tokens WHERE id = :id', {
       replacements: { id: created.id },
       type: QueryTypes.SELECT,
@@ -80,7 +86,9 @@ describe('personal API tokens', () => {
     const viewer = await agentFor(app, 'viewer');
     const { token, id } = await mint(viewer);
     const expired = await mint(viewer, { name: 'short-lived' });
-    await sequelize.query("UPDATE api_tokens SET expires_at = now() - interval '1 second' WHERE id = :id", { replacements: { id: expired.id } });
+    await sequelize.query("UPDATE api_tokens SET expires_at = now() - interval '1 second' WHERE id = :id", {
+      replacements: { id: expired.id },
+    });
     expect((await viewer.delete(`/api/tokens/${id}`).set('X-CSRF-Token', viewer.csrf)).body.status).toBe('revoked');
     const unknown = `rfo_${'A'.repeat(43)}`;
     for (const credential of [token, expired.token, unknown, 'not-a-token', '']) {
@@ -98,11 +106,16 @@ describe('personal API tokens', () => {
     const curator = await agentFor(app, 'curator');
     const { token } = await mint(curator);
     expect((await request(app).get('/api/curation/duplicates').set(bearer(token))).status).toBe(200);
-    const demote = await admin.patch(`/api/admin/users/${curator.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ role: 'viewer' });
+    const demote = await admin
+      .patch(`/api/admin/users/${curator.user!.id}`)
+      .set('X-CSRF-Token', admin.csrf)
+      .send({ role: 'viewer' });
     expect(demote.status).toBe(200);
     expect((await request(app).get('/api/curation/duplicates').set(bearer(token))).status).toBe(403);
     // Changed behind the app's back (another process or plain SQL): the user cache follows the data stamp.
-    await sequelize.query("UPDATE users SET status = 'disabled' WHERE id = :id", { replacements: { id: curator.user!.id } });
+    await sequelize.query("UPDATE users SET status = 'disabled' WHERE id = :id", {
+      replacements: { id: curator.user!.id },
+    });
     expect((await request(app).get('/api/overview').set(bearer(token))).status).toBe(401);
   });
 
@@ -113,7 +126,7 @@ describe('personal API tokens', () => {
     expect(res.status).toBe(403);
   });
 
-  it('when someone revokes another person\'s token, then 404 unless they are an admin, who lists and revokes any token', async () => {
+  it("when someone revokes another person's token, then 404 unless they are an admin, who lists and revokes any token", async () => {
     const owner = await agentFor(app, 'member');
     const other = await agentFor(app, 'curator');
     const admin = await agentFor(app, 'admin');
@@ -133,7 +146,11 @@ describe('personal API tokens', () => {
 
   it('when a token is created with bad input, then 400 names the field; past and far-future expiries are refused', async () => {
     const member = await agentFor(app, 'member');
-    const send = (body: unknown) => member.post('/api/tokens').set('X-CSRF-Token', member.csrf).send(body as object);
+    const send = (body: unknown) =>
+      member
+        .post('/api/tokens')
+        .set('X-CSRF-Token', member.csrf)
+        .send(body as object);
     expect((await send({})).body.error.details[0].path).toBe('body.name');
     expect((await send({ name: 'x', expiresAt: 'soon' })).status).toBe(400);
     expect((await send({ name: 'x', expiresAt: '2001-01-01' })).body.error.details[0].path).toBe('body.expiresAt');
@@ -155,20 +172,27 @@ describe('personal API tokens', () => {
     const { token } = await mint(member);
     const from = '203.0.113.77';
     for (let i = 0; i < 4; i++) {
-      const res = await request(app).get('/api/overview').set({ Authorization: `Bearer rfo_${String(i).repeat(43)}`, 'X-Forwarded-For': from });
+      const res = await request(app)
+        .get('/api/overview')
+        .set({ Authorization: `Bearer rfo_${String(i).repeat(43)}`, 'X-Forwarded-For': from });
       expect(res.status).toBe(401);
     }
-    const blocked = await request(app).get('/api/overview').set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': from });
+    const blocked = await request(app)
+      .get('/api/overview')
+      .set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': from });
     expect(blocked.status).toBe(429);
     expect(blocked.body.error.code).toBe('too_many_attempts');
     // Another address is not held up, and good tokens do not use up the allowance.
     for (let i = 0; i < 6; i++) expect((await request(app).get('/api/overview').set(bearer(token))).status).toBe(200);
   });
 
-  it('when a token contributes a record, then it needs no CSRF token and the record is the owner\'s', async () => {
+  it("when a token contributes a record, then it needs no CSRF token and the record is the owner's", async () => {
     const member = await agentFor(app, 'member');
     const { token } = await mint(member);
-    const res = await request(app).post('/api/records').set(bearer(token)).send(exampleRecordBody({ notes: 'contributed by a script' }));
+    const res = await request(app)
+      .post('/api/records')
+      .set(bearer(token))
+      .send(exampleRecordBody({ notes: 'contributed by a script' }));
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.author.id).toBe(member.user!.id);
   });

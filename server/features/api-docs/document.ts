@@ -1,8 +1,19 @@
 import type { Application } from 'express';
 import { z } from 'zod';
-import { createDocument, type ZodOpenApiOperationObject, type ZodOpenApiPathsObject, type ZodOpenApiResponseObject, type ZodOpenApiResponsesObject } from 'zod-openapi';
+import {
+  createDocument,
+  type ZodOpenApiOperationObject,
+  type ZodOpenApiPathsObject,
+  type ZodOpenApiResponseObject,
+  type ZodOpenApiResponsesObject,
+} from 'zod-openapi';
 import { roles, type AccessLevel } from '../../../shared/schemas/auth';
-import { recordCompoundSchema, recordDtoSchema, recordListItemSchema, spotDtoSchema } from '../../../shared/schemas/record-dto';
+import {
+  recordCompoundSchema,
+  recordDtoSchema,
+  recordListItemSchema,
+  spotDtoSchema,
+} from '../../../shared/schemas/record-dto';
 import { eluentSchema } from '../../../shared/schemas/eluent';
 import { importDtoSchema } from '../../../shared/schemas/import';
 import { adminUserSchema, invitationSchema } from '../../../shared/schemas/accounts';
@@ -34,15 +45,23 @@ function responsesOf(route: MountedRoute, text: OperationText): ZodOpenApiRespon
     const content = answer.json
       ? { 'application/json': { schema: answer.json } }
       : answer.media
-        ? { [answer.media.type]: { schema: z.string().meta(answer.media.format ? { format: answer.media.format } : {}) } }
+        ? {
+            [answer.media.type]: {
+              schema: z.string().meta(answer.media.format ? { format: answer.media.format } : {}),
+            },
+          }
         : undefined;
-    out[String(answer.status)] = content ? { description: answer.description, content } : { description: answer.description };
+    out[String(answer.status)] = content
+      ? { description: answer.description, content }
+      : { description: answer.description };
   }
   const hasInput = Object.keys(route.schemas).length > 0 || text.extra !== undefined;
   if (hasInput) out['400'] ??= failure('The input was refused; `details` lists each problem with its path.');
   if (route.access !== 'public') {
     out['401'] ??= failure('Not signed in, or the API token is unknown, expired or revoked.');
-    out['403'] ??= failure('Your role does not allow this, a read-only token tried to write, or the CSRF token is missing.');
+    out['403'] ??= failure(
+      'Your role does not allow this, a read-only token tried to write, or the CSRF token is missing.',
+    );
   } else if (WRITES.has(route.method)) {
     out['403'] ??= failure('The CSRF token is missing (cookie sessions only), or a read-only token tried to write.');
   }
@@ -54,7 +73,9 @@ function responsesOf(route: MountedRoute, text: OperationText): ZodOpenApiRespon
 
 function securityOf(route: MountedRoute) {
   if (route.access === 'public') return undefined;
-  return WRITES.has(route.method) ? [{ bearerToken: [] }, { sessionCookie: [], csrfHeader: [] }] : [{ bearerToken: [] }, { sessionCookie: [] }];
+  return WRITES.has(route.method)
+    ? [{ bearerToken: [] }, { sessionCookie: [], csrfHeader: [] }]
+    : [{ bearerToken: [] }, { sessionCookie: [] }];
 }
 
 function operationOf(route: MountedRoute, text: OperationText): ZodOpenApiOperationObject {
@@ -69,7 +90,10 @@ function operationOf(route: MountedRoute, text: OperationText): ZodOpenApiOperat
       : undefined;
   const access = route.access ?? 'admin';
   return {
-    operationId: `${route.method.toLowerCase()}${openApiPath(route.path).replace(/^\/api/, '').replace(/[{}]/g, '').replace(/[^A-Za-z0-9]+(.)?/g, (_m, c: string | undefined) => (c ?? '').toUpperCase())}`,
+    operationId: `${route.method.toLowerCase()}${openApiPath(route.path)
+      .replace(/^\/api/, '')
+      .replace(/[{}]/g, '')
+      .replace(/[^A-Za-z0-9]+(.)?/g, (_m, c: string | undefined) => (c ?? '').toUpperCase())}`,
     tags: [text.tag],
     summary: text.summary,
     description: [text.description, `**Who may call:** ${whoMay(access)}`].filter(Boolean).join('\n\n'),
@@ -98,8 +122,8 @@ const namedSchemas = {
 
 const DESCRIPTION = `The JSON API of Rfolio, generated from the same zod schemas the server validates with.
 
-Scripts authenticate with a personal API token (create one on the profile page) sent as \`Authorization: Bearer <token>\`:
-no cookie and no CSRF token are needed. A token acts with its owner's current role, or only reads (GET, HEAD) when it is
+Scripts authenticate with a personal API token (create one on the profile page) sent as
+\`Authorization: Bearer <token>\`: no cookie and no CSRF token are needed. A token acts with its owner's current role, or only reads (GET, HEAD) when it is
 read-only. The browser app uses a cookie session instead, and sends \`X-CSRF-Token\` on every write.
 
 Every failure answers \`{ "error": { "code", "message", "details"? } }\`.`;
@@ -123,9 +147,23 @@ export function buildOpenApiDocument(app: Application) {
       components: {
         schemas: namedSchemas,
         securitySchemes: {
-          bearerToken: { type: 'http', scheme: 'bearer', description: 'A personal API token (`rfo_…`) from the profile page.' },
-          sessionCookie: { type: 'apiKey', in: 'cookie', name: 'rfolio.sid', description: 'The browser session after POST /api/auth/login.' },
-          csrfHeader: { type: 'apiKey', in: 'header', name: 'X-CSRF-Token', description: 'From GET /api/auth/csrf; needed on writes with a cookie session.' },
+          bearerToken: {
+            type: 'http',
+            scheme: 'bearer',
+            description: 'A personal API token (`rfo_…`) from the profile page.',
+          },
+          sessionCookie: {
+            type: 'apiKey',
+            in: 'cookie',
+            name: 'rfolio.sid',
+            description: 'The browser session after POST /api/auth/login.',
+          },
+          csrfHeader: {
+            type: 'apiKey',
+            in: 'header',
+            name: 'X-CSRF-Token',
+            description: 'From GET /api/auth/csrf; needed on writes with a cookie session.',
+          },
         },
       },
     },

@@ -10,9 +10,27 @@ const operationSchema = z.looseObject({
   description: z.string().optional(),
   tags: z.array(z.string()).optional(),
   'x-rfolio-access': z.string().optional(),
-  parameters: z.array(z.looseObject({ name: z.string(), in: z.string(), required: z.boolean().optional(), schema: schemaObject.optional(), description: z.string().optional() })).optional(),
-  requestBody: z.looseObject({ content: z.record(z.string(), z.looseObject({ schema: schemaObject.optional() })) }).optional(),
-  responses: z.record(z.string(), z.looseObject({ description: z.string().optional(), content: z.record(z.string(), z.looseObject({ schema: schemaObject.optional() })).optional() })),
+  parameters: z
+    .array(
+      z.looseObject({
+        name: z.string(),
+        in: z.string(),
+        required: z.boolean().optional(),
+        schema: schemaObject.optional(),
+        description: z.string().optional(),
+      }),
+    )
+    .optional(),
+  requestBody: z
+    .looseObject({ content: z.record(z.string(), z.looseObject({ schema: schemaObject.optional() })) })
+    .optional(),
+  responses: z.record(
+    z.string(),
+    z.looseObject({
+      description: z.string().optional(),
+      content: z.record(z.string(), z.looseObject({ schema: schemaObject.optional() })).optional(),
+    }),
+  ),
 });
 export type Operation = z.infer<typeof operationSchema>;
 

@@ -11,15 +11,30 @@ const methodClass: Record<string, string> = {
   delete: 'border-failed text-failed',
 };
 
-const roleText = (access: string | undefined) => (access === 'public' ? 'anyone' : access ? `${access} or above` : 'unknown');
+const roleText = (access: string | undefined) =>
+  access === 'public' ? 'anyone' : access ? `${access} or above` : 'unknown';
 
-function OperationItem({ method, path, op, components }: { method: string; path: string; op: Operation; components: Record<string, Schema> }) {
+function OperationItem({
+  method,
+  path,
+  op,
+  components,
+}: {
+  method: string;
+  path: string;
+  op: Operation;
+  components: Record<string, Schema>;
+}) {
   const body = op.requestBody ? Object.entries(op.requestBody.content)[0] : undefined;
   return (
     <li id={op.operationId} className="py-3">
       <details>
         <summary className="flex min-h-10 cursor-pointer flex-wrap items-center gap-2">
-          <span className={`figure rounded-plate border px-1.5 text-xs font-semibold uppercase ${methodClass[method] ?? ''}`}>{method}</span>
+          <span
+            className={`figure rounded-plate border px-1.5 text-xs font-semibold uppercase ${methodClass[method] ?? ''}`}
+          >
+            {method}
+          </span>
           <span className="figure break-all text-sm text-ink">{path}</span>
           <span className="text-sm text-ink-soft">{op.summary}</span>
         </summary>
@@ -33,7 +48,11 @@ function OperationItem({ method, path, op, components }: { method: string; path:
               <ul className="space-y-1 text-xs">
                 {op.parameters.map((p) => (
                   <li key={`${p.in}-${p.name}`} className="break-words">
-                    <span className="figure font-medium">{p.name}</span> <span className="text-ink-soft">({p.in}{p.required ? ', required' : ''})</span>{' '}
+                    <span className="figure font-medium">{p.name}</span>{' '}
+                    <span className="text-ink-soft">
+                      ({p.in}
+                      {p.required ? ', required' : ''})
+                    </span>{' '}
                     <span className="figure text-ink-soft">{p.schema ? typeLabel(p.schema, components) : ''}</span>
                   </li>
                 ))}
@@ -55,7 +74,8 @@ function OperationItem({ method, path, op, components }: { method: string; path:
                 const [type, media] = Object.entries(answer.content ?? {})[0] ?? [];
                 return (
                   <li key={status}>
-                    <span className="figure font-medium">{status}</span> <span className="text-ink-soft">{answer.description}</span>
+                    <span className="figure font-medium">{status}</span>{' '}
+                    <span className="text-ink-soft">{answer.description}</span>
                     {type && <span className="figure text-xs text-ink-soft"> ({type})</span>}
                     {media?.schema && /^2/.test(status) && <SchemaView schema={media.schema} components={components} />}
                   </li>

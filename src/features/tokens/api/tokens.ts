@@ -1,6 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { apiTokenListSchema, apiTokenSchema, createdTokenSchema, type TokenCreate } from '../../../../shared/schemas/tokens';
+import {
+  apiTokenListSchema,
+  apiTokenSchema,
+  createdTokenSchema,
+  type TokenCreate,
+} from '../../../../shared/schemas/tokens';
 
 /** Query keys of the API tokens, general to specific. */
 export const tokenKeys = {
@@ -22,7 +27,8 @@ export const allTokensQueryOptions = queryOptions({
 export const useMyTokens = () => useQuery(myTokensQueryOptions);
 export const useAllTokens = (enabled: boolean) => useQuery({ ...allTokensQueryOptions, enabled });
 
-export const createToken = (input: TokenCreate) => api('/api/tokens', { method: 'POST', body: input }, createdTokenSchema);
+export const createToken = (input: TokenCreate) =>
+  api('/api/tokens', { method: 'POST', body: input }, createdTokenSchema);
 export const revokeToken = (id: number) => api(`/api/tokens/${id}`, { method: 'DELETE' }, apiTokenSchema);
 
 function useTokenMutation<I, O>(fn: (input: I) => Promise<O>) {
