@@ -8,7 +8,7 @@ import { logger } from './logger';
 import { env } from '../config/env';
 import { sessionMiddleware } from '../auth/session';
 import { passport } from '../auth/passport';
-import { bearerAuth } from '../auth/bearer';
+import { bearerAuth, withoutCredentials } from '../auth/bearer';
 import { requireCsrf } from './middleware/csrf';
 import { errorHandler, apiNotFound } from './middleware/errors';
 import { apiRouter } from './routes';
@@ -45,6 +45,7 @@ export function createApp(): AppHandle {
     pinoHttp({
       logger,
       autoLogging: { ignore: (req) => req.url === '/api/health' },
+      serializers: { req: (req: { headers?: Record<string, unknown> }) => ({ ...req, headers: withoutCredentials(req.headers) }) },
       customLogLevel: (_req, res, err) => (res.statusCode === 503 ? 'warn' : err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
     }),
   );
