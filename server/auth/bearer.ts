@@ -1,11 +1,11 @@
 import { createHash, randomBytes } from 'node:crypto';
 import type { Request, RequestHandler } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { ipKeyGenerator, MemoryStore, type Options, type Store } from 'express-rate-limit';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { env } from '../config/env';
 import { logger } from '../http/logger';
-import { UnauthenticatedError } from '../http/errors';
+import { AppError, UnauthenticatedError } from '../http/errors';
 import { PgRateLimitStore } from './pg-rate-limit-store';
 import { sessionUserRow } from './user-cache';
 import { toSessionUser } from './passport';
@@ -42,39 +42,47 @@ export function bearerCredential(req: Request): string | undefined {
   return match ? match[1] : header && /^Bearer\b/i.test(header) ? '' : undefined;
 }
 
-function counters() {
-  const kind = env().SIGNIN_THROTTLE_STORE ?? (env().NODE_ENV === 'production' ? 'postgres' : 'memory');
-  return kind === 'postgres' ? { store: new PgRateLimitStore('api-token-address:') } : {};
+/**
+ * Refused tokens per client address, with the sign-in allowance, window and store (SIGNIN_MAX_FAILURES_PER_ADDRESS per
+ * SIGNIN_WINDOW_MINUTES; PostgreSQL in production). Only a refusal is counted, so a script's good calls write nothing;
+ * once an address has used up its allowance, every Bearer request from it is answered 429 until the window ends.
+ */
+export class TokenFailureThrottle {
+  private store: Store | undefined;
+
+  private counters(): Store {
+    if (this.store) return this.store;
+    const kind = env().SIGNIN_THROTTLE_STORE ?? (env().NODE_ENV === 'production' ? 'postgres' : 'memory');
+    const store: Store = kind === 'postgres' ? new PgRateLimitStore('api-token-address:') : new MemoryStore();
+    store.init?.({ windowMs: env().SIGNIN_WINDOW_MINUTES * 60_000 } as Options);
+    this.store = store;
+    return store;
+  }
+
+  private key(req: Request) {
+    return ipKeyGenerator(req.ip ?? '');
+  }
+
+  /** Minutes until the address may try again, or 0 when it has allowance left. */
+  async blockedMinutes(req: Request): Promise<number> {
+    const info = await this.counters().get?.(this.key(req));
+    if (!info || info.totalHits < env().SIGNIN_MAX_FAILURES_PER_ADDRESS) return 0;
+    const left = (info.resetTime?.getTime() ?? Date.now()) - Date.now();
+    return left > 0 ? Math.max(1, Math.ceil(left / 60_000)) : 0;
+  }
+
+  async refused(req: Request): Promise<void> {
+    await this.counters().increment(this.key(req));
+  }
 }
 
-/**
- * Failed token attempts per client address, with the sign-in allowance and window (SIGNIN_MAX_FAILURES_PER_ADDRESS
- * per SIGNIN_WINDOW_MINUTES) and the same store. Only requests that carry a Bearer credential count, and only a
- * refused one uses up the allowance.
- */
-const tokenFailuresByAddress = rateLimit({
-  windowMs: env().SIGNIN_WINDOW_MINUTES * 60_000,
-  limit: () => env().SIGNIN_MAX_FAILURES_PER_ADDRESS,
-  skip: (req) => bearerCredential(req) === undefined,
-  skipSuccessfulRequests: true,
-  requestWasSuccessful: (_req, res) => !res.locals.refusedToken,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  ...counters(),
-  handler: (req, res) => {
-    const resetTime = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-    const minutes = resetTime
-      ? Math.max(1, Math.ceil((resetTime.getTime() - Date.now()) / 60_000))
-      : env().SIGNIN_WINDOW_MINUTES;
-    res.status(429).json({
-      error: {
-        code: 'too_many_attempts',
-        message: `Too many refused API tokens from this address. Try again in ${minutes} min.`,
-        details: { retryAfterMinutes: minutes },
-      },
-    });
-  },
-});
+const throttle = new TokenFailureThrottle();
+
+function tooMany(minutes: number) {
+  return new AppError(429, 'too_many_attempts', `Too many refused API tokens from this address. Try again in ${minutes} min.`, {
+    retryAfterMinutes: minutes,
+  });
+}
 
 type TokenRow = { id: number; user_id: number; read_only: boolean; stale: boolean };
 
@@ -94,7 +102,6 @@ async function usableToken(credential: string): Promise<TokenRow | undefined> {
 }
 
 function refuse(res: Parameters<RequestHandler>[1]) {
-  res.locals.refusedToken = true;
   res.set('WWW-Authenticate', 'Bearer realm="rfolio", error="invalid_token"');
   return new UnauthenticatedError('The API token is unknown, expired or revoked, or its owner can no longer sign in.');
 }
@@ -110,10 +117,14 @@ const authenticateBearer: RequestHandler = async (req, res, next) => {
   if (credential === undefined) return next();
   try {
     req.user = undefined;
+    const wait = await throttle.blockedMinutes(req);
+    if (wait > 0) return next(tooMany(wait));
     const token = await usableToken(credential);
-    if (!token) return next(refuse(res));
-    const owner = await sessionUserRow(token.user_id, req);
-    if (!owner || owner.status !== 'active') return next(refuse(res));
+    const owner = token ? await sessionUserRow(token.user_id, req) : null;
+    if (!token || !owner || owner.status !== 'active') {
+      await throttle.refused(req);
+      return next(refuse(res));
+    }
     req.user = toSessionUser(owner);
     req.apiToken = { id: token.id, readOnly: token.read_only };
     if (token.stale) {
@@ -138,4 +149,4 @@ export function withoutCredentials(headers: Record<string, unknown> | undefined)
 }
 
 /** Mounted under /api after the session middleware and before the CSRF check. */
-export const bearerAuth: RequestHandler[] = [tokenFailuresByAddress, authenticateBearer];
+export const bearerAuth: RequestHandler[] = [authenticateBearer];

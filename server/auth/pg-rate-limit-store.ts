@@ -29,6 +29,14 @@ export class PgRateLimitStore implements Store {
     return { totalHits: row.hits, resetTime: new Date(row.reset_at) };
   }
 
+  async get(key: string): Promise<ClientRateLimitInfo | undefined> {
+    const [row] = await sequelize.query<{ hits: number; reset_at: Date }>(
+      'SELECT hits, reset_at FROM rate_limit_hits WHERE key = :key AND reset_at > now()',
+      { replacements: { key: this.prefix + key }, type: QueryTypes.SELECT },
+    );
+    return row ? { totalHits: row.hits, resetTime: new Date(row.reset_at) } : undefined;
+  }
+
   async decrement(key: string): Promise<void> {
     await sequelize.query('UPDATE rate_limit_hits SET hits = GREATEST(hits - 1, 0) WHERE key = :key AND reset_at > now()', {
       replacements: { key: this.prefix + key },
