@@ -95,6 +95,17 @@ describe('the OpenAPI document', () => {
     expect(doc.paths['/api/imports'].post.requestBody).toMatchObject({ content: { 'multipart/form-data': {} } });
   });
 
+  it('declares every {parameter} of every path as a path parameter of each of its operations', () => {
+    const ops = Object.entries(doc.paths).flatMap(([path, item]) => Object.values(item).map((op) => ({ path, op })));
+    const templated = ops.filter(({ path }) => path.includes('{'));
+    expect(templated.length).toBeGreaterThan(20);
+    for (const { path, op } of templated) {
+      const names = [...path.matchAll(/\{(\w+)\}/g)].map((m) => m[1]).sort();
+      const declared = (op.parameters ?? []).filter((p) => p.in === 'path').map((p) => p.name).sort();
+      expect(declared, path).toEqual(names);
+    }
+  });
+
   it('leaves out a route that has no description, so the coverage check above would fail on it', () => {
     const fresh = express();
     const extra = Router();
