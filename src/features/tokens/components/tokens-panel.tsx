@@ -120,7 +120,7 @@ export function TokensPanel({ isAdmin }: { isAdmin: boolean }) {
             checked={readOnly}
             onChange={(e) => setReadOnly(e.target.checked)}
           />
-          Read-only (may only read: exports, searches, record pages)
+          Read-only: GET requests only (exports, searches, record pages; Scout and the tools need a full token)
         </label>
         <div className="sm:col-span-2">
           <Button type="submit" variant="primary" disabled={create.isPending}>
