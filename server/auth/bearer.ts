@@ -118,7 +118,10 @@ const authenticateBearer: RequestHandler = async (req, res, next) => {
   try {
     req.user = undefined;
     const wait = await throttle.blockedMinutes(req);
-    if (wait > 0) return next(tooMany(wait));
+    if (wait > 0) {
+      res.set('Retry-After', String(wait * 60));
+      return next(tooMany(wait));
+    }
     const token = await usableToken(credential);
     const owner = token ? await sessionUserRow(token.user_id, req) : null;
     if (!token || !owner || owner.status !== 'active') {

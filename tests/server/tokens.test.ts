@@ -182,6 +182,7 @@ describe('personal API tokens', () => {
       .set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': from });
     expect(blocked.status).toBe(429);
     expect(blocked.body.error.code).toBe('too_many_attempts');
+    expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
     const [{ hits }] = await sequelize.query<{ hits: number }>('SELECT hits FROM rate_limit_hits WHERE key = :key', {
       replacements: { key: `api-token-address:${from}` },
       type: QueryTypes.SELECT,
