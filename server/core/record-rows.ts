@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import { ConditionRecord, RecordContributor, RecordRevision, RecordSpot, RecordVisualisation } from '../db/models';
 import type { Spot, Visualisation } from '../../shared/schemas/record-parts';
 import type { RevisionAction } from '../../shared/schemas/record-history';
-import { addRevision, columnOf, type RecordState } from './record-revisions';
+import { addRevision, recordState } from './record-revisions';
 import { columnAttributes, derivedColumns, recordContentHash, type RecordContent } from './record-columns';
 
 export interface NewRecordOptions {
@@ -76,26 +76,6 @@ export async function insertRecord(content: RecordContent, options: NewRecordOpt
   return record;
 }
 
-/** A new record's state as loadRecordState would read it back: the snapshot of its first revision. */
-function initialState(record: ConditionRecord, content: RecordContent): RecordState {
-  return {
-    compoundId: record.compoundId,
-    technique: record.technique,
-    stationaryPhase: record.stationaryPhase,
-    stationaryPhaseOther: record.stationaryPhaseOther,
-    eluent: record.eluent,
-    spots: content.spots.map(({ role, rf, lane, spotDistanceMm, frontDistanceMm, label }) => ({ role, rf, lane, spotDistanceMm, frontDistanceMm, label })),
-    visualisations: content.visualisation.map(({ method, note }) => ({ method, note })),
-    outcome: record.outcome,
-    outcomeReason: record.outcomeReason,
-    column: columnOf(record),
-    notebookRef: record.notebookRef,
-    notes: record.notes,
-    status: 'active',
-    photoIds: [],
-  };
-}
-
 /**
  * Inserts many complete records inside the caller's transaction, leaving each exactly as insertRecord
  * would (row, spots, visualisations, author credit, revision 1 with its snapshot) but in six statements
@@ -112,7 +92,7 @@ export async function insertRecords(contents: readonly RecordContent[], options:
   await RecordRevision.bulkCreate(
     records.map((record, index) => ({
       recordId: record.id, number: 1, authorId, action: options.action ?? 'create', changes: [],
-      snapshot: initialState(record, contents[index]) as unknown as Record<string, unknown>,
+      snapshot: recordState(record, contents[index].spots, contents[index].visualisation, []) as unknown as Record<string, unknown>,
     })),
     { transaction },
   );
