@@ -63,7 +63,7 @@ function recordAttributes(content: RecordContent, options: NewRecordOptions) {
 
 /**
  * Inserts a complete record — row, spots, visualisations, author credit and revision 1 — inside the
- * caller's transaction. The compound must exist already (see services/compounds). Used by the API,
+ * caller's transaction. The compound must exist already (see core/compounds). Used by the API,
  * the demo seeder and imports alike.
  */
 export async function insertRecord(content: RecordContent, options: NewRecordOptions): Promise<ConditionRecord> {

@@ -7,7 +7,7 @@ import { agentFor, type Agent } from '../helpers/agent';
 
 /**
  * Signed-in reads reuse the session and user rows for a few seconds (auth/session-cache.ts, auth/user-cache.ts),
- * but only while the data stamp (services/data-stamp.ts) is unchanged: changes made through this process and
+ * but only while the data stamp (db/data-stamp.ts) is unchanged: changes made through this process and
  * changes made behind its back (another process, plain SQL) both apply to the very next request.
  */
 const { app, close } = createApp();
