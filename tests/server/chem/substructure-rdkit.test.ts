@@ -63,6 +63,7 @@ const onlyOurs = (query: string) => {
 describe('substructure search against RDKit MinimalLib (open-tlc structures, SMILES queries)', () => {
   it('runs every query over a few hundred structures, and most queries find something', () => {
     expect(openData.length).toBeGreaterThan(400);
+    expect(rdkitMols).toHaveLength(openData.length);
     expect(rdkitMols.every((mol) => mol !== null)).toBe(true);
     expect([...results.values()].filter((result) => result.theirs.size > 0).length).toBeGreaterThan(35);
   });
