@@ -17,16 +17,28 @@ const root = fileURLToPath(new URL('../../', import.meta.url));
 const references = readFileSync(join(root, 'docs/references.md'), 'utf8');
 
 /** Short forms the app cites; each must be listed in docs/references.md. */
-const shortForms = ['Still, Kahn & Mitra 1978', 'Snyder 1968', 'Sadek', 'Soczewiński 1969', 'Bate-Smith & Westall 1950'];
+const shortForms = [
+  'Still, Kahn & Mitra 1978',
+  'Snyder 1968',
+  'Sadek',
+  'Soczewiński 1969',
+  'Bate-Smith & Westall 1950',
+];
 const plainly = /from memory|common practice|estimate/;
 const internal = /REFERENCE|confirmed|from-memory|heuristic/i;
 
 function shownSources(): string[] {
   const plan = planColumn({ sampleMg: 500, rfTarget: 0.3, rfImpurity: 0.45 });
-  const translation = translateEluent([{ solvent: 'hexanes', parts: 4 }, { solvent: 'ethyl-acetate', parts: 1 }], {
-    weak: [{ solvent: 'heptane', parts: 1 }],
-    strong: [{ solvent: 'ethyl-acetate', parts: 1 }],
-  });
+  const translation = translateEluent(
+    [
+      { solvent: 'hexanes', parts: 4 },
+      { solvent: 'ethyl-acetate', parts: 1 },
+    ],
+    {
+      weak: [{ solvent: 'heptane', parts: 1 }],
+      strong: [{ solvent: 'ethyl-acetate', parts: 1 }],
+    },
+  );
   if (!translation.ok) throw new Error(translation.message);
   return [
     ...solvents.flatMap((solvent) => [
@@ -64,15 +76,22 @@ describe('sources a reader can open', () => {
   });
 
   it('names a published source, or says from memory, common practice or estimate, for every value it shows', () => {
-    const shown = shownSources().filter((text) => !text.startsWith('Equal ε° matches') && !text.startsWith('Some ε°'));
+    const advice = (text: string) => text.startsWith('Equal ε° matches') || text.startsWith('Some ε°');
+    const shown = shownSources().filter((text) => !advice(text));
     expect(shown.length).toBeGreaterThan(60);
-    const unsourced = shown.filter((text) => !plainly.test(text) && !shortForms.some((form) => text.includes(form.split(' ')[0])));
+    const unsourced = shown.filter(
+      (text) => !plainly.test(text) && !shortForms.some((form) => text.includes(form.split(' ')[0])),
+    );
     expect(unsourced).toEqual([]);
   });
 
   it('cites no "REFERENCE.md" anywhere in the code, seeds or tests', () => {
     // Scout's engine and tests are being rewritten on another branch; its three mentions are listed for the lead.
-    const pending = ['server/features/scout/engine/curves.ts', 'tests/server/scout.test.ts', 'tests/server/scout-open-data.test.ts'];
+    const pending = [
+      'server/features/scout/engine/curves.ts',
+      'tests/server/scout.test.ts',
+      'tests/server/scout-open-data.test.ts',
+    ];
     const files = ['shared', 'server', 'src', 'seeders', 'tests'].flatMap((folder) => filesUnder(join(root, folder)));
     expect(files.length).toBeGreaterThan(200);
     const citing = files
