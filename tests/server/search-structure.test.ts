@@ -115,8 +115,7 @@ describe('GET /api/search?mode=similar', () => {
     const query = records.get('4-dodecylpyridine')!.compoundId;
     for (const name of ['dodecylbenzene', '5-dodecylpyrimidine', '3-methylpyridine'] as const) {
       const hit = hits.find((item) => item.recordId === records.get(name)!.id);
-      expect(hit, name).toBeDefined();
-      expect(hit!.similarity).toBeCloseTo(await storedTanimoto(query, records.get(name)!.compoundId), 3);
+      expect(hit?.similarity, name).toBeCloseTo(await storedTanimoto(query, records.get(name)!.compoundId), 3);
     }
   });
 
