@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { mixtureStrength } from '../../shared/domain/eluent-strength';
 import { translateEluent } from '../../shared/domain/translate-eluent';
+import { spearman } from './support/statistics';
 import { readOpenTlc, type TlcRow } from './support/open-tlc';
 
 /**
@@ -187,5 +189,38 @@ describe('eluent translation against measured Rf in the target eluent (open-tlc 
     // Not better than a composition-blind guess (see the header): the bound only says the translation lands in
     // the right region of the target pair; the app labels these values "from memory" and asks for a TLC plate.
     expect(result.mae).toBeLessThanOrEqual(0.2);
+  });
+});
+
+describe('Snyder ε° against how far the 17 measured eluents move the same compounds (open-tlc dataset)', () => {
+  // Mean RM over the compounds measured in every eluent (76): a stronger eluent must give a lower mean RM.
+  // Measured: Spearman ρ(ε°, mean RM) = −0.93 over 17 eluents. Inversions: pure Et2O (ε° 0.43) moves these
+  // compounds further than pure EtOAc (0.48), and DCM/MeOH mixtures run weaker than their ε° (see above).
+  it('orders the eluents by strength as the measured Rf do (Spearman ρ ≤ −0.8)', () => {
+    const columns = ['hexane', 'ethyl_acetate', 'dichloromethane', 'methanol', 'diethyl_ether'] as const;
+    const solventOf = ['hexanes', 'ethyl-acetate', 'dichloromethane', 'methanol', 'diethyl-ether'];
+    const eluents = new Map<string, Map<string, number[]>>();
+    for (const row of rows) {
+      const key = columns.map((column) => Number(row[column]).toFixed(4)).join(',');
+      const compounds = eluents.get(key) ?? new Map<string, number[]>();
+      compounds.set(row.smiles, [...(compounds.get(row.smiles) ?? []), clampRf(Number(row.rf))]);
+      eluents.set(key, compounds);
+    }
+    const keys = [...eluents.keys()];
+    const shared = [...(eluents.get(keys[0]) as Map<string, number[]>).keys()].filter((smiles) =>
+      keys.every((key) => eluents.get(key)?.has(smiles)),
+    );
+    expect(keys).toHaveLength(17);
+    expect(shared.length).toBeGreaterThan(50);
+    const strengths = keys.map((key) => {
+      const parts = key.split(',').map((share, index) => ({ solvent: solventOf[index], parts: Number(share) }));
+      const result = mixtureStrength(parts.filter((part) => part.parts > 0), 'silica');
+      if (!result.ok) throw new Error(result.message);
+      return result.epsilon;
+    });
+    const meanRm = keys.map((key) => mean(shared.map((smiles) => rmFromRf(mean(eluents.get(key)?.get(smiles) ?? [])))));
+    const rho = spearman(strengths, meanRm);
+    console.log(`ε° vs mean RM: ${keys.length} eluents, ${shared.length} compounds, Spearman ρ ${rho.toFixed(3)}`);
+    expect(rho).toBeLessThanOrEqual(-0.8);
   });
 });
