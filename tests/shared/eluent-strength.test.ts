@@ -52,7 +52,8 @@ describe('Snyder solvent strength of mixtures (Snyder 1968, Principles of Adsorp
     // Published values: silica from Sadek, Illustrated Pocket Dictionary of Chromatography, p. 74; alumina from
     // Snyder's eluotropic series (Snyder 1968).
     ['ethyl-acetate', 'silica', 0.48], ['diethyl-ether', 'silica', 0.43],
-    ['ethyl-acetate', 'alumina', 0.58], ['diethyl-ether', 'alumina', 0.38], ['toluene', 'alumina', 0.29], ['pentane', 'alumina', 0],
+    ['ethyl-acetate', 'alumina', 0.58], ['diethyl-ether', 'alumina', 0.38],
+    ['toluene', 'alumina', 0.29], ['pentane', 'alumina', 0],
   ] as const)('gives pure %s on %s its published ε° %s', (solvent, adsorbent, published) => {
     expect(epsilon([{ solvent, parts: 1 }], adsorbent)).toBeCloseTo(published, 9);
   });
