@@ -2,7 +2,7 @@
  * Source of the flash-column sizing table: W. C. Still, M. Kahn, A. Mitra, "Rapid chromatographic technique for
  * preparative separations with moderate resolution", J. Org. Chem. 1978, 43, 2923–2925, the sizing table.
  */
-export const stillSource = 'Still, Kahn & Mitra 1978, J. Org. Chem. 43, 2923, sizing table';
+export const stillSource = 'Still, Kahn & Mitra, J. Org. Chem. 1978, 43, 2923, sizing table';
 
 export interface StillRow {
   /** Column diameter, mm. */
