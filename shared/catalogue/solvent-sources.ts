@@ -34,7 +34,9 @@ export const confirmedSilica = (value: number): SourcedValue => ({
 export const strengthFromMemory = (value: number, range?: readonly [number, number]): SourcedValue => ({
   value,
   provenance: 'from-memory',
-  source: range ? `${sources.strengthFromMemory}; recalled range ${range[0]}–${range[1]}, midpoint used` : sources.strengthFromMemory,
+  source: range
+    ? `${sources.strengthFromMemory}; recalled range ${range[0]}–${range[1]}, midpoint used`
+    : sources.strengthFromMemory,
   ...(range ? { range } : {}),
 });
 

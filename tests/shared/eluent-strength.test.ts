@@ -39,7 +39,7 @@ describe('volume fractions to mole fractions (density and molar mass from the ca
   });
 });
 
-describe('Snyder solvent strength of mixtures (Snyder 1968, Principles of Adsorption Chromatography; equation from memory)', () => {
+describe('Snyder solvent strength of mixtures (Snyder 1968; equation from memory)', () => {
   it.each(['silica', 'alumina'] as const)('gives each pure solvent exactly its catalogue ε° on %s', (adsorbent) => {
     const withValues = solvents.filter((solvent) => solvent.strength[adsorbent]);
     expect(withValues.length).toBeGreaterThan(12);
