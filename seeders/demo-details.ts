@@ -22,7 +22,7 @@ export function demoVisualisations(classes: readonly string[], random: Random): 
 }
 
 /**
- * Still, Kahn & Mitra (J. Org. Chem. 1978, 43, 2923; REFERENCE.md): column diameter (mm), largest load
+ * Still, Kahn & Mitra (J. Org. Chem. 1978, 43, 2923, sizing table): column diameter (mm), largest load
  * for ΔRf ≥ 0.2 (mg) and fraction size (mL).
  */
 const stillTable = [

@@ -1,6 +1,6 @@
 /**
- * How the demo invents plausible Rf values. Soczewiński's relation (REFERENCE.md) says
- * RM = log10((1 − Rf)/Rf) is close to linear in log10 of the strong solvent's fraction x, with a
+ * How the demo invents plausible Rf values. Soczewiński's relation (Anal. Chem. 1969, 41, 179; details from
+ * memory) says RM = log10((1 − Rf)/Rf) is close to linear in log10 of the strong solvent's fraction x, with a
  * negative slope; the demo uses RM(x) = RM(0.3) − n·log10(x / x30), where x30 is the invented fraction
  * giving Rf 0.3 for a compound (seeders/demo-compounds.ts) and n a slope between 1.1 and 1.9.
  * So more polar compounds (higher x30) run lower, and more strong solvent moves every spot further.

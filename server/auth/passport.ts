@@ -9,6 +9,7 @@ import type { SessionUser } from '../../shared/schemas/auth';
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type -- declaration merging with passport's User
     interface User extends SessionUser {}
   }
 }

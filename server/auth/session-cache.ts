@@ -3,7 +3,7 @@ import { dataStamp } from '../db/data-stamp';
 
 /**
  * How long a session read from PostgreSQL is reused by this process at most (ms). It is reused only while the
- * data stamp (services/data-stamp.ts) is unchanged, so a sign-out or any other change to the sessions table —
+ * data stamp (db/data-stamp.ts) is unchanged, so a sign-out or any other change to the sessions table —
  * through this process, another one or plain SQL — applies to the very next request.
  */
 export const SESSION_CACHE_TTL_MS = 5_000;

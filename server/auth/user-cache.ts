@@ -15,7 +15,7 @@ export interface SessionUserRow {
 
 /**
  * How long a user row read for a session is reused at most (ms). It is reused only while the data stamp
- * (services/data-stamp.ts) is unchanged, so any committed change — by this process, another one or plain SQL —
+ * (db/data-stamp.ts) is unchanged, so any committed change — by this process, another one or plain SQL —
  * applies to the very next request; changes made through the models in this process also evict it at once.
  */
 export const USER_CACHE_TTL_MS = 5_000;

@@ -30,7 +30,7 @@ const { startedByUs } = startCluster(bin, paths, pgPort, { fast: true });
 // Databases of this run only, so concurrent runs on one machine never share rows.
 const testDb = `rfolio_test_${process.pid}`;
 const e2eDb = `rfolio_e2e_${process.pid}`;
-let status = 1;
+let status;
 try {
   ensureDatabase(bin, pgPort, testDb, { recreate: true });
   ensureDatabase(bin, pgPort, e2eDb, { recreate: true });
@@ -52,6 +52,10 @@ try {
     if (wantsE2e) ensureClientBuild(root);
     status = spawnSync(vitest, ['run', ...args], { cwd: root, env, stdio: 'inherit' }).status ?? 1;
   } else {
+    // Static checks first: types and lint (including the feature-boundary rule).
+    const checks = ['typecheck', 'lint'].map(
+      (script) => spawnSync('npm', ['run', '--silent', script], { cwd: root, env, stdio: 'inherit' }).status,
+    );
     // The fault tests stop PostgreSQL, so the browser journeys run after the other projects, not beside them.
     const unit = spawnSync(vitest, ['run', '--project', 'shared', '--project', 'client', '--project', 'server'], {
       cwd: root,
@@ -60,7 +64,7 @@ try {
     }).status;
     ensureClientBuild(root);
     const e2e = spawnSync(vitest, ['run', '--project', 'e2e'], { cwd: root, env, stdio: 'inherit' }).status;
-    status = unit === 0 && e2e === 0 ? 0 : 1;
+    status = unit === 0 && e2e === 0 && checks.every((code) => code === 0) ? 0 : 1;
   }
 } finally {
   dropDatabase(bin, pgPort, testDb);

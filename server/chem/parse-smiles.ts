@@ -1,7 +1,7 @@
 import { Molecule } from 'openchemlib';
 import { checkMolecule, type AtomLocator } from './checks';
 import { cleanMessage, StructureError } from './errors';
-import type { ParsedStructure } from './parse';
+import type { ParsedStructure } from './structure-types';
 import { scanSmiles, type SmilesAtomToken } from './smiles-syntax';
 
 function smilesLocator(tokens: SmilesAtomToken[]): AtomLocator {

@@ -4,29 +4,9 @@ import { cleanMessage, MAX_STRUCTURE_BYTES, StructureError } from './errors';
 import { checkMolfile, looksLikeMolfile, restoreHeader, withChiralFlagSet } from './molfile';
 import { splitSdf } from './sdf';
 import { parseSmilesLine } from './parse-smiles';
+import type { ParsedStructure, SdfRecord, StructureFormat } from './structure-types';
 
-export type StructureFormat = 'smiles' | 'molfile' | 'sdf';
-
-/** A structure read from text and checked; `molecule` is the whole input (all fragments). */
-export interface ParsedStructure {
-  molecule: Molecule;
-  format: StructureFormat;
-  /** Text after the SMILES, or the molfile's title line, when present. */
-  name?: string;
-  /** SDF data items of the record (empty for SMILES and plain molfiles). */
-  fields: Record<string, string>;
-}
-
-/** One SDF record: either a checked molecule or the reason it was refused. */
-export interface SdfRecord {
-  /** 1-based record number. */
-  index: number;
-  /** 1-based line where the record starts. */
-  line: number;
-  fields: Record<string, string>;
-  structure?: ParsedStructure;
-  error?: StructureError;
-}
+export type { ParsedStructure, SdfRecord, StructureFormat } from './structure-types';
 
 function checkSize(text: string): void {
   const bytes = Buffer.byteLength(text, 'utf8');

@@ -8,7 +8,7 @@ import { columnOf } from './record-revisions';
 
 type Person = Pick<User, 'id' | 'name'>;
 
-/** A record row (plain values) with the associations the presenters read (loaded by services/record-queries). */
+/** A record row (plain values) with the associations the presenters read (loaded by core/record-queries). */
 export type LoadedRecord = InferAttributes<ConditionRecord> & {
   compound: Omit<InferAttributes<Compound>, 'fingerprint' | 'molfile'>;
   author: Person;

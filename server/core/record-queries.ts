@@ -30,7 +30,7 @@ const rowsSql = { list: listRowsSql(false), export: listRowsSql(true) };
 
 /**
  * Records by id, in the order given, with what a list row shows, and their photo counts: one query of plain
- * rows (services/record-rows-sql.ts) rather than model instances joined row by row. `withMolfile` adds the
+ * rows (core/record-rows-sql.ts) rather than model instances joined row by row. `withMolfile` adds the
  * compound's molfile (SD export).
  */
 export async function loadListRecords<M extends boolean = false>(

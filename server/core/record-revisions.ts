@@ -33,13 +33,19 @@ export function columnOf(record: Pick<ConditionRecord, (typeof columnAttribute)[
   return Object.values(column).every((value) => value === null) ? null : column;
 }
 
-/** Reads a record's editable state from the database (inside the caller's transaction). */
-export async function loadRecordState(recordId: number, transaction?: Transaction): Promise<RecordState> {
-  const record = await ConditionRecord.findByPk(recordId, { transaction, rejectOnEmpty: true });
-  // One after another: a transaction is one connection, which runs one query at a time (pg 9 refuses overlapping ones).
-  const spots = await RecordSpot.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
-  const visualisations = await RecordVisualisation.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
-  const photos = await RecordPhoto.findAll({ where: { recordId, removedAt: null }, order: [['id', 'ASC']], transaction, attributes: ['id'] });
+type StateSpot = RecordState['spots'][number];
+type StateVisualisation = RecordState['visualisations'][number];
+
+/**
+ * A record's editable state from its row, spots, visualisations and photo ids: the one shape revisions snapshot,
+ * whether read back from the database (loadRecordState) or built for a record just inserted.
+ */
+export function recordState(
+  record: ConditionRecord,
+  spots: readonly StateSpot[],
+  visualisations: readonly StateVisualisation[],
+  photoIds: number[],
+): RecordState {
   return {
     compoundId: record.compoundId,
     technique: record.technique,
@@ -54,8 +60,18 @@ export async function loadRecordState(recordId: number, transaction?: Transactio
     notebookRef: record.notebookRef,
     notes: record.notes,
     status: record.status,
-    photoIds: photos.map((photo) => photo.id),
+    photoIds,
   };
+}
+
+/** Reads a record's editable state from the database (inside the caller's transaction). */
+export async function loadRecordState(recordId: number, transaction?: Transaction): Promise<RecordState> {
+  const record = await ConditionRecord.findByPk(recordId, { transaction, rejectOnEmpty: true });
+  // One after another: a transaction is one connection, which runs one query at a time (pg 9 refuses overlapping ones).
+  const spots = await RecordSpot.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+  const visualisations = await RecordVisualisation.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+  const photos = await RecordPhoto.findAll({ where: { recordId, removedAt: null }, order: [['id', 'ASC']], transaction, attributes: ['id'] });
+  return recordState(record, spots, visualisations, photos.map((photo) => photo.id));
 }
 
 const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);

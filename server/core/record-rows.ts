@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import { ConditionRecord, RecordContributor, RecordRevision, RecordSpot, RecordVisualisation } from '../db/models';
 import type { Spot, Visualisation } from '../../shared/schemas/record-parts';
 import type { RevisionAction } from '../../shared/schemas/record-history';
-import { addRevision, columnOf, type RecordState } from './record-revisions';
+import { addRevision, recordState } from './record-revisions';
 import { columnAttributes, derivedColumns, recordContentHash, type RecordContent } from './record-columns';
 
 export interface NewRecordOptions {
@@ -63,7 +63,7 @@ function recordAttributes(content: RecordContent, options: NewRecordOptions) {
 
 /**
  * Inserts a complete record — row, spots, visualisations, author credit and revision 1 — inside the
- * caller's transaction. The compound must exist already (see services/compounds). Used by the API,
+ * caller's transaction. The compound must exist already (see core/compounds). Used by the API,
  * the demo seeder and imports alike.
  */
 export async function insertRecord(content: RecordContent, options: NewRecordOptions): Promise<ConditionRecord> {
@@ -74,26 +74,6 @@ export async function insertRecord(content: RecordContent, options: NewRecordOpt
   await RecordContributor.create({ recordId: record.id, userId: authorId, role: 'author', viaRecordId: null }, { transaction });
   await addRevision(record.id, authorId, options.action ?? 'create', [], transaction, options.createdAt);
   return record;
-}
-
-/** A new record's state as loadRecordState would read it back: the snapshot of its first revision. */
-function initialState(record: ConditionRecord, content: RecordContent): RecordState {
-  return {
-    compoundId: record.compoundId,
-    technique: record.technique,
-    stationaryPhase: record.stationaryPhase,
-    stationaryPhaseOther: record.stationaryPhaseOther,
-    eluent: record.eluent,
-    spots: content.spots.map(({ role, rf, lane, spotDistanceMm, frontDistanceMm, label }) => ({ role, rf, lane, spotDistanceMm, frontDistanceMm, label })),
-    visualisations: content.visualisation.map(({ method, note }) => ({ method, note })),
-    outcome: record.outcome,
-    outcomeReason: record.outcomeReason,
-    column: columnOf(record),
-    notebookRef: record.notebookRef,
-    notes: record.notes,
-    status: 'active',
-    photoIds: [],
-  };
 }
 
 /**
@@ -112,7 +92,7 @@ export async function insertRecords(contents: readonly RecordContent[], options:
   await RecordRevision.bulkCreate(
     records.map((record, index) => ({
       recordId: record.id, number: 1, authorId, action: options.action ?? 'create', changes: [],
-      snapshot: initialState(record, contents[index]) as unknown as Record<string, unknown>,
+      snapshot: recordState(record, contents[index].spots, contents[index].visualisation, []) as unknown as Record<string, unknown>,
     })),
     { transaction },
   );

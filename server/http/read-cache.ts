@@ -4,7 +4,7 @@ import { LRUCache } from 'lru-cache';
 
 /**
  * Results of hot reads (records list and page, search, Scout) kept per process under the stamp they were
- * computed at (services/data-stamp.ts: the content stamp for these). An entry is used only while the stamp is
+ * computed at (server/db/data-stamp.ts: the content stamp for these). An entry is used only while the stamp is
  * unchanged, so any committed content write — by this process, another one or plain SQL — makes the next
  * read compute afresh. Concurrent misses
  * for one key share one computation. Failures are never kept.

@@ -1,4 +1,4 @@
-import type { CompoundClass } from './compound-classes';
+import type { CompoundClass } from './compound-class-types';
 
 const ACYL_EXCLUDES = ['C(=O)(OC)O', 'C(=O)(OC)N', 'C(=O)OC=O'];
 

@@ -1,4 +1,4 @@
-import type { CompoundClass } from './compound-classes';
+import type { CompoundClass } from './compound-class-types';
 
 const ANY_AROMATIC_ATOM = ['C', 'N', 'O', 'S'];
 

@@ -1,4 +1,4 @@
-import type { CompoundClass } from './compound-classes';
+import type { CompoundClass } from './compound-class-types';
 
 const HALOGEN_ON_CARBON = ['FC', 'ClC', 'BrC', 'IC'];
 

@@ -7,7 +7,8 @@ export type { Adsorbent, GreenerAlternative, Provenance, Solvent, SolventHazard,
 
 /**
  * Chromatography solvents with physical data, Snyder's ε° on silica and alumina (provenance on each
- * value: confirmed, from memory or estimate), adsorbed areas, hazards and greener alternatives.
+ * value: published source, from memory or estimate; see docs/references.md), adsorbed areas, hazards and greener
+ * alternatives.
  */
 export const solvents: readonly Solvent[] = [...hydrocarbonSolvents, ...chlorinatedAndEtherSolvents, ...polarSolvents];
 

@@ -16,11 +16,14 @@ export interface Stain {
   /** True for UV: needs a plate with fluorescent indicator and leaves the plate unchanged. */
   nonDestructive: boolean;
   preparationHazards: string;
-  /** "confirmed" per the team's reference sheet, otherwise "common practice". */
+  /**
+   * Where what it shows comes from. All common practice: the team's notes marked six rows as read in a published
+   * stain table but did not record which, so no published source is cited (docs/references.md).
+   */
   source: string;
 }
 
-const confirmed = (what: string) => `confirmed: ${what} (REFERENCE.md stain table)`;
+const stainTable = (what: string) => `common practice (standard TLC stain tables: ${what})`;
 const commonPractice = 'common practice';
 
 const oxidisable = ['alkene', 'alkyne', 'alcohol', 'diol', 'aldehyde', 'primary-amine', 'secondary-amine', 'sulfide', 'thiol', 'phenol'];
@@ -37,23 +40,23 @@ export const stains: readonly Stain[] = [
     needsHeat: false, nonDestructive: true, preparationHazards: 'UV light harms eyes and skin; use the lamp’s shield and UV-blocking glasses.', source: commonPractice },
   { key: 'kmno4', label: 'KMnO4', name: 'potassium permanganate (basic)', synonyms: ['KMnO4', 'permanganate', 'potassium permanganate', 'basic permanganate'],
     detects: oxidisable, selectivity: 'broad', hitRate: 'usually', shows: 'oxidisable groups: alkenes, alkynes, alcohols, aldehydes, amines, sulfides', appearance: 'yellow spots on purple',
-    needsHeat: false, nonDestructive: false, preparationHazards: 'Strong oxidiser; keep from organics and acids; stains skin.', source: confirmed('general, oxidisable groups') },
+    needsHeat: false, nonDestructive: false, preparationHazards: 'Strong oxidiser; keep from organics and acids; stains skin.', source: stainTable('general, oxidisable groups') },
   { key: 'ninhydrin', label: 'ninhydrin', name: 'ninhydrin', synonyms: ['ninhydrin', 'nin'],
     detects: ['primary-amine', 'secondary-amine', 'amino-acid', 'carbamate'], selectivity: 'specific', hitRate: 'usually', shows: 'primary and secondary amines, amino acids; Boc-amines after strong heating', appearance: 'pink to purple spots',
-    needsHeat: true, nonDestructive: false, preparationHazards: 'Harmful; stains skin purple; heat gun near flammable solvent vapour.', source: confirmed('primary and secondary amines, amino acids') },
+    needsHeat: true, nonDestructive: false, preparationHazards: 'Harmful; stains skin purple; heat gun near flammable solvent vapour.', source: stainTable('primary and secondary amines, amino acids') },
   { key: 'dnp', label: '2,4-DNP', name: '2,4-dinitrophenylhydrazine', synonyms: ['2,4-DNP', 'DNP', '2,4-dinitrophenylhydrazine', 'DNPH', "Brady's reagent"],
     detects: ['aldehyde', 'ketone'], selectivity: 'specific', hitRate: 'usually', shows: 'aldehydes and ketones', appearance: 'yellow to orange spots',
-    needsHeat: false, nonDestructive: false, preparationHazards: 'Dry 2,4-DNP is shock-sensitive and explosive; the stain contains strong acid.', source: confirmed('aldehydes and ketones') },
+    needsHeat: false, nonDestructive: false, preparationHazards: 'Dry 2,4-DNP is shock-sensitive and explosive; the stain contains strong acid.', source: stainTable('aldehydes and ketones') },
   { key: 'bromocresol-green', label: 'bromocresol green', name: 'bromocresol green', synonyms: ['bromocresol green', 'BCG', 'bromocresol'],
     detects: ['carboxylic-acid', 'amino-acid'], selectivity: 'specific', hitRate: 'usually', shows: 'acids with pKa below about 5', appearance: 'yellow spots on blue',
-    needsHeat: false, nonDestructive: false, preparationHazards: 'Ethanolic solution: flammable.', source: confirmed('carboxylic acids') },
+    needsHeat: false, nonDestructive: false, preparationHazards: 'Ethanolic solution: flammable.', source: stainTable('carboxylic acids') },
   { key: 'pma', label: 'PMA', name: 'phosphomolybdic acid', synonyms: ['PMA', 'phosphomolybdic acid', 'phosphomolybdic'],
     detects: ['alcohol', 'diol', 'alkene', 'phenol', 'aldehyde'], selectivity: 'general', hitRate: 'usually', shows: 'reducing compounds, lipids, steroids; most organics', appearance: 'dark blue-green spots on yellow-green',
-    needsHeat: true, nonDestructive: false, preparationHazards: 'Oxidiser in ethanol: flammable; heat gun near solvent vapour.', source: confirmed('reducing compounds, lipids, steroids') },
+    needsHeat: true, nonDestructive: false, preparationHazards: 'Oxidiser in ethanol: flammable; heat gun near solvent vapour.', source: stainTable('reducing compounds, lipids, steroids') },
   { key: 'iodine', label: 'iodine', name: 'iodine vapour', synonyms: ['iodine', 'I2', 'iodine vapour', 'iodine vapor', 'iodine chamber'],
     detects: ['alkene', 'alkyne', 'aromatic', 'sulfide', 'thiol', 'tertiary-amine', 'secondary-amine', 'primary-amine'], selectivity: 'general', hitRate: 'usually',
     shows: 'general; strongest for unsaturated and aromatic compounds', appearance: 'brown spots that fade',
-    needsHeat: false, nonDestructive: false, preparationHazards: 'Iodine vapour is corrosive and irritating; keep the chamber closed.', source: confirmed('general') },
+    needsHeat: false, nonDestructive: false, preparationHazards: 'Iodine vapour is corrosive and irritating; keep the chamber closed.', source: stainTable('general') },
   { key: 'cam', label: 'CAM', name: 'ceric ammonium molybdate (Hanessian’s stain)', synonyms: ['CAM', 'ceric ammonium molybdate', "Hanessian's stain", 'Hanessian', 'cerium molybdate'],
     detects: ['alcohol', 'diol', 'phenol', 'acetal', 'silyl-ether', 'epoxide'], selectivity: 'general', hitRate: 'usually', shows: 'near universal; strong for hydroxyl groups', appearance: 'dark blue spots on light blue',
     needsHeat: true, nonDestructive: false, preparationHazards: 'Contains concentrated sulfuric acid: corrosive; heat gun.', source: commonPractice },

@@ -2,8 +2,8 @@
 export type Adsorbent = 'silica' | 'alumina';
 
 /**
- * How far a value can be trusted: `confirmed` was read in a published or stored text,
- * `from-memory` is a recalled handbook value awaiting a confirmed source, `estimate` is computed
+ * How far a value can be trusted: `confirmed` was read in the published text its `source` names,
+ * `from-memory` is a recalled handbook value not yet checked against a published table, `estimate` is computed
  * from other values by a stated rule.
  */
 export type Provenance = 'confirmed' | 'from-memory' | 'estimate';
@@ -13,7 +13,7 @@ export interface SourcedValue {
   value: number;
   provenance: Provenance;
   source: string;
-  /** The span of published values when the catalogue uses their midpoint. */
+  /** The span of values (as recalled or published, per `source`) when the catalogue uses their midpoint. */
   range?: readonly [number, number];
 }
 

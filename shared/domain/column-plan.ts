@@ -43,7 +43,7 @@ export interface ColumnPlan {
 export const bedHeightCm = 15;
 export const packedSilicaGPerMl = 0.5;
 
-const common = 'common practice (heuristic)';
+const common = 'common practice';
 
 function gradientAdvice(rfTarget: number): ColumnPlan['gradient'] {
   if (rfTarget < 0.2) {
@@ -63,7 +63,8 @@ function loadAdvice(sampleMg: number, deltaRf: number | null): ColumnPlan['load'
 /**
  * Flash-column plan from a TLC result: diameter, eluent volume and fraction size from the table of
  * Still, Kahn & Mitra (J. Org. Chem. 1978, 43, 2923) at the load column for the spots' ΔRf; silica mass from
- * the bed height; column volumes CV = 1/Rf and ΔCV (REFERENCE.md); gradient and loading advice from common practice.
+ * the bed height; column volumes CV = 1/Rf and ΔCV (textbook definitions, common practice; see rf.ts); gradient and
+ * loading advice from common practice.
  */
 export function planColumn(input: ColumnPlanInput): ColumnPlan {
   const { sampleMg, rfTarget } = input;
@@ -103,8 +104,8 @@ export function planColumn(input: ColumnPlanInput): ColumnPlan {
       eluentMl: size.source,
       fractionMl: size.source,
       silicaG: `bed of ${bedHeightCm} cm (${stillSource}; from memory) × packed silica ${packedSilicaGPerMl} g/mL (from memory)`,
-      cvTarget: 'CV = 1/Rf (REFERENCE.md, confirmed)',
-      deltaCv: 'ΔCV = |1/Rf₁ − 1/Rf₂| (REFERENCE.md, confirmed)',
+      cvTarget: 'CV = 1/Rf (common practice)',
+      deltaCv: 'ΔCV = |1/Rf₁ − 1/Rf₂| (common practice)',
       loadColumn: `${stillSource}: load column ΔRf ≥ ${loadColumn === 'deltaRf02' ? '0.2' : '0.1'}`,
       gradient: common,
       load: common,

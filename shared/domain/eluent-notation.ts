@@ -1,7 +1,7 @@
 import { additiveByKey } from '../catalogue/additives';
 import { eluentNameIndex } from '../catalogue/lookup';
 import { requireSolvent } from '../catalogue/solvents';
-import type { Eluent, EluentComponent } from '../schemas/eluent';
+import type { Eluent, EluentComponent } from '../schemas/eluent-shape';
 import { formatNumber } from './format-number';
 import { toAtoms, type Atom } from './eluent-notation-atoms';
 import { NotationError } from './eluent-notation-read';

@@ -5,12 +5,13 @@ import { mixtureFractions, type MixturePart } from './mixture-fractions';
 export { mixtureFractions, moleFractionFromVolume, volumeFractionFromMole, type MixturePart } from './mixture-fractions';
 
 /**
- * Adsorbent activity α in Snyder's equation. From memory: α ≈ 0.6–0.7 for silica (REFERENCE.md); 0.6 is
- * used for both adsorbents because activity depends on water content and no confirmed value is at hand.
+ * Adsorbent activity α in Snyder's equation (L. R. Snyder, Principles of Adsorption Chromatography, 1968). From
+ * memory: α ≈ 0.6–0.7 for silica; 0.6 is used for both adsorbents because activity depends on water content and
+ * no published value has been checked.
  */
 export const defaultActivity: Record<Adsorbent, SourcedValue> = {
-  silica: { value: 0.6, provenance: 'from-memory', source: 'from memory: α ≈ 0.6–0.7 for silica (Snyder); 0.6 used' },
-  alumina: { value: 0.6, provenance: 'from-memory', source: 'from memory: α of about 0.6 for standard-activity alumina (Snyder)' },
+  silica: { value: 0.6, provenance: 'from-memory', source: 'Snyder 1968, from memory: α ≈ 0.6–0.7 for silica; 0.6 used' },
+  alumina: { value: 0.6, provenance: 'from-memory', source: 'Snyder 1968, from memory: α about 0.6 for standard-activity alumina' },
 };
 
 const ethylAcetateArea = 5.2;
@@ -34,7 +35,7 @@ export function adsorbedArea(solventKey: string): SourcedValue {
 }
 
 /**
- * Snyder's strength of a binary eluent (from memory, REFERENCE.md):
+ * Snyder's strength of a binary eluent (Snyder 1968, Principles of Adsorption Chromatography; equation from memory):
  * ε°_AB = ε°_A + log10(N_B·10^(α·n_b·(ε°_B − ε°_A)) + 1 − N_B) / (α·n_b),
  * with N_B the mole fraction of the strong solvent B, n_b its adsorbed area and α the adsorbent activity.
  */
@@ -64,7 +65,7 @@ export type MixtureStrength =
   | { ok: false; adsorbent: Adsorbent; missing: string[]; message: string };
 
 export const strengthEquation =
-  'Snyder: ε° = ε°_A + log10(Σ N_i·10^(α·n_b·(ε°_i − ε°_A))) / (α·n_b), A the weakest solvent, n_b the strongest solvent’s adsorbed area; for two solvents this is Snyder’s binary equation';
+  'Snyder 1968 (equation from memory): ε° = ε°_A + log10(Σ N_i·10^(α·n_b·(ε°_i − ε°_A))) / (α·n_b), A the weakest solvent, n_b the strongest solvent’s adsorbed area; for two solvents this is Snyder’s binary equation';
 
 /**
  * Solvent strength ε° of an eluent on silica or alumina. Two solvents: Snyder's binary equation exactly.

@@ -1,7 +1,8 @@
 /**
  * Rf, RM, retention factor and column volumes.
- * Definitions (confirmed, REFERENCE.md): Rf = spot distance / front distance; k = (1 − Rf)/Rf;
- * a compound elutes after 1 + k = 1/Rf column volumes; RM = log10((1 − Rf)/Rf) (Bate-Smith & Westall 1950,
+ * Definitions (textbook definitions, cited as common practice: no single published source is recorded for them;
+ * see docs/references.md): Rf = spot distance / front distance; k = (1 − Rf)/Rf; a compound elutes after
+ * 1 + k = 1/Rf column volumes. RM = log10((1 − Rf)/Rf) (Bate-Smith & Westall, Biochim. Biophys. Acta 1950;
  * attribution from memory).
  */
 
@@ -31,19 +32,19 @@ export function rmToRf(rm: number): number {
   return 1 / (1 + 10 ** rm);
 }
 
-/** Retention factor k = (1 − Rf)/Rf, dimensionless (REFERENCE.md, confirmed). */
+/** Retention factor k = (1 − Rf)/Rf, dimensionless (textbook definition; common practice). */
 export function retentionFactor(rf: number): number {
   assertRf(rf);
   return (1 - rf) / rf;
 }
 
-/** Column volumes to elution, CV = 1 + k = 1/Rf (REFERENCE.md, confirmed). */
+/** Column volumes to elution, CV = 1 + k = 1/Rf (textbook relation; common practice). */
 export function columnVolumes(rf: number): number {
   assertRf(rf);
   return 1 / rf;
 }
 
-/** ΔCV = |1/Rf₁ − 1/Rf₂|, column volumes between two bands (REFERENCE.md, confirmed). */
+/** ΔCV = |1/Rf₁ − 1/Rf₂|, column volumes between two bands (common practice). */
 export function deltaColumnVolumes(rfA: number, rfB: number): number {
   return Math.abs(columnVolumes(rfA) - columnVolumes(rfB));
 }
@@ -54,7 +55,7 @@ export type RfFromDistances =
 
 /**
  * Rf from distances measured on the plate, both in mm from the origin:
- * Rf = spot / front (REFERENCE.md, confirmed). Refuses a spot beyond the front and Rf outside (0, 1].
+ * Rf = spot / front (the definition of Rf; common practice). Refuses a spot beyond the front and Rf outside (0, 1].
  */
 export function rfFromDistances(spotMm: number, frontMm: number): RfFromDistances {
   if (!Number.isFinite(frontMm) || frontMm <= 0) {

@@ -3,7 +3,7 @@ import { formatParts } from './format-number';
 import { moleFractionFromVolume, partsForVolumeFraction, volumeFractionFromMole } from './mixture-fractions';
 import { fitSoczewinski, fractionForRf, predictRf, type SoczewinskiFit } from './soczewinski';
 
-/** Which fraction of the strong solvent the fit uses; the published form uses mole fractions (REFERENCE.md). */
+/** Which fraction of the strong solvent the fit uses; Soczewiński's form uses mole fractions (Soczewiński 1969). */
 export type FractionBasis = 'mole' | 'volume';
 
 /** One Rf measured in weak : strong = weakParts : strongParts by volume. */

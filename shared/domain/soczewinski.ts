@@ -31,7 +31,8 @@ const clampRf = (rf: number) => Math.min(Math.max(rf, rfClampRange[0]), rfClampR
 
 /**
  * Least-squares fit of RM = intercept + slope·log10(x) for one compound in one solvent pair, x the fraction of
- * the strong solvent (Soczewiński; linear form confirmed, REFERENCE.md). Needs two or more distinct fractions.
+ * the strong solvent (E. Soczewiński, Anal. Chem. 1969, 41, 179; journal details from memory). Needs two or more
+ * distinct fractions.
  */
 export function fitSoczewinski(points: readonly FractionRf[]): SoczewinskiFit {
   for (const { fraction, rf } of points) {

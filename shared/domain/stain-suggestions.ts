@@ -20,7 +20,7 @@ const readable = (classKey: string) => classKey.replace(/-/g, ' ');
  * Stains likely to show a compound with these class keys (see compound-classes.ts), best first.
  * Each matching class adds 3 for a specific stain, 2 for a broad one, 1 for a general one, halved for a stain
  * that shows only some members of a class (UV 365: fluorescent ones); non-destructive UV gets a bonus when it matches because it is looked at first; general stains stay listed as fallbacks.
- * What each stain shows: REFERENCE.md (six confirmed) and common practice, as each stain's `source` says.
+ * What each stain shows: common practice (standard TLC stain tables), as each stain's `source` says.
  */
 export function suggestStains(classKeys: readonly string[]): StainSuggestion[] {
   const classes = new Set(classKeys);

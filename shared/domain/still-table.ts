@@ -1,5 +1,8 @@
-/** Source of the flash-column sizing table (confirmed, REFERENCE.md). */
-export const stillSource = 'Still, Kahn & Mitra, J. Org. Chem. 1978, 43, 2923';
+/**
+ * Source of the flash-column sizing table: W. C. Still, M. Kahn, A. Mitra, "Rapid chromatographic technique for
+ * preparative separations with moderate resolution", J. Org. Chem. 1978, 43, 2923–2925, the sizing table.
+ */
+export const stillSource = 'Still, Kahn & Mitra, J. Org. Chem. 1978, 43, 2923, sizing table';
 
 export interface StillRow {
   /** Column diameter, mm. */

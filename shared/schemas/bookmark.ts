@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { recordListItemSchema } from './record-dto';
+import { recordCompoundSchema, recordListItemSchema } from './record-dto';
 
 const id = z.number().int().positive();
 const note = z.string().trim().max(1000).nullish().transform((value) => (value ? value : null));
@@ -24,13 +24,7 @@ export type BookmarkTarget = z.input<typeof bookmarkTargetSchema>;
 export const bookmarkUpdateSchema = z.object({ note });
 
 /** A bookmarked compound as the bookmarks page lists it. */
-export const bookmarkedCompoundSchema = z.object({
-  id: z.number().int(),
-  name: z.string().nullable(),
-  canonicalSmiles: z.string(),
-  formula: z.string(),
-  mw: z.number(),
-  classes: z.array(z.string()),
+export const bookmarkedCompoundSchema = recordCompoundSchema.extend({
   /** Active records of the compound. */
   recordCount: z.number().int(),
 });

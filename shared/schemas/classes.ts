@@ -63,3 +63,6 @@ export const classDetailSchema = z.object({
   records: z.array(recordListItemSchema),
 });
 export type ClassDetail = z.infer<typeof classDetailSchema>;
+
+/** Path of `GET /api/classes/:key`. */
+export const classKeyParamSchema = z.object({ key: z.string().trim().min(1).max(60) });

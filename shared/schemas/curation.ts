@@ -37,3 +37,12 @@ export const mergePreviewQuerySchema = z.object({
 
 export * from './curation-fields';
 export * from './curation-dto';
+
+/** Query of `GET /api/curation/merges`: one record's merges, newest first. */
+export const mergeHistoryQuerySchema = z.object({
+  recordId: z.coerce.number().int().positive().optional(),
+  limit: z.coerce.number().int().min(1).max(200).default(50),
+});
+
+/** Path of `POST /api/curation/unmerge/:mergeId`. */
+export const mergeIdParamSchema = z.object({ mergeId: z.coerce.number().int().positive() });

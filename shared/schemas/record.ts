@@ -117,3 +117,6 @@ export const recordListQuerySchema = paginationQuerySchema.extend({
 });
 export type RecordListQuery = z.input<typeof recordListQuerySchema>;
 export type RecordListQueryParsed = z.output<typeof recordListQuerySchema>;
+
+/** Query of `GET /api/photos/:id`: the photo as taken or its thumbnail. */
+export const photoSizeQuerySchema = z.object({ size: z.enum(['full', 'thumb']).default('full') });

@@ -1,5 +1,5 @@
 import { spotY, spreadLabels, wrapLabel, type StripGeometry } from './plate-strip-geometry';
-import type { PlateLane, PlateSpot } from './plate-strip';
+import type { PlateLane, PlateSpot } from './plate-strip-types';
 
 const spotClass: Record<PlateSpot['role'], string> = {
   target: 'fill-spot stroke-spot-dark',

@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import type { ErrorDetail } from '../../shared/schemas/common';
 
 /** An API failure carrying the server's `{ error: { code, message, details } }`. */
 export class ApiRequestError extends Error {
@@ -6,7 +7,7 @@ export class ApiRequestError extends Error {
     public readonly status: number,
     public readonly code: string,
     message: string,
-    public readonly details?: unknown,
+    public readonly details: ErrorDetail[] = [],
   ) {
     super(message);
   }
@@ -57,7 +58,7 @@ export async function api<T = unknown>(path: string, opts: Options = {}, schema?
   const body = text ? JSON.parse(text) : undefined;
   if (!res.ok) {
     const err = body?.error ?? {};
-    throw new ApiRequestError(res.status, err.code ?? 'http_' + res.status, err.message ?? res.statusText, err.details);
+    throw new ApiRequestError(res.status, err.code ?? 'http_' + res.status, err.message ?? res.statusText, Array.isArray(err.details) ? err.details : []);
   }
   return schema ? schema.parse(body) : (body as T);
 }

@@ -1,7 +1,7 @@
 /**
  * `npm run eval:scout` — measured accuracy of Scout on the open TLC data (H. Xu, J. Lin, D. Zhang, F. Mo et al.,
  * Chem 2022, arXiv 2202.05962; Apache-2.0; tests/fixtures/open-tlc). Default: leave one compound out at a time
- * from tlc-rf.csv — the model is rebuilt from the other compounds only (the engine the API uses, server/scout)
+ * from tlc-rf.csv — the model is rebuilt from the other compounds only (the engine the API uses, server/features/scout/engine)
  * and predicts each of the held-out compound's Rf values. `--train FILE --test FILE`: learn from one file and
  * predict every compound of the other (compounds present in both are left out of the training set).
  * Prints MAE, the structure-blind baseline (mean Rf per eluent, from the same training compounds) and the hit

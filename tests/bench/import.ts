@@ -71,7 +71,7 @@ async function main() {
     const res = await call('/api/imports?wait=0', { method: 'POST', headers: { 'x-csrf-token': csrfToken }, body: form });
     const created = (await res.json()) as { id: number; error?: unknown };
     if (!created.id) throw new Error(`upload refused: ${JSON.stringify(created)}`);
-    let body: Record<string, unknown> = {};
+    let body: Record<string, unknown>;
     do {
       await new Promise((done) => setTimeout(done, 200));
       body = (await (await call(`/api/imports/${created.id}`)).json()) as Record<string, unknown>;

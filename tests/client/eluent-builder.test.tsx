@@ -20,7 +20,7 @@ describe('EluentBuilder', () => {
     const rows = screen.getAllByRole('row').slice(1);
     expect(rows[0]).toHaveTextContent('20 %');
     expect(rows[1]).toHaveTextContent('80 %');
-    // 1 part in 5 = 20 % v/v; EtOAc has the larger Snyder ε° on silica (0.48 vs about 0.01, REFERENCE.md).
+    // 1 part in 5 = 20 % v/v; EtOAc has the larger Snyder ε° on silica (0.48, Sadek p. 74, vs about 0.01 from memory).
     expect(summary()).toContain('EtOAc : hexanes 1 : 4');
     expect(summary()).toMatch(/20 %\s*EtOAc \(strong solvent/);
   });
@@ -56,7 +56,7 @@ describe('EluentBuilder', () => {
 });
 
 describe('SpotsTable', () => {
-  it('when distances are measured, then Rf = spot ÷ front is previewed (REFERENCE.md), and a spot beyond the front is explained', async () => {
+  it('when distances are measured, then Rf = spot ÷ front is previewed (the definition of Rf, common practice), and a spot beyond the front is explained', async () => {
     render(<WithForm><SpotsTable /></WithForm>);
     await userEvent.click(screen.getByLabelText('measure distances (mm)'));
     await userEvent.type(screen.getByLabelText('Spot 1 distance from origin (mm)'), '14');

@@ -58,7 +58,7 @@ describe('mapServerErrors', () => {
   });
 
   it('when the chemistry engine refuses the structure, then its message lands on the structure field', () => {
-    const error = new ApiRequestError(400, 'smiles_syntax', 'Unexpected ")" at position 4.', { position: 4 });
+    const error = new ApiRequestError(400, 'smiles_syntax', 'Unexpected ")" at position 4.', [{ path: '', message: 'Unexpected ")" at position 4.', position: 4 }]);
     expect(mapServerErrors(error)).toEqual({ fields: [{ path: 'structure', message: 'Unexpected ")" at position 4.' }], formMessage: null });
   });
 

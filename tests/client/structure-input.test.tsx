@@ -72,7 +72,7 @@ describe('StructureInput', () => {
   it('when the server refuses a SMILES, then it shows the server message and marks the place it names', async () => {
     const server = parseServer(() => ({
       status: 400,
-      body: { error: { code: 'smiles_unclosed_ring', message: 'Ring bond 1 is opened but never closed.', details: { position: 2, token: '1' } } },
+      body: { error: { code: 'smiles_unclosed_ring', message: 'Ring bond 1 is opened but never closed.', details: [{ path: '', message: 'Ring bond 1 is opened but never closed.', position: 2, token: '1' }] } },
     }));
     renderWithProviders(<Harness />);
     await userEvent.type(screen.getByLabelText('SMILES or molfile'), 'C1CC');

@@ -33,7 +33,7 @@ describe('POST /api/bookmarks', () => {
   it('when the same record is bookmarked again, then 409 naming the existing bookmark', async () => {
     const res = await post(viewer, { recordId: record.id });
     expect(res.status).toBe(409);
-    expect(res.body.error.details.bookmarkId).toEqual(expect.any(Number));
+    expect(res.body.error.details[0].bookmarkId).toEqual(expect.any(Number));
   });
 
   it('when a compound is bookmarked, then it carries the compound and its active record count', async () => {

@@ -28,7 +28,8 @@ function freePort(): Promise<number> {
   });
 }
 
-interface Answer { status: number; headers: Record<string, string | string[] | undefined>; body: any }
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON answers of several routes, read field by field
+interface Answer { status: number; headers: Record<string, string | string[] | undefined>; body: Record<string, any> }
 
 /** One request on a fresh connection (no keep-alive), as a browser behind the TLS proxy sends it. */
 function send(method: string, path: string, headers: Record<string, string> = {}, body?: unknown): Promise<Answer> {

@@ -45,8 +45,7 @@ describe('GET /api/curation/duplicates', () => {
 
   it('when two records of one compound share phase and solvents with ratios within 5 % and Rf within 0.05, then they form one group that says why', async () => {
     const group = groupWith(await groups(), near[0]);
-    expect(group).toBeDefined();
-    expect(group!.kind).toBe('same-conditions');
+    expect(group?.kind).toBe('same-conditions');
     expect(group!.recordIds).toEqual(near);
     expect(group!.pairs[0].rfDifference).toBeCloseTo(0.03, 6);
     expect(group!.pairs[0].fractions[0].relative).toBeCloseTo(0.03, 3); // (0.2062 − 0.2) / 0.2062

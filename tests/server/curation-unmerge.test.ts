@@ -60,7 +60,7 @@ describe('POST /api/curation/unmerge/:mergeId', () => {
     const second = await merge(t, [s]);
     const refused = await unmerge(first);
     expect(refused.status).toBe(409);
-    expect(refused.body.error.details).toMatchObject({ laterMergeId: second, mergedIntoId: t });
+    expect(refused.body.error.details[0]).toMatchObject({ laterMergeId: second, mergedIntoId: t });
     expect((await unmerge(second)).status).toBe(200);
     expect((await unmerge(first)).status).toBe(200);
     expect((await Promise.all([a, s, t].map(getRecord))).map((item) => item.status)).toEqual(['active', 'active', 'active']);
@@ -74,7 +74,7 @@ describe('POST /api/curation/unmerge/:mergeId', () => {
     const before = await dumpAffected([survivor]);
     const res = await unmerge(mergeId);
     expect(res.status).toBe(409);
-    expect(res.body.error.details.changedRecordIds).toEqual([survivor]);
+    expect(res.body.error.details[0].changedRecordIds).toEqual([survivor]);
     expect(await dumpAffected([survivor])).toEqual(before);
   });
 

@@ -46,7 +46,7 @@ describe('the demo plan (invented records over real compounds)', () => {
     }
   });
 
-  it('when a compound has several ratios of one pair on one phase, then more strong solvent never lowers the target Rf (Soczewiński: RM falls as log x rises, REFERENCE.md)', () => {
+  it('when a compound has several ratios of one pair on one phase, then more strong solvent never lowers the target Rf (Soczewiński 1969: RM falls as log x rises)', () => {
     const series = new Map<string, { percent: number; rf: number }[]>();
     for (const item of plan.filter((entry) => entry.content.technique === 'tlc' && entry.content.outcome !== 'failed' && entry.content.eluent.mode === 'isocratic')) {
       const key = `${item.compound}|${item.content.stationaryPhase}|${item.content.eluent.components.map((part) => part.solvent).sort().join('/')}|${item.content.eluent.additives.length}`;

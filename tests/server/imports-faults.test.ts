@@ -45,7 +45,7 @@ describe('when PostgreSQL stops in the middle of an import', () => {
       stopped = true;
       stoppedIn = id;
     };
-    let importId = 0;
+    let importId: number;
     importEvents.on('writing', stopInThirdBatch);
     try {
       const res = await upload(curator, historyFile(), { query: 'wait=0', name: 'long-history.csv' });

@@ -42,7 +42,7 @@ describe('POST /api/auth/invitations', () => {
     const { admin } = await invite(email);
     const again = await admin.post('/api/auth/invitations').set('X-CSRF-Token', admin.csrf).send({ email: email.toUpperCase(), role: 'viewer' });
     expect(again.status).toBe(409);
-    expect(again.body.error.details.invitationId).toEqual(expect.any(Number));
+    expect(again.body.error.details[0].invitationId).toEqual(expect.any(Number));
   });
 
   it('when a curator tries to invite, then 403', async () => {

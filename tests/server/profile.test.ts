@@ -29,7 +29,7 @@ describe('POST /api/auth/me/password', () => {
     const here = await agentFor(app, 'member');
     const elsewhere = await agentFor(app);
     await elsewhere.post('/api/auth/login').set('X-CSRF-Token', elsewhere.csrf).send({ email: here.user!.email, password: TEST_PASSWORD });
-    expect((await elsewhere.get('/api/auth/me')).body.user).not.toBeNull();
+    expect((await elsewhere.get('/api/auth/me')).body.user?.email).toBe(here.user!.email);
 
     const res = await here.post('/api/auth/me/password').set('X-CSRF-Token', here.csrf).send({ currentPassword: TEST_PASSWORD, newPassword: NEW_PASSWORD });
     expect(res.status).toBe(204);

@@ -27,7 +27,7 @@ describe('POST /api/records', () => {
     expect(record.eluent.components).toEqual([{ solvent: 'ethyl-acetate', parts: 1 }, { solvent: 'hexanes', parts: 4 }]);
     expect(record.stationaryPhase).toBe('silica-gel');
     expect(record.visualisations.map((item) => item.method)).toEqual(['uv-254', 'kmno4']);
-    // 1 part EtOAc in 5 parts = 20 % v/v; EtOAc is the stronger solvent on silica (Snyder ε° 0.48 vs ~0.01, REFERENCE.md).
+    // 1 part EtOAc in 5 parts = 20 % v/v; EtOAc is the stronger solvent on silica (Snyder ε° 0.48, Sadek p. 74, vs ~0.01 from memory).
     expect(record.eluentSummary.strongSolvent).toBe('ethyl-acetate');
     expect(record.eluentSummary.strongPercent).toBeCloseTo(20, 10);
     expect(record.targetRf).toBe(0.28);
@@ -42,7 +42,7 @@ describe('POST /api/records', () => {
     expect(first.status).toBe(201);
     expect(second.status).toBe(201);
     expect(second.body.compound.id).toBe(first.body.compound.id);
-    // Benzyl alcohol, C7H8O (handbook formula; MW 108.14 g/mol from IUPAC atomic weights, REFERENCE.md).
+    // Benzyl alcohol, C7H8O (handbook formula; MW 108.14 g/mol from IUPAC CIAAW conventional atomic weights).
     expect(first.body.compound.formula).toBe('C7H8O');
     expect(first.body.compound.mw).toBeCloseTo(108.14, 1);
   });
@@ -107,7 +107,7 @@ describe('POST /api/records', () => {
     expect(res.body.eluentSummary.notation).toBe('DCM : MeOH 95 : 5 + 1% Et3N');
   });
 
-  it('when the spot and front distances are given, then Rf = spot / front (REFERENCE.md)', async () => {
+  it('when the spot and front distances are given, then Rf = spot / front (the definition of Rf, common practice)', async () => {
     const res = await postRecord(member, { spots: [{ role: 'target', spotDistanceMm: 14, frontDistanceMm: 50 }] });
     expect(res.status).toBe(201);
     expect(res.body.spots[0]).toMatchObject({ rf: 0.28, spotDistanceMm: 14, frontDistanceMm: 50 });

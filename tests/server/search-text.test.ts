@@ -54,6 +54,7 @@ describe('GET /api/search (text)', () => {
     const hits = recordHits(await searchFor(viewer, { q: `zephyranoate ${word}` }));
     const relevance = hits.map((hit) => hit.relevance as number);
     expect(hits[0].recordId).toBe(ester.id);
+    expect(relevance.length).toBeGreaterThan(0);
     expect(relevance.every((value) => value > 0 && value <= 1)).toBe(true);
     expect(relevance).toEqual([...relevance].sort((a, b) => b - a));
   });

@@ -13,7 +13,7 @@ afterAll(close);
 
 const post = (path: string, body: object) => viewer.post(path).set('X-CSRF-Token', viewer.csrf).send(body);
 
-/** Still, Kahn & Mitra, J. Org. Chem. 1978, 43, 2923 (REFERENCE.md, confirmed): diameter, eluent, load ΔRf ≥ 0.2, load ΔRf ≥ 0.1, fraction. */
+/** Still, Kahn & Mitra, J. Org. Chem. 1978, 43, 2923, sizing table: diameter, eluent, load ΔRf ≥ 0.2, load ΔRf ≥ 0.1, fraction. */
 const stillRows = [
   [10, 100, 100, 40, 5],
   [20, 200, 400, 160, 10],
@@ -38,7 +38,7 @@ describe('POST /api/tools/column-plan', () => {
     expect(plan.loadColumn).toBe('deltaRf01');
   });
 
-  it('when Rf values are given, then CV = 1/Rf and ΔCV = |1/Rf₁ − 1/Rf₂| (REFERENCE.md, confirmed), and a pressurised-glass caution is attached', async () => {
+  it('when Rf values are given, then CV = 1/Rf and ΔCV = |1/Rf₁ − 1/Rf₂| (textbook definitions, common practice), and a pressurised-glass caution is attached', async () => {
     const plan = columnPlanResultSchema.parse((await post('/api/tools/column-plan', { sampleMg: 250, rfTarget: 0.25, rfImpurity: 0.5 })).body);
     expect(plan.cvTarget).toBeCloseTo(4, 12);
     expect(plan.deltaCv).toBeCloseTo(2, 12);

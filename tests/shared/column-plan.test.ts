@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { planColumn, stillTable } from '../../shared/domain/column-plan';
 
-// Still, Kahn & Mitra, J. Org. Chem. 1978, 43, 2923 — sizing table (confirmed, REFERENCE.md)
+// Still, Kahn & Mitra, "Rapid chromatographic technique for preparative separations with moderate resolution",
+// J. Org. Chem. 1978, 43, 2923 — the sizing table
 const published = [
   { diameterMm: 10, eluentMl: 100, loadAt02: 100, loadAt01: 40, fractionMl: 5 },
   { diameterMm: 20, eluentMl: 200, loadAt02: 400, loadAt01: 160, fractionMl: 10 },
@@ -80,7 +81,7 @@ describe('column plan after Still, Kahn & Mitra (J. Org. Chem. 1978, 43, 2923)',
     expect(good.gradient.mode).toBe('isocratic');
   });
 
-  it('reports column volumes CV = 1/Rf and ΔCV (REFERENCE.md)', () => {
+  it('reports column volumes CV = 1/Rf and ΔCV (textbook definitions, common practice)', () => {
     const plan = planColumn({ sampleMg: 500, rfTarget: 0.25, rfImpurity: 0.5 });
     expect(plan.cvTarget).toBeCloseTo(4, 12);
     expect(plan.deltaCv).toBeCloseTo(2, 12);

@@ -39,13 +39,23 @@ describe('volume fractions to mole fractions (density and molar mass from the ca
   });
 });
 
-describe('Snyder solvent strength of mixtures (equation from memory, REFERENCE.md)', () => {
+describe('Snyder solvent strength of mixtures (Snyder 1968; equation from memory)', () => {
   it.each(['silica', 'alumina'] as const)('gives each pure solvent exactly its catalogue ε° on %s', (adsorbent) => {
     const withValues = solvents.filter((solvent) => solvent.strength[adsorbent]);
     expect(withValues.length).toBeGreaterThan(12);
     for (const solvent of withValues) {
       expect(epsilon([{ solvent: solvent.key, parts: 1 }], adsorbent), solvent.key).toBeCloseTo(solvent.strength[adsorbent]?.value as number, 12);
     }
+  });
+
+  it.each([
+    // Published values: silica from Sadek, Illustrated Pocket Dictionary of Chromatography, p. 74; alumina from
+    // Snyder's eluotropic series (Snyder 1968).
+    ['ethyl-acetate', 'silica', 0.48], ['diethyl-ether', 'silica', 0.43],
+    ['ethyl-acetate', 'alumina', 0.58], ['diethyl-ether', 'alumina', 0.38],
+    ['toluene', 'alumina', 0.29], ['pentane', 'alumina', 0],
+  ] as const)('gives pure %s on %s its published ε° %s', (solvent, adsorbent, published) => {
+    expect(epsilon([{ solvent, parts: 1 }], adsorbent)).toBeCloseTo(published, 9);
   });
 
   it('gives either pure end of a pair its catalogue ε°', () => {

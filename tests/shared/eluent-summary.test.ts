@@ -4,12 +4,12 @@ import { eluentSummary, strongPercentOf, strongSolventOf } from '../../shared/do
 const pair = (a: string, pa: number, b: string, pb: number) => [{ solvent: a, parts: pa }, { solvent: b, parts: pb }];
 
 describe('eluent summary', () => {
-  it('when EtOAc and hexanes are mixed 1 : 4 on silica, then EtOAc is the strong solvent at 20 % v/v (ε° on silica 0.48 confirmed vs 0.01 from memory, REFERENCE.md)', () => {
+  it('when EtOAc and hexanes are mixed 1 : 4 on silica, then EtOAc is the strong solvent at 20 % v/v (ε° on silica 0.48, Sadek p. 74, vs 0.01 from memory)', () => {
     expect(strongSolventOf(pair('hexanes', 4, 'ethyl-acetate', 1), 'silica-gel')).toBe('ethyl-acetate');
     expect(strongPercentOf(pair('ethyl-acetate', 1, 'hexanes', 4), 'silica-gel')).toBeCloseTo(20, 10);
   });
 
-  it('when MeOH is added to DCM, then MeOH is the strong solvent whichever order the solvents are written in (ε° on silica about 0.7 vs 0.3, REFERENCE.md values from memory)', () => {
+  it('when MeOH is added to DCM, then MeOH is the strong solvent whichever order the solvents are written in (Snyder ε° on silica about 0.7 vs 0.3, from memory)', () => {
     expect(strongSolventOf(pair('methanol', 1, 'dichloromethane', 9))).toBe('methanol');
     expect(strongSolventOf(pair('dichloromethane', 9, 'methanol', 1))).toBe('methanol');
   });

@@ -8,7 +8,7 @@ import {
   rmToRf,
 } from '../../shared/domain/rf';
 
-describe('Rf, RM and column volumes (definitions confirmed in REFERENCE.md)', () => {
+describe('Rf, RM and column volumes (textbook definitions, common practice; RM: Bate-Smith & Westall 1950)', () => {
   it('gives RM = 0 at Rf 0.5 and RM = log10(9) at Rf 0.1', () => {
     expect(rfToRm(0.5)).toBeCloseTo(0, 12);
     expect(rfToRm(0.1)).toBeCloseTo(Math.log10(9), 12);

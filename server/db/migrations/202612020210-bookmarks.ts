@@ -3,7 +3,7 @@ import type { Migration } from '../migrator';
 /**
  * Bookmarks: a user's favourite record or compound (exactly one of the two), with an optional note.
  * One bookmark per user and record, and per user and compound. A merge moves record bookmarks to the
- * survivor (uniting a user's two into one) and an unmerge moves them back (see services/curation-*).
+ * survivor (uniting a user's two into one) and an unmerge moves them back (see features/curation).
  */
 export const up: Migration = async ({ context: qi }) => {
   await qi.sequelize.query(`

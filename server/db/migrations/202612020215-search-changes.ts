@@ -1,7 +1,7 @@
 import type { Migration } from '../migrator';
 
 /**
- * The change feed of the search indexes every server process holds in memory (server/services/search).
+ * The change feed of the search indexes every server process holds in memory (server/features/search).
  *
  * Triggers on `compounds` and `condition_records` append one row to `search_changes` per inserted or
  * changed row (only the columns search reads) and send `NOTIFY rfolio_search, '<kind>:<id>'`, so every

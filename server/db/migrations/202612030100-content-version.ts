@@ -5,7 +5,7 @@ import type { Migration } from '../migrator';
  * A version number of the group's content, kept by the database itself: `data_versions.version` (row
  * `content`) goes up by one in every transaction that changes a content table, at its commit, through
  * triggers — so the API, imports, curation, seeders and raw SQL are all covered. Answers computed from
- * content (records, search, Scout) are reused for as long as it stays the same (services/data-stamp.ts).
+ * content (records, search, Scout) are reused for as long as it stays the same (db/data-stamp.ts).
  *
  * Content is every table except those no shared answer reads: sign-in sessions, throttle counters,
  * bookmarks (each user's own, never in a shared answer), invitations, password resets, the audit log,

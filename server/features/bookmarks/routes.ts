@@ -3,7 +3,6 @@ import { allow, currentUser } from '../../http/middleware/access';
 import { handle } from '../../http/middleware/validate';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { bookmarkInputSchema, bookmarkTargetSchema, bookmarkUpdateSchema } from '../../../shared/schemas/bookmark';
-import { ValidationError } from '../../http/errors';
 import { addBookmark, listBookmarks, removeBookmark, removeBookmarkOf, updateBookmarkNote } from './service';
 
 /** A user's own bookmarks of records and compounds; viewers may bookmark too. */
@@ -26,13 +25,8 @@ bookmarksRouter.delete('/:id', allow('viewer'), handle({ params: idParamSchema }
   res.status(204).end();
 }));
 
-/** Removes the bookmark of `?recordId=` or `?compoundId=` (also accepted in the body), for toggles that know only the target. */
-bookmarksRouter.delete('/', allow('viewer'), handle({}, async (_input, req, res) => {
-  const target = bookmarkTargetSchema.safeParse({ ...(req.body ?? {}), ...req.query });
-  if (!target.success) {
-    const details = target.error.issues.map((issue) => ({ path: ['query', ...issue.path.map(String)].join('.'), message: issue.message }));
-    throw new ValidationError(`${details[0].path}: ${details[0].message}`, details);
-  }
-  await removeBookmarkOf(currentUser(req).id, target.data);
+/** Removes the bookmark of `?recordId=` or `?compoundId=`, for toggles that know only the target. */
+bookmarksRouter.delete('/', allow('viewer'), handle({ query: bookmarkTargetSchema }, async ({ query }, req, res) => {
+  await removeBookmarkOf(currentUser(req).id, query);
   res.status(204).end();
 }));

@@ -1,8 +1,13 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import { allow, currentUser } from '../../http/middleware/access';
 import { handle } from '../../http/middleware/validate';
-import { dismissInputSchema, mergeInputSchema, mergePreviewQuerySchema } from '../../../shared/schemas/curation';
+import {
+  dismissInputSchema,
+  mergeHistoryQuerySchema,
+  mergeIdParamSchema,
+  mergeInputSchema,
+  mergePreviewQuerySchema,
+} from '../../../shared/schemas/curation';
 import { dismissGroup, findDuplicateGroups } from './duplicates';
 import { mergePreview } from './preview';
 import { mergeRecords } from './merge';
@@ -28,15 +33,10 @@ curationRouter.post('/merge', allow('curator'), handle({ body: mergeInputSchema 
   res.status(201).json(await mergeRecords(body, currentUser(req).id));
 }));
 
-const historyQuerySchema = z.object({
-  recordId: z.coerce.number().int().positive().optional(),
-  limit: z.coerce.number().int().min(1).max(200).default(50),
-});
-
-curationRouter.get('/merges', allow('curator'), handle({ query: historyQuerySchema }, async ({ query }, _req, res) => {
+curationRouter.get('/merges', allow('curator'), handle({ query: mergeHistoryQuerySchema }, async ({ query }, _req, res) => {
   res.set('Cache-Control', 'no-store').json({ items: await mergeHistory(query) });
 }));
 
-curationRouter.post('/unmerge/:mergeId', allow('curator'), handle({ params: z.object({ mergeId: z.coerce.number().int().positive() }) }, async ({ params }, req, res) => {
+curationRouter.post('/unmerge/:mergeId', allow('curator'), handle({ params: mergeIdParamSchema }, async ({ params }, req, res) => {
   res.json(await unmergeRecords(params.mergeId, currentUser(req).id));
 }));

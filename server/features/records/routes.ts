@@ -28,7 +28,7 @@ async function recordResponse(id: number, user: Parameters<typeof canEditRecord>
 /** Records as their page reads them, at a content stamp (the page's answer differs only in `canEdit`). */
 const fullRecords = new StampedCache<Awaited<ReturnType<typeof loadFullRecord>>>({ max: 5_000 });
 
-/** The same list for everyone who may read it: kept per content stamp (services/data-stamp.ts), so never stale after a content write. */
+/** The same list for everyone who may read it: kept per content stamp (db/data-stamp.ts), so never stale after a content write. */
 recordsRouter.get('/', allow('viewer'), handle({ query: recordListQuerySchema }, async ({ query }, req, res) => {
   const stamp = await requestContentStamp(req);
   sendJsonBody(res, await responseCache.get(`records:${JSON.stringify(query)}`, stamp, async () => {

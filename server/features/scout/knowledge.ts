@@ -80,7 +80,7 @@ async function refresh(stamp: string): Promise<ScoutModel> {
 }
 
 /**
- * The Scout model of the records as of the (content) stamp `stamp` (services/data-stamp.ts), cached in this process.
+ * The Scout model of the records as of the (content) stamp `stamp` (db/data-stamp.ts), cached in this process.
  * While the stamp is unchanged (no content committed since) the model is used as is; after a change a cheap
  * signature query (counts and latest change times) decides whether to reload. So every process follows every
  * committed write on its next Scout, without messages between processes.

@@ -10,7 +10,7 @@ export const scoutRouter = Router();
 
 /**
  * Starting conditions for a structure from the recorded neighbours, with the evidence for every number. The
- * answer is the same for every reader, so it is kept per content stamp (services/data-stamp.ts): never stale after a content write.
+ * answer is the same for every reader, so it is kept per content stamp (db/data-stamp.ts): never stale after a content write.
  */
 scoutRouter.post('/', allow('viewer'), handle({ body: scoutInputSchema }, async ({ body }, req, res) => {
   const stamp = await requestContentStamp(req);

@@ -42,7 +42,7 @@ function readStructure(text: string): ReadStructure {
 /**
  * Scout for a structure text: the chemistry engine parses it (its StructureError gives 400/413/422 with the
  * reason), the stored fingerprint is used when the compound is already known, and the engine answers from the
- * model of the active records as of `stamp` (services/data-stamp.ts; the current one when not given).
+ * model of the active records as of `stamp` (db/data-stamp.ts; the current one when not given).
  */
 export async function runScout(input: ScoutInputParsed, stamp?: string): Promise<ScoutResult> {
   const structure = readStructure(input.structure);

@@ -11,9 +11,9 @@ import { responseCache } from '../../http/read-cache';
 
 export const searchRouter = Router();
 
-/** Text, similarity and substructure search over active records, with the shared filters; see services/search. */
+/** Text, similarity and substructure search over active records, with the shared filters; see features/search. */
 /**
- * Answers are the same for every reader, so they are kept per content stamp (services/data-stamp.ts): any content write
+ * Answers are the same for every reader, so they are kept per content stamp (db/data-stamp.ts): any content write
  * makes the next search compute afresh. `tookMs` (last in the answer) is this request's time on the server.
  */
 searchRouter.get('/', allow('viewer'), handle({ query: searchQuerySchema }, async ({ query }, req, res) => {

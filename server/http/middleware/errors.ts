@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { MulterError } from 'multer';
+import { errorDetailsOf } from '../../../shared/schemas/common';
 import { AppError, DatabaseUnavailableError, NotFoundError } from '../errors';
 import { logger } from '../logger';
 
@@ -42,7 +43,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     appErr = new AppError(500, 'internal', 'Something went wrong on our side; it has been logged.');
   }
   if (appErr.status >= 500 && appErr.status !== 503) logger.error({ err }, appErr.message);
-  res.status(appErr.status).json({ error: { code: appErr.code, message: appErr.message, details: appErr.details } });
+  res.status(appErr.status).json({ error: { code: appErr.code, message: appErr.message, details: errorDetailsOf(appErr.message, appErr.details) } });
 };
 
 export const apiNotFound: RequestHandler = (req, _res, next) => next(new NotFoundError(`API route ${req.method} ${req.path}`));

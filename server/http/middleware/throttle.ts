@@ -20,7 +20,7 @@ function tooMany(what: string): RequestHandler {
     const resetTime = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
     const minutes = resetTime ? Math.max(1, Math.ceil((resetTime.getTime() - Date.now()) / 60_000)) : env().SIGNIN_WINDOW_MINUTES;
     res.status(429).json({
-      error: { code: 'too_many_attempts', message: `Too many failed ${what}. Try again in ${minutes} min.`, details: { retryAfterMinutes: minutes } },
+      error: { code: 'too_many_attempts', message: `Too many failed ${what}. Try again in ${minutes} min.`, details: [{ path: '', message: 'Wait before trying again.', retryAfterMinutes: minutes }] },
     });
   };
 }

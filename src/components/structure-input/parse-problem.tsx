@@ -36,7 +36,7 @@ export function ParseProblem({ error, text }: { error: unknown; text: string }) 
       </div>
     );
   }
-  const place = (error.details ?? {}) as StructureProblemPlace;
+  const place = (error.details[0] ?? {}) as StructureProblemPlace;
   const molfile = looksLikeMolfile(text);
   const line = molfile && place.line ? text.split(/\r?\n/)[place.line - 1] : undefined;
   return (

@@ -40,7 +40,7 @@ describe('descriptors against RDKit MinimalLib (independent implementation)', ()
   });
 });
 
-/** IUPAC/CIAAW conventional atomic weights (as listed in ../shared/REFERENCE.md). */
+/** IUPAC CIAAW standard atomic weights, conventional values (ciaaw.org; see docs/references.md). */
 const CIAAW: Record<string, number> = { H: 1.008, C: 12.011, N: 14.007, O: 15.999, F: 18.998, P: 30.974, S: 32.06, Cl: 35.45, Br: 79.904, I: 126.9 };
 
 function weightByHand(formula: string): number {

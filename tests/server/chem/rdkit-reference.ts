@@ -5,14 +5,19 @@ import initRDKitModule from '@rdkit/rdkit';
  * formula (counted from the atom table of get_json), descriptors, Morgan fingerprints.
  */
 
-interface RdkitMol {
+export interface RdkitMol {
   get_json(): string;
   get_descriptors(): string;
   get_morgan_fp(details: string): string;
+  /** JSON: `{"atoms":[…],"bonds":[…]}` for the first match, `{}` for none. */
+  get_substruct_match(query: RdkitMol): string;
+  /** JSON: an array of `{"atoms":[…],"bonds":[…]}`, or `{}` for none. */
+  get_substruct_matches(query: RdkitMol): string;
   delete(): void;
 }
-interface RdkitModule {
+export interface RdkitModule {
   get_mol(input: string): RdkitMol | null;
+  get_qmol(smarts: string): RdkitMol | null;
 }
 
 const SYMBOLS: Record<number, string> = {
@@ -26,7 +31,7 @@ export function rdkit(): Promise<RdkitModule> {
   return module;
 }
 
-async function withMol<T>(smiles: string, read: (mol: RdkitMol) => T): Promise<T> {
+export async function withMol<T>(smiles: string, read: (mol: RdkitMol) => T): Promise<T> {
   const mol = (await rdkit()).get_mol(smiles);
   if (!mol) throw new Error(`RDKit could not read ${smiles}`);
   try {
@@ -65,6 +70,13 @@ export interface RdkitDescriptors {
   tpsa: number;
   NumHBD: number;
   lipinskiHBA: number;
+  /** Wildman & Crippen atom-contribution log P. */
+  CrippenClogP: number;
+  /** RDKit's strict definition (excludes amide/ester C–X, CF3, t-Bu and bonds next to triple bonds). */
+  NumRotatableBonds: number;
+  NumAromaticRings: number;
+  /** Specified and unspecified tetrahedral stereocentres. */
+  NumAtomStereoCenters: number;
 }
 
 export function rdkitDescriptors(smiles: string): Promise<RdkitDescriptors> {
@@ -79,4 +91,30 @@ export function morganBits(smiles: string): Promise<Set<number>> {
     for (let i = 0; i < bits.length; i++) if (bits[i] === '1') set.add(i);
     return set;
   });
+}
+
+/** Does the molecule contain the query (a SMILES read as a molecule, or a SMARTS pattern)? */
+export async function rdkitHas(smiles: string, query: string, as: 'smiles' | 'smarts'): Promise<boolean> {
+  const lib = await rdkit();
+  const pattern = as === 'smarts' ? lib.get_qmol(query) : lib.get_mol(query);
+  if (!pattern) throw new Error(`RDKit could not read the query ${query}`);
+  try {
+    return await withMol(smiles, (mol) => Object.keys(JSON.parse(mol.get_substruct_match(pattern))).length > 0);
+  } finally {
+    pattern.delete();
+  }
+}
+
+/** Distinct bonds matched by a two-atom SMARTS pattern (e.g. a rotatable-bond definition). */
+export async function rdkitBondCount(smiles: string, smarts: string): Promise<number> {
+  const pattern = (await rdkit()).get_qmol(smarts);
+  if (!pattern) throw new Error(`RDKit could not read the SMARTS ${smarts}`);
+  try {
+    return await withMol(smiles, (mol) => {
+      const matches = JSON.parse(mol.get_substruct_matches(pattern)) as { bonds: number[] }[] | Record<string, never>;
+      return new Set((Array.isArray(matches) ? matches : []).flatMap((match) => match.bonds)).size;
+    });
+  } finally {
+    pattern.delete();
+  }
 }

@@ -46,7 +46,11 @@ function cutFragments(count: number): Molecule[] {
     for (let k = 0, taken = 1; k < queue.length && taken < size; k++) {
       for (let n = 0; n < mol.getConnAtoms(queue[k]) && taken < size; n++) {
         const next = mol.getConnAtom(queue[k], n);
-        if (!keep[next]) (keep[next] = true), queue.push(next), taken++;
+        if (!keep[next]) {
+          keep[next] = true;
+          queue.push(next);
+          taken++;
+        }
       }
     }
     const fragment = new Molecule(0, 0);

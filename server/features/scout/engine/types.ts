@@ -1,20 +1,10 @@
 import type { outcomes } from '../../../../shared/schemas/record-parts';
+import type { CompoundDescriptors } from '../../../chem/descriptors';
 
 export type Outcome = (typeof outcomes)[number];
 
-/** Descriptors the Scout model reads (OpenChemLib values as stored on compounds; see server/chem/descriptors.ts). */
-export interface ScoutDescriptors {
-  formula: string;
-  mw: number;
-  clogp: number;
-  tpsa: number;
-  hbd: number;
-  hba: number;
-  rotatableBonds: number;
-  aromaticRings: number;
-  stereocentres: number;
-  charge: number;
-}
+/** Descriptors the Scout model reads: the compound's stored descriptors but its exact mass. */
+export type ScoutDescriptors = Omit<CompoundDescriptors, 'exactMass'>;
 
 /** A compound as Scout sees it: identity for display, descriptors, classes and the stored fingerprint (16 int32). */
 export interface ScoutCompound {

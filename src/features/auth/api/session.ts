@@ -1,24 +1,8 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, setCsrfToken } from '../../../lib/api-client';
-import { meResponseSchema, type LoginInput, type Role, roleAtLeast } from '../../../../shared/schemas/auth';
+import type { LoginInput } from '../../../../shared/schemas/auth';
 
-export const sessionKeys = { me: ['session', 'me'] as const };
-
-export const meQueryOptions = queryOptions({
-  queryKey: sessionKeys.me,
-  queryFn: () => api('/api/auth/me', {}, meResponseSchema),
-  staleTime: 60_000,
-});
-
-export function useMe() {
-  return useQuery(meQueryOptions);
-}
-
-/** True when the signed-in user has at least this role (the server stays the authority). */
-export function useHasRole(least: Role): boolean {
-  const { data } = useMe();
-  return !!data?.user && roleAtLeast(data.user.role, least);
-}
+export { meQueryOptions, sessionKeys, useHasRole, useMe } from '../../../lib/session';
 
 export function useSignIn() {
   const qc = useQueryClient();

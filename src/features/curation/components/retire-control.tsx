@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { TextAreaField } from '../../../components/ui/field';
-import { useMe } from '../../auth/api/session';
+import { useMe } from '../../../lib/session';
 import { roleAtLeast } from '../../../../shared/schemas/auth';
 import type { RecordDto } from '../../../../shared/schemas/record';
 import { useRestoreRecord, useRetireRecord } from '../api/retire';

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { adminUserListSchema, adminUserSchema, type AdminUserUpdate } from '../../../../shared/schemas/accounts';
-import { sessionKeys } from '../../auth/api/session';
+import { sessionKeys } from '../../../lib/session';
 import { peopleKeys } from './keys';
 
 export const usersQueryOptions = queryOptions({
