@@ -79,9 +79,14 @@ export class TokenFailureThrottle {
 const throttle = new TokenFailureThrottle();
 
 function tooMany(minutes: number) {
-  return new AppError(429, 'too_many_attempts', `Too many refused API tokens from this address. Try again in ${minutes} min.`, {
-    retryAfterMinutes: minutes,
-  });
+  return new AppError(
+    429,
+    'too_many_attempts',
+    `Too many refused API tokens from this address. Try again in ${minutes} min.`,
+    {
+      retryAfterMinutes: minutes,
+    },
+  );
 }
 
 type TokenRow = { id: number; user_id: number; read_only: boolean; stale: boolean };

@@ -6,12 +6,10 @@ export const API_TOKEN_PATTERN = /^rfo_[A-Za-z0-9_-]{43}$/;
 /** At most this many usable (not revoked, not expired) tokens per person. */
 export const MAX_ACTIVE_TOKENS = 25;
 
-const futureInstant = z
-  .union([z.iso.date(), z.iso.datetime({ offset: true })])
-  .meta({
-    description:
-      'Expiry: a date (the token ends at the close of that day, UTC) or an ISO 8601 date-time; at most 5 years ahead.',
-  });
+const futureInstant = z.union([z.iso.date(), z.iso.datetime({ offset: true })]).meta({
+  description:
+    'Expiry: a date (the token ends at the close of that day, UTC) or an ISO 8601 date-time; at most 5 years ahead.',
+});
 
 export const tokenCreateSchema = z.object({
   name: z.string().trim().min(1, 'Name the token (what script or tool uses it).').max(80, 'At most 80 characters.'),

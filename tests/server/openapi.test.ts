@@ -101,7 +101,10 @@ describe('the OpenAPI document', () => {
     expect(templated.length).toBeGreaterThan(20);
     for (const { path, op } of templated) {
       const names = [...path.matchAll(/\{(\w+)\}/g)].map((m) => m[1]).sort();
-      const declared = (op.parameters ?? []).filter((p) => p.in === 'path').map((p) => p.name).sort();
+      const declared = (op.parameters ?? [])
+        .filter((p) => p.in === 'path')
+        .map((p) => p.name)
+        .sort();
       expect(declared, path).toEqual(names);
     }
   });

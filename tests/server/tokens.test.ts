@@ -192,7 +192,9 @@ describe('personal API tokens', () => {
     const calm = '203.0.113.78';
     const burst = await Promise.all(
       Array.from({ length: 10 }, () =>
-        request(app).get('/api/overview').set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': calm }),
+        request(app)
+          .get('/api/overview')
+          .set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': calm }),
       ),
     );
     expect(burst.map((r) => r.status)).toEqual(Array(10).fill(200));
@@ -216,7 +218,11 @@ describe('personal API tokens', () => {
 
   it('when request headers are logged, then the token and the session cookie are left out', () => {
     const headers = { authorization: 'Bearer rfo_secret', cookie: 'rfolio.sid=s%3Aabc', accept: 'application/json' };
-    expect(withoutCredentials(headers)).toEqual({ authorization: '[redacted]', cookie: '[redacted]', accept: 'application/json' });
+    expect(withoutCredentials(headers)).toEqual({
+      authorization: '[redacted]',
+      cookie: '[redacted]',
+      accept: 'application/json',
+    });
     expect(headers.authorization).toBe('Bearer rfo_secret');
   });
 });

@@ -13,7 +13,9 @@ export type AccessHandler = RequestHandler & { access: AccessLevel };
  */
 export function allow(level: AccessLevel): AccessHandler {
   const handler = ((req, _res, next) => {
-    if (req.apiToken?.readOnly && !READS.has(req.method)) return next(new ForbiddenError('This API token is read-only.'));
+    if (req.apiToken?.readOnly && !READS.has(req.method)) {
+      return next(new ForbiddenError('This API token is read-only.'));
+    }
     if (level === 'public') return next();
     if (!req.user) return next(new UnauthenticatedError());
     if (!roleAtLeast(req.user.role, level)) return next(new ForbiddenError());

@@ -54,7 +54,7 @@ export function SchemaView({
         const inner = resolve(prop, components).schema;
         const nested = Boolean(
           inner.properties ||
-            (inner.type === 'array' && resolve((inner.items as Schema) ?? {}, components).schema.properties),
+          (inner.type === 'array' && resolve((inner.items as Schema) ?? {}, components).schema.properties),
         );
         return (
           <li key={key} className="break-words">
