@@ -4,8 +4,8 @@ import { pinoHttp } from 'pino-http';
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { join } from 'node:path';
-import { logger } from './logger';
-import { env } from '../config/env';
+import { loggableUrl, logger } from './logger';
+import { env, trustProxySetting } from '../config/env';
 import { sessionMiddleware } from '../auth/session';
 import { passport } from '../auth/passport';
 import { requireCsrf } from './middleware/csrf';
@@ -26,12 +26,13 @@ export function createApp(): AppHandle {
   const sessions = sessionMiddleware();
   app.disable('x-powered-by');
   app.use(noteArrival);
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For counts only when it comes from a configured proxy (TRUST_PROXY); by default no client is one.
+  app.set('trust proxy', trustProxySetting(env().TRUST_PROXY));
   app.use(
     helmet({
       contentSecurityPolicy: {
         directives: {
-          'script-src': ["'self'", "'unsafe-eval'"],
+          'script-src': ["'self'"],
           'img-src': ["'self'", 'data:', 'blob:'],
           'style-src': ["'self'", "'unsafe-inline'"],
           'upgrade-insecure-requests': production ? [] : null,
@@ -44,6 +45,11 @@ export function createApp(): AppHandle {
     pinoHttp({
       logger,
       autoLogging: { ignore: (req) => req.url === '/api/health' },
+      // No headers (cookies, CSRF tokens) and no e-mailed tokens in URLs: what a request log needs and no more.
+      serializers: {
+        req: (req: { id?: unknown; method?: string; url?: string; remoteAddress?: string }) => ({ id: req.id, method: req.method, url: loggableUrl(req.url), remoteAddress: req.remoteAddress }),
+        res: (res: { statusCode?: number }) => ({ statusCode: res.statusCode }),
+      },
       customLogLevel: (_req, res, err) => (res.statusCode === 503 ? 'warn' : err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
     }),
   );
