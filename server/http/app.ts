@@ -11,7 +11,7 @@ import { passport } from '../auth/passport';
 import { requireCsrf } from './middleware/csrf';
 import { errorHandler, apiNotFound } from './middleware/errors';
 import { apiRouter } from './routes';
-import { stopMailCatcher } from '../mail/catcher';
+import { usesMailCatcher } from '../mail/send';
 import { stopSearchIndexes } from '../features/search/process-indexes';
 import { noteArrival } from '../db/data-stamp';
 
@@ -67,7 +67,9 @@ export function createApp(): AppHandle {
   }
   app.use(errorHandler);
   const close = async () => {
-    await Promise.all([sessions.pool.end(), stopMailCatcher(), stopSearchIndexes()]);
+    // The catcher (development dependencies) is loaded only where it can run: never in production.
+    const stopCatcher = usesMailCatcher() ? import('../mail/catcher').then((catcher) => catcher.stopMailCatcher()) : undefined;
+    await Promise.all([sessions.pool.end(), stopCatcher, stopSearchIndexes()]);
   };
   return { app, close };
 }
