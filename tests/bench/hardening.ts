@@ -29,7 +29,7 @@ async function startApp(url: string) {
   const seeded = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/seed.ts'], { cwd: appRoot, env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: url, LOG_LEVEL: 'warn' }, stdio: ['ignore', 'ignore', 'inherit'] });
   if (seeded.status !== 0) throw new Error('seeding failed');
   const port = await freePort();
-  const env = { ...process.env, NODE_ENV: 'production', SESSION_SECRET: randomBytes(32).toString('hex'), DATABASE_URL: url, HOST, PORT: String(port), RFOLIO_WORKERS: '1', LOG_LEVEL: 'warn' };
+  const env = { ...process.env, NODE_ENV: 'production', SESSION_SECRET: randomBytes(32).toString('hex'), DATABASE_URL: url, HOST, PORT: String(port), RFOLIO_WORKERS: '1', LOG_LEVEL: 'warn', TRUST_PROXY: 'loopback' };
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { cwd: appRoot, env, stdio: ['ignore', 'ignore', 'inherit'] });
   const base = `http://${HOST}:${port}`;
   for (let i = 0; !(await fetch(`${base}/api/health`).then((r) => r.ok, () => false)); i++) {
@@ -41,13 +41,14 @@ async function startApp(url: string) {
 
 /** A fresh cookie + CSRF token, signed in when credentials are given. */
 async function session(base: string, email?: string, password?: string, from?: string) {
-  const csrfRes = await fetch(`${base}/api/auth/csrf`);
+  // As behind a TLS proxy on loopback (production's session cookie is Secure).
+  const csrfRes = await fetch(`${base}/api/auth/csrf`, { headers: { 'X-Forwarded-Proto': 'https' } });
   let cookie = csrfRes.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
   let csrf = ((await csrfRes.json()) as { token: string }).token;
   if (!email) return { cookie, csrf, status: 0, body: null as unknown };
   const res = await fetch(`${base}/api/auth/login`, {
     method: 'POST',
-    headers: { 'Content-Type': 'application/json', Cookie: cookie, 'X-CSRF-Token': csrf, ...(from ? { 'X-Forwarded-For': from } : {}) },
+    headers: { 'Content-Type': 'application/json', 'X-Forwarded-Proto': 'https', Cookie: cookie, 'X-CSRF-Token': csrf, ...(from ? { 'X-Forwarded-For': from } : {}) },
     body: JSON.stringify({ email, password }),
   });
   const body = (await res.json()) as { csrfToken?: string };
@@ -86,7 +87,7 @@ try {
   const translate = (components: { solvent: string; parts: number }[]) => () =>
     fetch(`${app.base}/api/tools/translate-eluent`, {
       method: 'POST',
-      headers: { 'Content-Type': 'application/json', Cookie: viewer.cookie, 'X-CSRF-Token': viewer.csrf },
+      headers: { 'Content-Type': 'application/json', 'X-Forwarded-Proto': 'https', Cookie: viewer.cookie, 'X-CSRF-Token': viewer.csrf },
       body: JSON.stringify({ from: { components }, to: { weak: 'hexanes', strong: 'EtOAc' } }),
       signal: AbortSignal.timeout(GIVE_UP_S * 1000),
     });

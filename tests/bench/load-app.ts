@@ -48,6 +48,8 @@ export async function startApp(databaseUrl: string): Promise<RunningApp> {
       ...process.env,
       NODE_ENV: 'production',
       SESSION_SECRET: randomBytes(32).toString('hex'),
+      // The load stands for a TLS proxy on loopback (X-Forwarded-Proto: https, see behindTlsProxy).
+      TRUST_PROXY: 'loopback',
       DATABASE_URL: databaseUrl,
       HOST,
       PORT: String(port),
