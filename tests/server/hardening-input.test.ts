@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
+import { spawnSync } from 'node:child_process';
 import type { Express } from 'express';
 import { createApp } from '../../server/http/app';
 import { loadEnv, trustProxySetting } from '../../server/config/env';
@@ -100,6 +101,12 @@ describe('environment', () => {
     expect(() => loadEnv({ ...base, NODE_ENV: 'production', RFOLIO_SEED_DEMO: '1' })).toThrow(/RFOLIO_SEED_DEMO: refused in production/);
     expect(loadEnv({ ...base, NODE_ENV: 'production' }).demo).toBe(false);
     expect(loadEnv({ ...base, NODE_ENV: 'test', RFOLIO_SEED_DEMO: '1' }).demo).toBe(true);
+  });
+
+  it('when `npm run seed` is run in production, then it refuses and seeds nothing', { timeout: 30_000 }, () => {
+    const run = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/seed.ts'], { env: { ...process.env, ...base, NODE_ENV: 'production' }, encoding: 'utf8' });
+    expect(run.status).toBe(1);
+    expect(run.stderr).toMatch(/Refusing to seed the demo group in production/);
   });
 
   it('when TRUST_PROXY is unset, then no client is a proxy; a list names the proxies', () => {
