@@ -80,6 +80,24 @@ describe('sign-in waits (NIST SP 800-63B § 5.2.2: rate limiting, no hard lock-o
     expect(await signInPatiently(user.email, address)).toBeLessThanOrEqual(3);
   });
 
+  it('when the owner’s own browser (where they signed in before) comes back during someone else’s burst, then it is let in at once; a fresh browser waits', async () => {
+    const user = await createUser('member');
+    const own = await agentFor(app);
+    const first = await own.post('/api/auth/login').set('X-CSRF-Token', own.csrf).set('X-Forwarded-For', address()).send({ email: user.email, password: TEST_PASSWORD });
+    expect(first.status).toBe(200);
+    expect(String(first.headers['set-cookie'])).toMatch(/rfolio\.known=[\w-]{43};.*HttpOnly/);
+    for (let i = 0; i < 4; i++) await attempt(user.email, 'wrong-password-here', address());
+    expect((await attempt(user.email, TEST_PASSWORD, address())).status).toBe(429);
+    const again = await own.get('/api/auth/csrf');
+    const back = await own.post('/api/auth/login').set('X-CSRF-Token', again.body.token).set('X-Forwarded-For', address()).send({ email: user.email, password: TEST_PASSWORD });
+    expect(back.status).toBe(200);
+    // The cookie is the owner's account's only: for another account the same browser waits like any other.
+    const other = await createUser('viewer');
+    for (let i = 0; i < 3; i++) await attempt(other.email, 'wrong-password-here', address());
+    const token = (await own.get('/api/auth/csrf')).body.token;
+    expect((await own.post('/api/auth/login').set('X-CSRF-Token', token).set('X-Forwarded-For', address()).send({ email: other.email, password: TEST_PASSWORD })).status).toBe(429);
+  });
+
   it('when one address has 5 failed sign-ins across accounts, then the next from it waits seconds while another address signs in at once', async () => {
     const from = `192.0.2.${Math.floor(Math.random() * 250) + 1}`;
     for (let i = 0; i < 5; i++) expect((await attempt(`nobody-${randomUUID()}@test.invalid`, 'wrong-password-here', from)).status).toBe(401);

@@ -6,6 +6,7 @@ import { passwordChangeByUser, signInWaits, whenAccountIsGuessed } from '../../h
 import { alertAccountOwner } from './guess-alert';
 import { passport, toSessionUser } from '../../auth/passport';
 import { signIn } from '../../auth/sign-in';
+import { rememberDevice } from '../../auth/known-device';
 import { loginInputSchema, passwordChangeSchema, profileUpdateSchema, type SessionUser } from '../../../shared/schemas/auth';
 import { AppError } from '../../http/errors';
 import { changePassword, updateProfileName, WrongPasswordError } from './profile';
@@ -38,6 +39,7 @@ authRouter.post(
     const user = await authenticate(req);
     if (!user) throw new AppError(401, 'invalid_credentials', 'Wrong e-mail or password.');
     const token = await signIn(req, user);
+    rememberDevice(res, user.email);
     res.json({ user, csrfToken: token });
   }),
 );

@@ -4,6 +4,7 @@ import { env } from '../../config/env';
 import { PgRateLimitStore } from '../../auth/pg-rate-limit-store';
 import { MemoryAttemptStore, PgAttemptStore, type AttemptStore } from '../../auth/sign-in-waits';
 import { logger } from '../logger';
+import { isKnownDevice } from '../../auth/known-device';
 
 const windowMs = () => env().SIGNIN_WINDOW_MINUTES * 60_000;
 
@@ -61,7 +62,8 @@ export const signInWaits: RequestHandler = async (req, res, next) => {
     const { account, address } = rules();
     const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase().slice(0, 254) : '';
     const keys = [{ key: `address:${ipKeyGenerator(req.ip ?? '')}`, rule: address, what: 'from this address' }];
-    if (email) keys.push({ key: `account:${email}`, rule: account, what: 'for this account' });
+    // A browser where the owner signed in before skips the account's wait (auth/known-device.ts).
+    if (email && !isKnownDevice(req, email)) keys.push({ key: `account:${email}`, rule: account, what: 'for this account' });
     const claims = await Promise.all(keys.map(({ key, rule }) => store.claim(key, rule)));
     const refused = claims.flatMap((claim, i) => (claim.ok ? [] : [{ ms: claim.retryAfterMs, what: keys[i].what }]));
     if (refused.length > 0) {
@@ -73,7 +75,8 @@ export const signInWaits: RequestHandler = async (req, res, next) => {
       });
       return;
     }
-    const accountClaim = email ? claims[1] : undefined;
+    const accountKey = keys[1]?.key;
+    const accountClaim = accountKey ? claims[1] : undefined;
     res.on('finish', () => {
       const settle = async () => {
         if (res.statusCode === 401) {
@@ -81,7 +84,8 @@ export const signInWaits: RequestHandler = async (req, res, next) => {
           return;
         }
         await store.giveBack(keys[0].key);
-        if (email) await (res.statusCode < 300 ? store.clear(keys[1].key) : store.giveBack(keys[1].key));
+        if (email && res.statusCode < 300) await store.clear(`account:${email}`);
+        else if (accountKey) await store.giveBack(accountKey);
       };
       settle().catch((err) => logger.warn({ err }, 'sign-in counters not updated'));
     });
