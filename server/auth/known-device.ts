@@ -12,18 +12,21 @@ import { env } from '../config/env';
 export const KNOWN_DEVICE_COOKIE = 'rfolio.known';
 const YEAR_MS = 365 * 24 * 3600 * 1000;
 
-const tokenFor = (email: string) => createHmac('sha256', env().sessionSecret).update(`known-device:${email.trim().toLowerCase()}`).digest('base64url');
+const tokenFor = (email: string) =>
+  createHmac('sha256', env().sessionSecret).update(`known-device:${email.trim().toLowerCase()}`).digest('base64url');
 
 /** Marks this browser as one where `email`'s owner signed in (one cookie per browser: the last account). */
 export function rememberDevice(res: Response, email: string): void {
   const production = env().NODE_ENV === 'production';
-  res.cookie(KNOWN_DEVICE_COOKIE, tokenFor(email), { httpOnly: true, sameSite: 'lax', secure: production, maxAge: YEAR_MS, path: '/api/auth' });
+  const options = { httpOnly: true, sameSite: 'lax' as const, secure: production, maxAge: YEAR_MS, path: '/api/auth' };
+  res.cookie(KNOWN_DEVICE_COOKIE, tokenFor(email), options);
 }
 
 /** Whether the request comes from a browser where `email`'s owner signed in before. */
 export function isKnownDevice(req: Request, email: string): boolean {
   const header = req.headers.cookie ?? '';
-  const sent = header.split(';').map((part) => part.trim()).find((part) => part.startsWith(`${KNOWN_DEVICE_COOKIE}=`))?.slice(KNOWN_DEVICE_COOKIE.length + 1);
+  const prefix = `${KNOWN_DEVICE_COOKIE}=`;
+  const sent = header.split(';').map((part) => part.trim()).find((part) => part.startsWith(prefix))?.slice(prefix.length);
   if (!sent || !email) return false;
   const expected = Buffer.from(tokenFor(email));
   const given = Buffer.from(sent);

@@ -47,7 +47,12 @@ export function createApp(): AppHandle {
       autoLogging: { ignore: (req) => req.url === '/api/health' },
       // No headers (cookies, CSRF tokens) and no e-mailed tokens in URLs: what a request log needs and no more.
       serializers: {
-        req: (req: { id?: unknown; method?: string; url?: string; remoteAddress?: string }) => ({ id: req.id, method: req.method, url: loggableUrl(req.url), remoteAddress: req.remoteAddress }),
+        req: (req: { id?: unknown; method?: string; url?: string; remoteAddress?: string }) => ({
+          id: req.id,
+          method: req.method,
+          url: loggableUrl(req.url),
+          remoteAddress: req.remoteAddress,
+        }),
         res: (res: { statusCode?: number }) => ({ statusCode: res.statusCode }),
       },
       customLogLevel: (_req, res, err) => (res.statusCode === 503 ? 'warn' : err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
