@@ -30,9 +30,11 @@ function announce(mailCatcherPort: number | null) {
 
 /** One app process: search indexes, (outside production) the mail catcher, the HTTP server. */
 async function serve(options: { announce: boolean }) {
-  const [{ createApp }, { createHttpServer }, { startMailCatcher }, { usesMailCatcher }, { searchIndexes }] = await Promise.all([
-    import('./http/app'), import('./http/http-server'), import('./mail/catcher'), import('./mail/send'), import('./features/search/process-indexes'),
+  const [{ createApp }, { createHttpServer }, { usesMailCatcher }, { searchIndexes }] = await Promise.all([
+    import('./http/app'), import('./http/http-server'), import('./mail/send'), import('./features/search/process-indexes'),
   ]);
+  // The catcher's packages are development dependencies: imported only where the catcher runs (never in production).
+  const startMailCatcher = async (port: number) => (await import('./mail/catcher')).startMailCatcher(port);
   await searchIndexes().catch((error) => logger.warn({ err: error }, 'search indexes not built at start; the first search retries'));
   const mailCatcherPort = usesMailCatcher() ? await startMailCatcher(config.MAIL_CATCHER_PORT) : null;
   if (options.announce && !usesMailCatcher() && !config.SMTP_HOST) logger.warn('SMTP_HOST is not set: invitations and password resets cannot be e-mailed.');

@@ -148,13 +148,5 @@ const authenticateBearer: RequestHandler = async (req, res, next) => {
   }
 };
 
-/** Request headers as a log may keep them: a token or session cookie is never written to the log. */
-export function withoutCredentials(headers: Record<string, unknown> | undefined): Record<string, unknown> | undefined {
-  if (!headers) return headers;
-  const out = { ...headers };
-  for (const name of ['authorization', 'cookie']) if (out[name] !== undefined) out[name] = '[redacted]';
-  return out;
-}
-
 /** Mounted under /api after the session middleware and before the CSRF check. */
 export const bearerAuth: RequestHandler[] = [authenticateBearer];

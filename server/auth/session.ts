@@ -2,6 +2,7 @@ import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
 import pg from 'pg';
 import { env } from '../config/env';
+import { logger } from '../http/logger';
 import { cacheSessionReads } from './session-cache';
 
 const PgStore = connectPgSimple(session);
@@ -14,7 +15,8 @@ const PgStore = connectPgSimple(session);
  */
 export function sessionMiddleware() {
   const pool = new pg.Pool({ connectionString: env().DATABASE_URL, max: 5, connectionTimeoutMillis: 3_000 });
-  pool.on('error', () => undefined);
+  // An idle connection dropped (e.g. the database restarted): the pool replaces it; say so rather than stay silent.
+  pool.on('error', (err) => logger.warn({ err }, 'session store connection failed'));
   const store = cacheSessionReads(new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true }));
   const production = env().NODE_ENV === 'production';
   return {

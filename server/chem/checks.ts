@@ -1,5 +1,6 @@
 import { Molecule } from 'openchemlib';
 import { MAX_HEAVY_ATOMS, StructureError, type StructureErrorDetails } from './errors';
+import { valenceProblem } from './valence';
 
 /** Where heavy atom i (in the order the input wrote them) sits in the input text. */
 export interface AtomLocator {
@@ -23,7 +24,8 @@ function fail(code: 'valence' | 'aromaticity' | 'pseudo_atom', message: string, 
  * atoms, wildcard/pseudo atoms and atom lists, atoms over their valence (after
  * `ensureHelperArrays(cHelperNeighbours)`: `getFreeValence(a) < 0`, or an uncharged atom written with
  * an abnormal valence such as `[CH5]`; charged atoms such as ammonium N+, nitro N+/O− or PF6− are
- * fine while their free valence is not negative), and aromatic rings that could not be given
+ * fine while their free valence is not negative), uncharged atoms with a valence their element cannot have
+ * (valence.ts: e.g. bromine inside a ring, `C1=NC=CBr=C1`), and aromatic rings that could not be given
  * alternating double bonds (the parser leaves an unpaired electron on a lower-case atom, e.g. `c1cccc1`).
  */
 export function checkMolecule(mol: Molecule, locate: AtomLocator): void {
@@ -46,6 +48,8 @@ export function checkMolecule(mol: Molecule, locate: AtomLocator): void {
     if (!charged && mol.getAtomAbnormalValence(a) !== -1) {
       fail('valence', `${where} (${label}) is written with valence ${mol.getAtomAbnormalValence(a)}, which uncharged ${label} does not have.`, details);
     }
+    const problem = valenceProblem(mol, a);
+    if (problem) fail('valence', `${where} (${label}) ${problem}.`, { ...details, token: label });
     if (mol.getAtomRadical(a) !== 0 && locate.writtenAromatic?.(i)) {
       fail('aromaticity', `${where} (${label}) sits in an aromatic ring that cannot be given alternating double bonds; write ring N–H as [nH] or give a Kekulé structure.`, details);
     }

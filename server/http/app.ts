@@ -4,15 +4,15 @@ import { pinoHttp } from 'pino-http';
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { join } from 'node:path';
-import { logger } from './logger';
-import { env } from '../config/env';
+import { loggableUrl, logger } from './logger';
+import { env, trustProxySetting } from '../config/env';
 import { sessionMiddleware } from '../auth/session';
 import { passport } from '../auth/passport';
-import { bearerAuth, withoutCredentials } from '../auth/bearer';
+import { bearerAuth } from '../auth/bearer';
 import { requireCsrf } from './middleware/csrf';
 import { errorHandler, apiNotFound } from './middleware/errors';
 import { apiRouter } from './routes';
-import { stopMailCatcher } from '../mail/catcher';
+import { usesMailCatcher } from '../mail/send';
 import { stopSearchIndexes } from '../features/search/process-indexes';
 import { noteArrival } from '../db/data-stamp';
 
@@ -27,12 +27,13 @@ export function createApp(): AppHandle {
   const sessions = sessionMiddleware();
   app.disable('x-powered-by');
   app.use(noteArrival);
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For counts only when it comes from a configured proxy (TRUST_PROXY); by default no client is one.
+  app.set('trust proxy', trustProxySetting(env().TRUST_PROXY));
   app.use(
     helmet({
       contentSecurityPolicy: {
         directives: {
-          'script-src': ["'self'", "'unsafe-eval'"],
+          'script-src': ["'self'"],
           'img-src': ["'self'", 'data:', 'blob:'],
           'style-src': ["'self'", "'unsafe-inline'"],
           'upgrade-insecure-requests': production ? [] : null,
@@ -45,7 +46,16 @@ export function createApp(): AppHandle {
     pinoHttp({
       logger,
       autoLogging: { ignore: (req) => req.url === '/api/health' },
-      serializers: { req: (req: { headers?: Record<string, unknown> }) => ({ ...req, headers: withoutCredentials(req.headers) }) },
+      // No headers (cookies, CSRF tokens) and no e-mailed tokens in URLs: what a request log needs and no more.
+      serializers: {
+        req: (req: { id?: unknown; method?: string; url?: string; remoteAddress?: string }) => ({
+          id: req.id,
+          method: req.method,
+          url: loggableUrl(req.url),
+          remoteAddress: req.remoteAddress,
+        }),
+        res: (res: { statusCode?: number }) => ({ statusCode: res.statusCode }),
+      },
       customLogLevel: (_req, res, err) => (res.statusCode === 503 ? 'warn' : err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
     }),
   );
@@ -64,7 +74,9 @@ export function createApp(): AppHandle {
   }
   app.use(errorHandler);
   const close = async () => {
-    await Promise.all([sessions.pool.end(), stopMailCatcher(), stopSearchIndexes()]);
+    // The catcher (development dependencies) is loaded only where it can run: never in production.
+    const stopCatcher = usesMailCatcher() ? import('../mail/catcher').then((catcher) => catcher.stopMailCatcher()) : undefined;
+    await Promise.all([sessions.pool.end(), stopCatcher, stopSearchIndexes()]);
   };
   return { app, close };
 }

@@ -1,16 +1,16 @@
 import type { AddressInfo } from 'node:net';
 import { SMTPServer } from 'smtp-server';
 import { simpleParser, type AddressObject } from 'mailparser';
-import { keepMail } from './mailbox';
+import { keepMail, noteMailCatcherPort } from './mailbox';
 import { logger } from '../http/logger';
 
 /**
  * The local mail catcher: an SMTP server of the app's own on loopback (smtp-server) that keeps every
- * message it receives in memory, for development, the demo and tests. Never started in production.
+ * message it receives in memory, for development, the demo and tests. Never started in production, and never
+ * imported there either (smtp-server and mailparser are development dependencies): load it with `import()`.
  */
 let server: SMTPServer | undefined;
 let starting: Promise<number> | undefined;
-let port: number | null = null;
 
 function addresses(field: AddressObject | AddressObject[] | undefined): string[] {
   const list = Array.isArray(field) ? field : field ? [field] : [];
@@ -46,7 +46,8 @@ export function startMailCatcher(wantedPort = 0): Promise<number> {
     smtp.on('error', (err) => logger.warn({ err }, 'mail catcher error'));
     smtp.listen(wantedPort, '127.0.0.1', () => {
       server = smtp;
-      port = (smtp.server.address() as AddressInfo).port;
+      const port = (smtp.server.address() as AddressInfo).port;
+      noteMailCatcherPort(port);
       resolve(port);
     });
     smtp.server.once('error', reject);
@@ -54,15 +55,12 @@ export function startMailCatcher(wantedPort = 0): Promise<number> {
   return starting;
 }
 
-/** The catcher's port while it runs, else null. */
-export function mailCatcherPort(): number | null {
-  return port;
-}
+export { mailCatcherPort } from './mailbox';
 
 export async function stopMailCatcher(): Promise<void> {
   const running = server;
   server = undefined;
   starting = undefined;
-  port = null;
+  noteMailCatcherPort(null);
   if (running) await new Promise<void>((resolve) => running.close(() => resolve()));
 }

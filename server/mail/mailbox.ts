@@ -5,6 +5,16 @@ const LIMIT = 500;
 const messages: CaughtMail[] = [];
 const waiters = new Set<() => void>();
 let nextId = 1;
+let catcherPort: number | null = null;
+
+/** The local mail catcher's port while it runs, else null (kept here so reading it never loads the catcher). */
+export function mailCatcherPort(): number | null {
+  return catcherPort;
+}
+
+export function noteMailCatcherPort(port: number | null): void {
+  catcherPort = port;
+}
 
 export function keepMail(mail: Omit<CaughtMail, 'id'>): CaughtMail {
   const kept = { ...mail, id: nextId++ };

@@ -51,3 +51,18 @@ export function passwordResetMail(input: { to: string; token: string; expiresAt:
     ].join('\n'),
   };
 }
+
+export function signInGuessedMail(input: { to: string; failures: number; at: Date; waitSeconds: number }): OutgoingMail {
+  return {
+    to: input.to,
+    subject: 'Failed sign-ins to your Rfolio account',
+    text: [
+      `By ${when(input.at)} someone had typed a wrong password for this address on the group’s Rfolio ${input.failures} times in a row.`,
+      '',
+      `Rfolio now makes each further try wait longer (up to ${input.waitSeconds} s), so you can still sign in; ` +
+        'if a sign-in is refused, wait the seconds it says and try again.',
+      'If it was you, nothing else is needed. If it was not, nobody has signed in with these guesses; choosing a long',
+      `password you use nowhere else keeps it that way (profile page, or ${appLink('/password-reset')}).`,
+    ].join('\n'),
+  };
+}

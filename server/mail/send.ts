@@ -1,7 +1,7 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import { env } from '../config/env';
 import { AppError } from '../http/errors';
-import { mailCatcherPort, startMailCatcher } from './catcher';
+import { mailCatcherPort } from './mailbox';
 
 export type OutgoingMail = { to: string; subject: string; text: string; html?: string };
 
@@ -25,7 +25,7 @@ async function transport(): Promise<Transporter> {
     });
     return relay;
   }
-  const port = mailCatcherPort() ?? (await startMailCatcher(env().MAIL_CATCHER_PORT));
+  const port = mailCatcherPort() ?? (await (await import('./catcher')).startMailCatcher(env().MAIL_CATCHER_PORT));
   if (catcherTransport?.port !== port) {
     catcherTransport = { port, transport: nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true }) };
   }

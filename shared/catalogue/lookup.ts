@@ -21,6 +21,9 @@ export function normaliseName(name: string): string {
     .replace(/[\s.\-‐‑‒–—_'’]/g, '');
 }
 
+/** Longest query the suggester searches (the longest catalogue name, normalised, is 44 characters). */
+export const SUGGEST_MAX_LENGTH = 64;
+
 interface Named {
   key: string;
   name: string;
@@ -59,10 +62,15 @@ export class NameIndex<T extends Named> {
     return { ok: false, input, suggestion: this.suggest(input) };
   }
 
-  /** The known name closest to a misspelt one, or null when nothing is reasonably close. */
+  /**
+   * The known name closest to a misspelt one, or null when nothing is reasonably close. Fuse's bitap search grows
+   * faster than the query's length, so a query longer than SUGGEST_MAX_LENGTH (about twice the longest known name)
+   * is close to nothing and is not searched at all.
+   */
   suggest(input: string): string | null {
+    if (input.length > SUGGEST_MAX_LENGTH * 4) return null;
     const query = normaliseName(input);
-    if (!query) return null;
+    if (!query || query.length > SUGGEST_MAX_LENGTH) return null;
     const [best] = this.fuse.search(query);
     return best ? best.item.text : null;
   }

@@ -14,7 +14,7 @@ export function roleAtLeast(role: Role, least: Role): boolean {
 }
 
 export const loginInputSchema = z.object({
-  email: z.string().trim().toLowerCase().email('Enter an e-mail address.'),
+  email: z.string().trim().toLowerCase().max(254, { abort: true }).email('Enter an e-mail address.'),
   password: z.string().min(1, 'Enter your password.').max(200),
 });
 export type LoginInput = z.infer<typeof loginInputSchema>;
@@ -36,7 +36,7 @@ export const newPasswordSchema = z.string().superRefine((value, ctx) => {
 });
 
 export const personNameSchema = z.string().trim().min(1, 'Enter your name.').max(120, 'At most 120 characters.');
-export const emailSchema = z.string().trim().toLowerCase().email('Enter an e-mail address.').max(254);
+export const emailSchema = z.string().trim().toLowerCase().max(254, { abort: true }).email('Enter an e-mail address.');
 
 export const profileUpdateSchema = z.object({ name: personNameSchema });
 export type ProfileUpdate = z.infer<typeof profileUpdateSchema>;

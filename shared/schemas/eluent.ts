@@ -6,8 +6,8 @@ import { eluentSchema, type Eluent } from './eluent-shape';
 // The shapes of an eluent live in eluent-shape.ts (the notation parser needs them without this file's parser).
 export * from './eluent-shape';
 
-const namedComponentSchema = z.object({ solvent: z.string().trim().min(1), parts: z.number().positive().finite() });
-const namedAdditiveSchema = z.object({ additive: z.string().trim().min(1), percent: z.number() });
+const namedComponentSchema = z.object({ solvent: z.string().trim().min(1).max(60), parts: z.number().positive().finite() });
+const namedAdditiveSchema = z.object({ additive: z.string().trim().min(1).max(60), percent: z.number() });
 
 /**
  * Eluent as a client or import may send it: either a notation string ("EtOAc/hexanes 1:4 + 1% Et3N") or

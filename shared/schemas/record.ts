@@ -88,7 +88,7 @@ const listOf = <T extends z.ZodType>(item: T) =>
   z.preprocess((value) => (value === undefined || value === '' ? undefined : typeof value === 'string' ? value.split(',') : value), z.array(item).max(20).optional());
 
 const catalogueKey = (resolve: (input: string) => { ok: true; value: { key: string } } | { ok: false; suggestion: string | null }, kind: string) =>
-  z.string().trim().min(1).transform((input, context) => {
+  z.string().trim().min(1).max(80).transform((input, context) => {
     const found = resolve(input);
     if (found.ok) return found.value.key;
     context.addIssue(

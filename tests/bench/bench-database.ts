@@ -3,7 +3,7 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { dirname, join, resolve } from 'node:path';
-import { clusterPaths, databaseUrl, dropDatabase, ensureDatabase, ensurePostgresInstalled, startCluster, stopCluster } from '../../server/bootstrap/postgres.mjs';
+import { clusterPassword, clusterPaths, databaseUrl, dropDatabase, ensureDatabase, ensurePostgresInstalled, startCluster, stopCluster } from '../../server/bootstrap/postgres.mjs';
 
 export const projectRoot = resolve(dirname(fileURLToPath(import.meta.url)), '..', '..');
 
@@ -32,7 +32,8 @@ export function throwawayDatabase(name: string): BenchDatabase {
     const sql = `SELECT count(*) FROM pg_database WHERE datname LIKE 'rfolio\\_bench\\_%'`;
     const args = ['-h', '127.0.0.1', '-p', String(port), '-U', 'rfolio', '-d', 'postgres', '-tAc', sql];
     try {
-      return execFileSync(join(bin, 'psql'), args, { encoding: 'utf8' }).trim() !== '0';
+      const env = { ...process.env, PGPASSWORD: clusterPassword(port) ?? '' };
+      return execFileSync(join(bin, 'psql'), args, { encoding: 'utf8', env }).trim() !== '0';
     } catch {
       return false;
     }

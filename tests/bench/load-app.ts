@@ -1,6 +1,6 @@
 // The app under load: server/index.ts in a child process of its own (so the load generator does not share
 // its event loop), production-like, on 127.0.0.1 only, with the invented demo group seeded.
-import { spawn, type ChildProcess } from 'node:child_process';
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { createServer } from 'node:net';
 import { projectRoot } from './bench-database';
@@ -30,8 +30,17 @@ export interface RunningApp {
  */
 const appNodeFlags = () => (process.env.RFOLIO_BENCH_APP_NODE_FLAGS ?? '').split(/\s+/).filter(Boolean);
 
-/** Starts the app with NODE_ENV=production, a random SESSION_SECRET and RFOLIO_SEED_DEMO=1; resolves once /api/health is 200. */
+/**
+ * Seeds the invented demo group (outside production: production refuses RFOLIO_SEED_DEMO), then starts the app
+ * with NODE_ENV=production and a random SESSION_SECRET; resolves once /api/health is 200.
+ */
 export async function startApp(databaseUrl: string): Promise<RunningApp> {
+  const seeded = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/seed.ts'], {
+    cwd: projectRoot,
+    env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn' },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  if (seeded.status !== 0) throw new Error('seeding the demo group failed');
   const port = await freePort();
   const child: ChildProcess = spawn(process.execPath, [...appNodeFlags(), '--import', 'tsx', 'server/index.ts'], {
     cwd: projectRoot,
@@ -39,10 +48,11 @@ export async function startApp(databaseUrl: string): Promise<RunningApp> {
       ...process.env,
       NODE_ENV: 'production',
       SESSION_SECRET: randomBytes(32).toString('hex'),
+      // The load stands for a TLS proxy on loopback (X-Forwarded-Proto: https, see behindTlsProxy).
+      TRUST_PROXY: 'loopback',
       DATABASE_URL: databaseUrl,
       HOST,
       PORT: String(port),
-      RFOLIO_SEED_DEMO: '1',
       LOG_LEVEL: process.env.LOG_LEVEL ?? 'info',
     },
     stdio: ['ignore', 'ignore', 'inherit'],

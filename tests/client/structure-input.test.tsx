@@ -84,6 +84,18 @@ describe('StructureInput', () => {
     expect(screen.getByLabelText('SMILES or molfile')).toHaveAttribute('aria-invalid', 'true');
   });
 
+  it('when the server refuses an impossible valence (bromine in a ring, one misplaced click), then the preview names the atom and its element before saving', async () => {
+    const message = 'Atom 5 at position 8 (Br) is double-bonded to carbon; a halogen binds carbon by one single bond.';
+    parseServer(() => ({ status: 422, body: { error: { code: 'valence', message, details: { atom: 5, position: 8, token: 'Br' } } } }));
+    renderWithProviders(<Harness />);
+    fireEvent.change(screen.getByLabelText('SMILES or molfile'), { target: { value: 'C1=NC=CBr=C1' } });
+    const alert = await screen.findByRole('alert', {}, { timeout: 3000 });
+    expect(alert).toHaveTextContent(message);
+    expect(alert).toHaveTextContent('Where: character 8, atom 5 (Br).');
+    expect(alert.querySelector('mark')).toHaveTextContent('B');
+    expect(within(screen.getByRole('complementary', { name: 'Structure check' })).getByRole('status')).toHaveTextContent('Not accepted');
+  });
+
   it('when the server accepts, then it shows the formula, weight and classes and hands the parse to the form', async () => {
     const server = parseServer(() => ({ status: 200, body: aspirin }));
     const onChange = vi.fn();

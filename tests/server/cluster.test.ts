@@ -59,7 +59,7 @@ beforeAll(async () => {
   base = `http://127.0.0.1:${port}`;
   child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: root,
-    env: { ...process.env, NODE_ENV: 'production', RFOLIO_WORKERS: '2', SESSION_SECRET: randomBytes(32).toString('hex'), HOST: '127.0.0.1', PORT: String(port), LOG_LEVEL: 'silent' },
+    env: { ...process.env, NODE_ENV: 'production', RFOLIO_WORKERS: '2', SESSION_SECRET: randomBytes(32).toString('hex'), HOST: '127.0.0.1', PORT: String(port), LOG_LEVEL: 'silent', TRUST_PROXY: 'loopback' },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   const deadline = Date.now() + 90_000;

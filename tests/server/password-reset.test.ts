@@ -73,6 +73,23 @@ describe('POST /api/auth/password-reset', () => {
     expect(again.status).toBe(410);
   });
 
+  it('when a newer link has been sent, then the older one is 410 (replaced) and the newer one works (issue 23 point 7)', async () => {
+    const user = await createUser('member');
+    const before = lastMailId();
+    await requestReset(user.email);
+    const first = await mailedLink(user.email, '/password-reset/', before);
+    const between = lastMailId();
+    await requestReset(user.email);
+    const second = await mailedLink(user.email, '/password-reset/', between);
+    expect(second.token).not.toBe(first.token);
+    expect((await agentFor(app).then((a) => a.get(`/api/auth/password-reset/${first.token}`))).status).toBe(410);
+    const anon = await agentFor(app);
+    const old = await anon.post(`/api/auth/password-reset/${first.token}`).set('X-CSRF-Token', anon.csrf).send({ password: NEW_PASSWORD });
+    expect(old.status).toBe(410);
+    expect(old.body.error.code).toBe('reset_invalid');
+    expect((await anon.post(`/api/auth/password-reset/${second.token}`).set('X-CSRF-Token', anon.csrf).send({ password: NEW_PASSWORD })).status).toBe(204);
+  });
+
   it('when the link is older than an hour, then 410 and the password is unchanged', async () => {
     const user = await createUser('viewer');
     const before = lastMailId();

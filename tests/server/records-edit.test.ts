@@ -112,10 +112,12 @@ describe('PATCH /api/records/:id', () => {
   });
 });
 
-describe('DELETE /api/records/:id (retires; nothing is hard-deleted)', () => {
-  it('when the author deletes, then the record is retired, still readable, and leaves the default list', async () => {
+describe('retiring from the record (one endpoint: POST /api/records/:id/retire; nothing is hard-deleted)', () => {
+  const retire = (agent: Agent, id: number, reason = 'Wrong plate photographed.') => agent.post(`/api/records/${id}/retire`).set('X-CSRF-Token', agent.csrf).send({ reason });
+
+  it('when the author retires, then the record is retired, still readable, and leaves the default list', async () => {
     const id = await newRecordId();
-    const res = await owner.delete(`/api/records/${id}`).set('X-CSRF-Token', owner.csrf).send({ reason: 'Wrong plate photographed.' });
+    const res = await retire(owner, id);
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ id, status: 'retired', retiredReason: 'Wrong plate photographed.' });
     expect((await viewer.get(`/api/records/${id}`)).body.status).toBe('retired');
@@ -127,13 +129,19 @@ describe('DELETE /api/records/:id (retires; nothing is hard-deleted)', () => {
     expect(history.revisions[0].action).toBe('retire');
   });
 
-  it('when another member deletes, then 403; when a curator deletes, then 200', async () => {
+  it('when another member or a viewer retires, then 403; when a curator retires, then 200', async () => {
     const id = await newRecordId();
-    expect((await otherMember.delete(`/api/records/${id}`).set('X-CSRF-Token', otherMember.csrf)).status).toBe(403);
-    expect((await viewer.delete(`/api/records/${id}`).set('X-CSRF-Token', viewer.csrf)).status).toBe(403);
-    const res = await curator.delete(`/api/records/${id}`).set('X-CSRF-Token', curator.csrf);
+    expect((await retire(otherMember, id)).status).toBe(403);
+    expect((await retire(viewer, id)).status).toBe(403);
+    const res = await retire(curator, id, 'Duplicate of an older record.');
     expect(res.status).toBe(200);
-    expect(res.body.retiredReason).toBe('Retired by a curator.');
+    expect(res.body.retiredReason).toBe('Duplicate of an older record.');
+  });
+
+  it('when the second endpoint with other rules is tried (DELETE /api/records/:id, issue 19 point 4), then 404: it is gone', async () => {
+    const id = await newRecordId();
+    expect((await owner.delete(`/api/records/${id}`).set('X-CSRF-Token', owner.csrf)).status).toBe(404);
+    expect((await viewer.get(`/api/records/${id}`)).body.status).toBe('active');
   });
 });
 

@@ -12,7 +12,7 @@ import request from 'supertest';
 import { QueryTypes } from 'sequelize';
 import { createApp } from '../../server/http/app';
 import { sequelize } from '../../server/db/sequelize';
-import { hashApiToken, withoutCredentials } from '../../server/auth/bearer';
+import { hashApiToken } from '../../server/auth/bearer';
 import { expiryOf } from '../../server/features/tokens/service';
 import { API_TOKEN_PATTERN, createdTokenSchema, apiTokenListSchema } from '../../shared/schemas/tokens';
 import { agentFor, type Agent } from '../helpers/agent';
@@ -214,15 +214,5 @@ describe('personal API tokens', () => {
       .send(exampleRecordBody({ notes: 'contributed by a script' }));
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.author.id).toBe(member.user!.id);
-  });
-
-  it('when request headers are logged, then the token and the session cookie are left out', () => {
-    const headers = { authorization: 'Bearer rfo_secret', cookie: 'rfolio.sid=s%3Aabc', accept: 'application/json' };
-    expect(withoutCredentials(headers)).toEqual({
-      authorization: '[redacted]',
-      cookie: '[redacted]',
-      accept: 'application/json',
-    });
-    expect(headers.authorization).toBe('Bearer rfo_secret');
   });
 });

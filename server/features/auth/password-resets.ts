@@ -22,6 +22,8 @@ export async function requestPasswordReset(email: string): Promise<void> {
   const { token, hash } = newToken();
   const expiresAt = new Date(Date.now() + RESET_MINUTES * 60_000);
   await sequelize.transaction(async (transaction) => {
+    // A newer link replaces every older one still open (as the e-mail and the 410 message say).
+    await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: { [Op.is]: null } }, transaction });
     await PasswordReset.create({ userId: user.id, tokenHash: hash, expiresAt }, { transaction });
     await AuditEntry.create({ actorId: null, action: 'user.password_reset_request', subjectType: 'user', subjectId: String(user.id), details: {} }, { transaction });
   });

@@ -2,14 +2,17 @@ import { Router, type Request } from 'express';
 import { allow, currentUser } from '../../http/middleware/access';
 import { handle } from '../../http/middleware/validate';
 import { csrfToken } from '../../http/middleware/csrf';
-import { passwordChangeByUser, signInByAccount, signInByAddress } from '../../http/middleware/throttle';
+import { passwordChangeByUser, signInWaits, whenAccountIsGuessed } from '../../http/middleware/throttle';
+import { alertAccountOwner } from './guess-alert';
 import { passport, toSessionUser } from '../../auth/passport';
 import { signIn } from '../../auth/sign-in';
+import { rememberDevice } from '../../auth/known-device';
 import { loginInputSchema, passwordChangeSchema, profileUpdateSchema, type SessionUser } from '../../../shared/schemas/auth';
 import { AppError } from '../../http/errors';
 import { changePassword, updateProfileName, WrongPasswordError } from './profile';
 
 export const authRouter = Router();
+whenAccountIsGuessed(alertAccountOwner);
 
 authRouter.get('/csrf', allow('public'), (req, res) => {
   res.set('Cache-Control', 'no-store').json({ token: csrfToken(req) });
@@ -27,16 +30,16 @@ function authenticate(req: Request): Promise<SessionUser | false> {
   });
 }
 
-/** One generic answer for a wrong e-mail or password; failed attempts are throttled per address and per account. */
+/** One generic answer for a wrong e-mail or password; failed attempts bring growing waits per address and per account. */
 authRouter.post(
   '/login',
   allow('public'),
-  signInByAddress,
-  signInByAccount,
+  signInWaits,
   handle({ body: loginInputSchema }, async (_input, req, res) => {
     const user = await authenticate(req);
     if (!user) throw new AppError(401, 'invalid_credentials', 'Wrong e-mail or password.');
     const token = await signIn(req, user);
+    rememberDevice(res, user.email);
     res.json({ user, csrfToken: token });
   }),
 );

@@ -1,7 +1,6 @@
 import { Router } from 'express';
 import { allow } from '../../http/middleware/access';
-import { caughtMail } from '../../mail/mailbox';
-import { mailCatcherPort } from '../../mail/catcher';
+import { caughtMail, mailCatcherPort } from '../../mail/mailbox';
 import type { z } from 'zod';
 import type { mailboxSchema } from '../../../shared/schemas/accounts';
 

@@ -1,12 +1,11 @@
 import { Router } from 'express';
 import multer from 'multer';
-import { z } from 'zod';
 import { allow, currentUser } from '../../http/middleware/access';
 import { handle } from '../../http/middleware/validate';
 import { readableMultipart } from '../../http/middleware/multipart';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { recordInputSchema, recordListQuerySchema, recordUpdateSchema } from '../../../shared/schemas/record';
-import { createRecord, retireRecord, updateRecord, canEditRecord } from './service';
+import { createRecord, updateRecord, canEditRecord } from './service';
 import { listRecordIds, loadFullRecord, loadListRecords } from '../../core/record-queries';
 import { recordHistory } from './history';
 import { addPhoto, MAX_PHOTO_BYTES } from './photos';
@@ -18,7 +17,6 @@ import { jsonBody, responseCache, sendJsonBody, StampedCache } from '../../http/
 export const recordsRouter = Router();
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: 1 } });
-const retireBodySchema = z.object({ reason: z.string().trim().min(1).max(500).optional() });
 
 async function recordResponse(id: number, user: Parameters<typeof canEditRecord>[0]) {
   const record = await loadFullRecord(id);
@@ -54,13 +52,6 @@ recordsRouter.get('/:id', allow('viewer'), handle({ params: idParamSchema }, asy
 recordsRouter.patch('/:id', allow('member'), handle({ params: idParamSchema, body: recordUpdateSchema }, async ({ params, body }, req, res) => {
   const user = currentUser(req);
   await updateRecord(params.id, body, user);
-  res.json(await recordResponse(params.id, user));
-}));
-
-/** Retires (soft): the record leaves lists, search and Scout; every row stays and a curator can restore it. */
-recordsRouter.delete('/:id', allow('member'), handle({ params: idParamSchema, body: retireBodySchema }, async ({ params, body }, req, res) => {
-  const user = currentUser(req);
-  await retireRecord(params.id, body.reason, user);
   res.json(await recordResponse(params.id, user));
 }));
 

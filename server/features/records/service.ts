@@ -7,7 +7,6 @@ import { resolveCompound } from '../../core/compounds';
 import type { RecordContent } from '../../core/record-columns';
 import { addRevision, diffStates, loadRecordState } from '../../core/record-revisions';
 import { contentColumns, insertRecord, writeSpots, writeVisualisations } from '../../core/record-rows';
-import { AuditEntry } from '../../db/models';
 
 /** Members edit their own records; curators and admins edit any. */
 export function canEditRecord(user: SessionUser | undefined, record: Pick<ConditionRecord, 'authorId'>): boolean {
@@ -83,23 +82,5 @@ export async function updateRecord(id: number, patch: RecordUpdateParsed, user: 
     const changes = diffStates(before, await loadRecordState(id, transaction));
     if (changes.length > 0) await addRevision(id, user.id, 'update', changes, transaction);
     return record.reload({ transaction });
-  });
-}
-
-/**
- * DELETE /api/records/:id retires the record (soft): it leaves lists, search and Scout but every row stays,
- * and a curator can restore it. Nothing a contributor entered is ever hard-deleted.
- */
-export async function retireRecord(id: number, reason: string | undefined, user: SessionUser): Promise<ConditionRecord> {
-  const found = await findRecord(id);
-  requireEditable(user, found);
-  if (found.status === 'retired') return found;
-  return sequelize.transaction(async (transaction) => {
-    const record = await ConditionRecord.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
-    const retiredReason = reason ?? (user.id === record.authorId ? 'Withdrawn by its author.' : 'Retired by a curator.');
-    await record.update({ status: 'retired', retiredReason, retiredAt: new Date(), retiredBy: user.id }, { transaction });
-    await addRevision(id, user.id, 'retire', [{ field: 'status', from: 'active', to: 'retired' }, { field: 'retiredReason', from: null, to: retiredReason }], transaction);
-    await AuditEntry.create({ actorId: user.id, action: 'record.retire', subjectType: 'record', subjectId: String(id), details: { reason: retiredReason } }, { transaction });
-    return record;
   });
 }

@@ -36,7 +36,7 @@ export class SearchIndexes {
 
   constructor(url = env().DATABASE_URL) {
     this.feed = new ChangeFeed(url, {
-      onNotice: () => void this.sync().catch(() => undefined),
+      onNotice: () => void this.sync().catch((error) => logger.warn({ err: error }, 'search index sync failed')),
       onListening: (reconnect) => {
         if (reconnect) void this.catchUp().catch((error) => logger.warn({ err: error }, 'search index catch-up failed'));
       },
@@ -52,7 +52,7 @@ export class SearchIndexes {
   async start(): Promise<void> {
     await this.feed.start();
     await this.rebuild();
-    this.pruneTimer = setInterval(() => void pruneChangeLog().catch(() => undefined), PRUNE_EVERY_MS);
+    this.pruneTimer = setInterval(() => void pruneChangeLog().catch((error) => logger.warn({ err: error }, 'change-log pruning failed')), PRUNE_EVERY_MS);
     this.pruneTimer.unref();
   }
 

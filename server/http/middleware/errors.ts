@@ -2,7 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { MulterError } from 'multer';
 import { errorDetailsOf } from '../../../shared/schemas/common';
 import { AppError, DatabaseUnavailableError, NotFoundError } from '../errors';
-import { logger } from '../logger';
+import { loggableUrl, logger } from '../logger';
 
 const DB_DOWN = /ECONNREFUSED|not queryable|ECONNRESET|terminating connection|Connection terminated|the database system is (shutting down|starting up)|connect ETIMEDOUT|Connection.*timeout/i;
 
@@ -19,7 +19,7 @@ export function isDatabaseDown(err: unknown): boolean {
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   // A failure after the answer started (e.g. a session save at shutdown) can no longer be reported to the client.
   if (res.headersSent) {
-    if (!isDatabaseDown(err)) logger.warn({ err, path: req.path }, 'error after the response was sent');
+    if (!isDatabaseDown(err)) logger.warn({ err, path: loggableUrl(req.path) }, 'error after the response was sent');
     req.socket.destroy();
     return;
   }
@@ -39,10 +39,10 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   } else if (typeof err?.status === 'number' && err.status >= 400 && err.status < 500 && err.expose) {
     appErr = new AppError(err.status, 'bad_request', err.message);
   } else {
-    logger.error({ err, path: req.path }, 'unhandled error');
     appErr = new AppError(500, 'internal', 'Something went wrong on our side; it has been logged.');
   }
-  if (appErr.status >= 500 && appErr.status !== 503) logger.error({ err }, appErr.message);
+  // Logged once, by the request logger (pino-http logs `res.err` with the request line at level error).
+  if (appErr.status >= 500 && appErr.status !== 503) res.err = err instanceof Error ? err : new Error(String(err));
   res.status(appErr.status).json({ error: { code: appErr.code, message: appErr.message, details: errorDetailsOf(appErr.message, appErr.details) } });
 };
 

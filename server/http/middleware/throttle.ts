@@ -2,6 +2,9 @@ import type { Request, RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import { env } from '../../config/env';
 import { PgRateLimitStore } from '../../auth/pg-rate-limit-store';
+import { MemoryAttemptStore, PgAttemptStore, type AttemptStore } from '../../auth/sign-in-waits';
+import { logger } from '../logger';
+import { isKnownDevice } from '../../auth/known-device';
 
 const windowMs = () => env().SIGNIN_WINDOW_MINUTES * 60_000;
 
@@ -25,38 +28,72 @@ function tooMany(what: string): RequestHandler {
   };
 }
 
-/** Only a refused credential counts: successes and malformed requests (400) do not use up the allowance. */
-const failedCredential = (_req: Request, res: { statusCode: number }) => res.statusCode !== 401;
-
-function emailKey(req: Request): string {
-  const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : '';
-  return email || `no-email:${ipKeyGenerator(req.ip ?? '')}`;
+const waitStores = new Map<string, AttemptStore>();
+/** The sign-in attempt counters: PostgreSQL in production (shared by every app process), memory elsewhere. */
+function attemptStore(): AttemptStore {
+  const kind = env().SIGNIN_THROTTLE_STORE ?? (env().NODE_ENV === 'production' ? 'postgres' : 'memory');
+  let store = waitStores.get(kind);
+  if (!store) waitStores.set(kind, (store = kind === 'postgres' ? new PgAttemptStore('signin-wait:') : new MemoryAttemptStore()));
+  return store;
 }
 
-/** Failed sign-ins per client address (IPv6 grouped by /56, as express-rate-limit recommends). */
-export const signInByAddress = rateLimit({
-  windowMs: windowMs(),
-  limit: () => env().SIGNIN_MAX_FAILURES_PER_ADDRESS,
-  skipSuccessfulRequests: true,
-  requestWasSuccessful: failedCredential,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  ...counters('signin-address:'),
-  handler: tooMany('sign-ins from this address'),
-});
+const rules = () => {
+  const { SIGNIN_FREE_FAILURES_PER_ACCOUNT, SIGNIN_FREE_FAILURES_PER_ADDRESS, SIGNIN_MAX_WAIT_SECONDS } = env();
+  const shared = { maxWaitMs: SIGNIN_MAX_WAIT_SECONDS * 1000, windowMs: windowMs() };
+  return { account: { ...shared, free: SIGNIN_FREE_FAILURES_PER_ACCOUNT }, address: { ...shared, free: SIGNIN_FREE_FAILURES_PER_ADDRESS } };
+};
 
-/** Failed sign-ins per account (the e-mail typed), whatever address they come from. */
-export const signInByAccount = rateLimit({
-  windowMs: windowMs(),
-  limit: () => env().SIGNIN_MAX_FAILURES_PER_ACCOUNT,
-  skipSuccessfulRequests: true,
-  requestWasSuccessful: failedCredential,
-  keyGenerator: emailKey,
-  standardHeaders: false,
-  legacyHeaders: false,
-  ...counters('signin-account:'),
-  handler: tooMany('sign-ins for this account'),
-});
+/** Called when an account's free allowance of failed sign-ins has just been used up (once per run of failures). */
+let onAccountGuessed: (email: string, failures: number) => void = () => undefined;
+export function whenAccountIsGuessed(handler: (email: string, failures: number) => void) {
+  onAccountGuessed = handler;
+}
+
+/**
+ * Sign-in rate limiting with growing waits per account (the e-mail typed, known or not) and per client address
+ * (IPv6 grouped by /56), after NIST SP 800-63B § 5.2.2; see auth/sign-in-waits.ts. A refused attempt answers 429
+ * with Retry-After in seconds; the password is not even checked. Only a refused credential (401) stays counted:
+ * a success clears the account's failures and gives the address's attempt back, and a malformed request (400)
+ * gives both back.
+ */
+export const signInWaits: RequestHandler = async (req, res, next) => {
+  try {
+    const store = attemptStore();
+    const { account, address } = rules();
+    const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase().slice(0, 254) : '';
+    const keys = [{ key: `address:${ipKeyGenerator(req.ip ?? '')}`, rule: address, what: 'from this address' }];
+    // A browser where the owner signed in before skips the account's wait (auth/known-device.ts).
+    if (email && !isKnownDevice(req, email)) keys.push({ key: `account:${email}`, rule: account, what: 'for this account' });
+    const claims = await Promise.all(keys.map(({ key, rule }) => store.claim(key, rule)));
+    const refused = claims.flatMap((claim, i) => (claim.ok ? [] : [{ ms: claim.retryAfterMs, what: keys[i].what }]));
+    if (refused.length > 0) {
+      await Promise.all(keys.filter((_, i) => claims[i].ok).map(({ key }) => store.giveBack(key)));
+      const longest = refused.reduce((a, b) => (b.ms > a.ms ? b : a));
+      const seconds = Math.max(1, Math.ceil(longest.ms / 1000));
+      res.set('Retry-After', String(seconds)).status(429).json({
+        error: { code: 'too_many_attempts', message: `Too many failed sign-ins ${longest.what}. Try again in ${seconds} s.`, details: [{ path: '', message: 'Wait before trying again.', retryAfterSeconds: seconds }] },
+      });
+      return;
+    }
+    const accountKey = keys[1]?.key;
+    const accountClaim = accountKey ? claims[1] : undefined;
+    res.on('finish', () => {
+      const settle = async () => {
+        if (res.statusCode === 401) {
+          if (accountClaim?.ok && accountClaim.attempts === account.free) onAccountGuessed(email, accountClaim.attempts);
+          return;
+        }
+        await store.giveBack(keys[0].key);
+        if (email && res.statusCode < 300) await store.clear(`account:${email}`);
+        else if (accountKey) await store.giveBack(accountKey);
+      };
+      settle().catch((err) => logger.warn({ err }, 'sign-in counters not updated'));
+    });
+    next();
+  } catch (err) {
+    next(err);
+  }
+};
 
 /** Wrong current passwords on the profile page, per signed-in user: the same allowance as sign-in. */
 export const passwordChangeByUser = rateLimit({

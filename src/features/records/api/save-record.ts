@@ -8,10 +8,6 @@ export const createRecord = (input: RecordInput) => api('/api/records', { method
 export const updateRecord = ({ id, patch }: { id: number; patch: RecordUpdate }) =>
   api(`/api/records/${id}`, { method: 'PATCH', body: patch }, recordDtoSchema);
 
-/** DELETE retires the record (soft): it is kept and a curator can restore it. */
-export const retireRecordByDelete = ({ id, reason }: { id: number; reason?: string }) =>
-  api(`/api/records/${id}`, { method: 'DELETE', body: reason ? { reason } : {} }, recordDtoSchema);
-
 function useRecordMutation<I, O>(fn: (input: I) => Promise<O>) {
   const qc = useQueryClient();
   return useMutation({
@@ -22,4 +18,3 @@ function useRecordMutation<I, O>(fn: (input: I) => Promise<O>) {
 
 export const useCreateRecord = () => useRecordMutation(createRecord);
 export const useUpdateRecord = () => useRecordMutation(updateRecord);
-export const useRetireRecordByDelete = () => useRecordMutation(retireRecordByDelete);
