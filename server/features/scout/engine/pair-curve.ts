@@ -43,8 +43,17 @@ export interface EluentPrediction {
 /** z of a two-sided 90 % normal interval. */
 export const z90 = 1.645;
 
-export function rfInterval(rm: number, sd: number): [number, number] {
-  return [rmToRf(rm + z90 * sd), rmToRf(rm - z90 * sd)];
+/**
+ * 90 % interval of a new plate's Rf: the RM interval rm ± 1.645·sd turned into Rf, widened on each side in
+ * quadrature by `readingError`, the 90 % half-width of reading one spot (ScoutModel.readingError). RM spreads
+ * the error near the origin and the front thin, while a spot read off a plate is uncertain by a roughly
+ * constant Rf there too; without this, measurements below Rf 0.05 or above 0.9 fell inside only ~60 % of the time.
+ */
+export function rfInterval(rm: number, sd: number, readingError = 0): [number, number] {
+  const rf = rmToRf(rm);
+  const lower = rf - Math.hypot(rf - rmToRf(rm + z90 * sd), readingError);
+  const upper = rf + Math.hypot(rmToRf(rm - z90 * sd) - rf, readingError);
+  return [Math.max(0, lower), Math.min(1, upper)];
 }
 
 /**
@@ -64,6 +73,6 @@ export function predictInEluent(model: ScoutModel, adsorbent: Adsorbent, compone
   const found = pairCurve(model, adsorbent, pair, variant, kernel);
   if (!found) return null;
   const point = curveAt(found.curve, position.epsilon);
-  return { rf: rmToRf(point.rm), interval: rfInterval(point.rm, point.sd), rm: point.rm, sd: point.sd, epsilon: position.epsilon, pair: found.pair };
+  return { rf: rmToRf(point.rm), interval: rfInterval(point.rm, point.sd, model.readingError), rm: point.rm, sd: point.sd, epsilon: position.epsilon, pair: found.pair };
 }
 
