@@ -12,8 +12,8 @@ import type { SimilarCompound } from './neighbours';
 import type { RatioSuggestion } from './suggest-ratio';
 import type { ScoutMeasurement, ScoutOptions, ScoutQuery, SolventPair } from './types';
 
-/** Neighbours at least this similar count as "very close": their failures steer the first plate. */
-export const veryCloseSimilarity = 0.85;
+/** Neighbours at least this similar count as "very close": their failures steer the first plate (on the fused scale, para-substituted analogues score 0.77–0.82). */
+export const veryCloseSimilarity = 0.75;
 
 type Components = { solvent: string; parts: number }[];
 
