@@ -42,6 +42,8 @@ export const neighbourConditionSchema = z.object({
   outcomeReason: z.string().nullable(),
   additives: z.array(z.string()),
   visualisations: z.array(z.string()),
+  /** Invented demo record: shown with the demo mark. */
+  demo: z.boolean(),
 });
 export type NeighbourCondition = z.infer<typeof neighbourConditionSchema>;
 
@@ -101,6 +103,8 @@ export const firstPlateSchema = z.object({
   rf: z.number().nullable(),
   summary: z.string(),
   notes: z.array(z.string()),
+  /** The recorded plate is an invented demo record. */
+  demo: z.boolean(),
 });
 export type FirstPlate = z.infer<typeof firstPlateSchema>;
 
@@ -134,6 +138,7 @@ export const scoutWarningSchema = z.object({
   outcome: z.enum(['partial', 'failed']),
   notation: z.string(),
   message: z.string(),
+  demo: z.boolean(),
 });
 
 export const cautionSchema = z.object({ key: z.string(), title: z.string(), text: z.string() });

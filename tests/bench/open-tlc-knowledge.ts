@@ -79,7 +79,7 @@ function knowledgeOfRows(rows: Row[], path: string, idBase: number): KnowledgeSe
     }
     measurements.push({
       recordId: null, compoundId: id, phase: 'silica-tlc-f254', components: componentsOf(row), additives: [], mode: 'isocratic',
-      rf: Math.min(1, Math.max(0, Number(row.rf))), outcome: 'clean', outcomeReason: null, visualisations: [],
+      rf: Math.min(1, Math.max(0, Number(row.rf))), outcome: 'clean', outcomeReason: null, visualisations: [], demo: false,
     });
   }
   return { version: `open-tlc:${path}:${rows.length}`, compounds, measurements };

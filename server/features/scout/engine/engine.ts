@@ -100,7 +100,7 @@ export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOption
     const data = suggestion.found.curve.data;
     const closeInPair = ranked.filter((item) => item.similarity >= 0.7 && data.points.has(item.index)).length;
     confidence = judgeConfidence({ suggestion, basis, best: ranked[0], closeInPair, compoundsInPair: suggestion.found.borrowedFrom ? 0 : compoundsIn(data) });
-    evidence = suggestionEvidence(model, suggestion, adsorbent, targetRf, weighted, label.label);
+    evidence = suggestionEvidence(model, suggestion, adsorbent, targetRf, weighted, label.label, ranked);
     const pairOut = (pair: { weak: string; strong: string }) => ({ ...pair, label: pairLabel(pair) });
     output = {
       phase, pair: pairOut(suggestion.pair), parts: suggestion.parts, strongPercent: 100 * suggestion.strongFraction, notation: label.notation, label: label.label,

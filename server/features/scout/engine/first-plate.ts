@@ -117,7 +117,7 @@ export function firstPlate(input: FirstPlateInput): FirstPlate | null {
       source: 'recorded', recordId: recorded.recordId, phase: recorded.phase, phaseName: stationaryPhaseByKey(recorded.phase)?.name ?? recorded.phase,
       notation, components: recorded.components.map((part) => ({ ...part })), additives: headlineAdditives(recorded),
       strongPercent: (() => { const f = strongFractionOf(recorded.components, recorded.phase); return f === null ? null : 100 * f; })(),
-      rf: recorded.rf, summary: `Purified before: ${recordName(recorded)}${recorded.rf !== null ? `, Rf ${two(recorded.rf)}` : ''} in ${notation}.`,
+      rf: recorded.rf, demo: recorded.demo === true, summary: `Purified before: ${recordName(recorded)}${recorded.rf !== null ? `, Rf ${two(recorded.rf)}` : ''} in ${notation}.`,
       notes,
     };
   }
@@ -140,7 +140,7 @@ export function firstPlate(input: FirstPlateInput): FirstPlate | null {
   const fraction = strongFractionOf(draft.components, draft.phase);
   return {
     source: 'model', recordId: null, phase: draft.phase, phaseName: stationaryPhaseByKey(draft.phase)?.name ?? draft.phase, notation,
-    components: draft.components, additives: draft.additives, strongPercent: fraction === null ? null : 100 * fraction, rf,
+    components: draft.components, additives: draft.additives, strongPercent: fraction === null ? null : 100 * fraction, rf, demo: false,
     summary: `Scout's estimate: ${notation}${rf !== null ? `, expected Rf ${two(rf)}` : ''}.`,
     notes,
   };

@@ -69,6 +69,7 @@ export function conditionsOf(measurements: readonly ScoutMeasurement[]): Neighbo
       outcomeReason: measurement.outcomeReason,
       additives: measurement.additives.map((item) => item.additive),
       visualisations: [...measurement.visualisations],
+      demo: measurement.demo === true,
     }));
 }
 

@@ -11,6 +11,7 @@ export interface ScoutWarning {
   outcome: 'partial' | 'failed';
   notation: string;
   message: string;
+  demo: boolean;
 }
 
 /**
@@ -29,7 +30,7 @@ export function failureWarnings(model: ScoutModel, close: readonly SimilarCompou
         const who = compound.name ?? compound.smiles;
         const verdict = measurement.outcome === 'failed' ? 'Failed' : 'Only partly separated';
         return {
-          recordId: measurement.recordId, compoundId: compound.id, compoundName: compound.name, similarity, outcome: measurement.outcome as 'partial' | 'failed', notation,
+          recordId: measurement.recordId, demo: measurement.demo === true, compoundId: compound.id, compoundName: compound.name, similarity, outcome: measurement.outcome as 'partial' | 'failed', notation,
           message: `${verdict} for ${who} (similarity ${two(similarity)}) in ${notation}${measurement.outcomeReason ? `: ${measurement.outcomeReason}` : '.'}`,
         };
       });
