@@ -96,6 +96,8 @@ export const firstPlateSchema = z.object({
   phaseName: z.string(),
   /** "DCM : MeOH 10 : 1 + 1% Et3N". */
   notation: z.string(),
+  /** The heading: "EtOAc : hexanes 1 : 4 (20 % EtOAc) + 1% Et3N" (parts, % strong solvent, additives). */
+  label: z.string(),
   components: z.array(z.object({ solvent: z.string(), parts: z.number() })),
   additives: z.array(z.object({ additive: z.string(), label: z.string(), percent: z.number() })),
   strongPercent: z.number().nullable(),

@@ -5,7 +5,9 @@ import { rfToRm } from '../../../../shared/domain/rf';
 import type { FirstPlate } from '../../../../shared/schemas/scout';
 import { chooseAdditives, type HeadlineAdditive } from './headline-additives';
 import { adsorbentOf, positionOf } from './eluent-position';
-import { measurementNotation, ratioLabel, two } from './format';
+import { formatPercent, measurementNotation, ratioLabel, two } from './format';
+import { formatParts } from '../../../../shared/domain/format-number';
+import { requireSolvent } from '../../../../shared/catalogue/solvents';
 import { groupsQueryLacks, ionisableGroups, type IonisableGroups } from './ionisable';
 import type { ScoutModel } from './model';
 import type { SimilarCompound } from './neighbours';
@@ -50,6 +52,18 @@ function repeatsFailure(draft: Draft, failure: ScoutMeasurement): boolean {
   const b = strongFractionOf(failure.components, failure.phase);
   if (a === null || b === null) return true;
   return Math.max(a, b) <= 2 * Math.min(a, b) + 1e-9;
+}
+
+/** "EtOAc : hexanes 1 : 4 (20 % EtOAc) + 1% Et3N": parts, the strong solvent's % (as ratios are shown everywhere), then additives. */
+function headlineLabel(components: Components, additives: readonly HeadlineAdditive[], phase: string, notation: string): string {
+  const extras = additives.map((item) => ` + ${formatParts(item.percent)}% ${item.label}`).join('');
+  const present = components.filter((part) => part.parts > 0);
+  if (present.length === 1) return `100 % ${requireSolvent(present[0].solvent).label}${extras}`;
+  const adsorbent = adsorbentOf(phase);
+  const position = adsorbent ? positionOf(present, adsorbent) : null;
+  if (position?.kind !== 'pair') return notation;
+  const mixture = formatEluent({ components: present, additives: [], mode: 'isocratic', steps: [] });
+  return `${mixture} (${formatPercent(100 * position.strongFraction)} % ${requireSolvent(position.pair.strong).label})${extras}`;
 }
 
 const headlineAdditives = (measurement: ScoutMeasurement): HeadlineAdditive[] =>
@@ -115,7 +129,8 @@ export function firstPlate(input: FirstPlateInput): FirstPlate | null {
     if (suggestion) notes.push(`Second opinion, Scout's estimate from the neighbours: ${ratioLabel(suggestion.pair, suggestion.parts).notation} for Rf ${two(targetRf)} (expected ${two(suggestion.rf)}).`);
     return {
       source: 'recorded', recordId: recorded.recordId, phase: recorded.phase, phaseName: stationaryPhaseByKey(recorded.phase)?.name ?? recorded.phase,
-      notation, components: recorded.components.map((part) => ({ ...part })), additives: headlineAdditives(recorded),
+      notation, label: recorded.mode === 'gradient' ? notation : headlineLabel([...recorded.components], headlineAdditives(recorded), recorded.phase, notation),
+      components: recorded.components.map((part) => ({ ...part })), additives: headlineAdditives(recorded),
       strongPercent: (() => { const f = strongFractionOf(recorded.components, recorded.phase); return f === null ? null : 100 * f; })(),
       rf: recorded.rf, demo: recorded.demo === true, summary: `Purified before: ${recordName(recorded)}${recorded.rf !== null ? `, Rf ${two(recorded.rf)}` : ''} in ${notation}.`,
       notes,
@@ -140,6 +155,7 @@ export function firstPlate(input: FirstPlateInput): FirstPlate | null {
   const fraction = strongFractionOf(draft.components, draft.phase);
   return {
     source: 'model', recordId: null, phase: draft.phase, phaseName: stationaryPhaseByKey(draft.phase)?.name ?? draft.phase, notation,
+    label: headlineLabel(draft.components, draft.additives, draft.phase, notation),
     components: draft.components, additives: draft.additives, strongPercent: fraction === null ? null : 100 * fraction, rf, demo: false,
     summary: `Scout's estimate: ${notation}${rf !== null ? `, expected Rf ${two(rf)}` : ''}.`,
     notes,

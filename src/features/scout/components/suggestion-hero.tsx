@@ -24,7 +24,7 @@ export function SuggestionHero({ result }: { result: ScoutResult }) {
       <PlateStrip size="lg" title="Predicted plate" lanes={[{ label: suggestion.notation, spots: [], predicted: { rf: suggestion.predictedRf, low, high }, neighbours }]} />
       <div className="min-w-0 flex-1 space-y-2">
         <p className="text-xs uppercase tracking-wide text-ink-soft">First plate to run · {plate?.phaseName ?? suggestion.phase.name}</p>
-        <h2 id="scout-suggestion" className="figure break-words text-3xl font-semibold text-ink">{plate?.notation ?? suggestion.label}</h2>
+        <h2 id="scout-suggestion" className="figure break-words text-3xl font-semibold text-ink">{plate?.label ?? suggestion.label}</h2>
         {plate && (
           <p className="text-base" data-testid="scout-first-plate">
             {plate.summary}{' '}
