@@ -113,6 +113,19 @@ describe('Scout: additives by the query’s own groups (rule 3)', () => {
   });
 });
 
+describe('Scout: the confidence word follows the interval (rule 6)', () => {
+  it('when several molecules are scouted, then high never stands beside an interval wider than 0.30 Rf, nor medium beside one wider than 0.50', async () => {
+    const results = await Promise.all(['Fc1ccc(CN2CCN(C)CC2)cc1', 'OC(=O)Cc1ccc(Br)cc1', 'O=C(CCC)c1ccc2ccccc2c1', 'Brc1ccccn1'].map((structure) => scout({ structure })));
+    const widths = results.map((result) => ({ level: result.confidence.level, width: result.suggestion!.interval[1] - result.suggestion!.interval[0] }));
+    expect(widths).toHaveLength(4);
+    for (const { level, width } of widths) {
+      if (level === 'high') expect(width).toBeLessThanOrEqual(0.3 + 1e-9);
+      if (level === 'medium') expect(width).toBeLessThanOrEqual(0.5 + 1e-9);
+    }
+    for (const result of results) expect(result.confidence.reasons[0]).toMatch(/^The 90 % interval spans \d\.\d\d Rf/);
+  });
+});
+
 describe('Scout: never a recorded failure (rule 2)', () => {
   it('when the model would land on the compound’s own failed condition, then the headline differs and says which record failed', async () => {
     const result = await scout({ structure: 'O=C(CCC)c1ccc2ccccc2c1' });
