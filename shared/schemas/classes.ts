@@ -37,10 +37,10 @@ export const solventPairSchema = z.object({
 });
 
 /** Snyder's ε° of one record's eluent on its adsorbent (shared/domain/eluent-strength.ts). */
-export const strengthPointSchema = z.object({ recordId: z.number().int(), epsilon: z.number(), outcome: z.enum(outcomes) });
+export const strengthPointSchema = z.object({ recordId: z.number().int(), epsilon: z.number(), outcome: z.enum(outcomes), demo: z.boolean() });
 
 /** A record's % strong solvent and target Rf in the class's most used pair (for the scatter). */
-export const rfPointSchema = z.object({ recordId: z.number().int(), strongPercent: z.number(), rf: z.number(), outcome: z.enum(outcomes) });
+export const rfPointSchema = z.object({ recordId: z.number().int(), strongPercent: z.number(), rf: z.number(), outcome: z.enum(outcomes), demo: z.boolean() });
 
 /** `GET /api/classes/:key`. */
 export const classDetailSchema = z.object({

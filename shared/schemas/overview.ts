@@ -14,5 +14,7 @@ export const overviewSchema = z.object({
   contributors: growthSchema,
   /** Compound classes with at least one active record; new = first record this month. */
   classes: growthSchema,
+  /** Active records that are invented demo data (seeders/), so the counts can say so. */
+  demoRecords: z.number().int(),
 });
 export type Overview = z.infer<typeof overviewSchema>;

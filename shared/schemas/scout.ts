@@ -42,6 +42,8 @@ export const neighbourConditionSchema = z.object({
   outcomeReason: z.string().nullable(),
   additives: z.array(z.string()),
   visualisations: z.array(z.string()),
+  /** Invented demo record: shown with the demo mark. */
+  demo: z.boolean(),
 });
 export type NeighbourCondition = z.infer<typeof neighbourConditionSchema>;
 
@@ -82,6 +84,32 @@ export const suggestionSchema = z.object({
 });
 export type Suggestion = z.infer<typeof suggestionSchema>;
 
+/**
+ * The first plate to run, with its additive: the compound's own best clean record when it has one
+ * ('recorded'), else Scout's estimate ('model') in the pair close neighbours used, changed away from any
+ * recorded failure. `summary` says it in a sentence; `notes` say why (additive, failures avoided, pair).
+ */
+export const firstPlateSchema = z.object({
+  source: z.enum(['recorded', 'model']),
+  recordId: z.number().int().nullable(),
+  phase: z.string(),
+  phaseName: z.string(),
+  /** "DCM : MeOH 10 : 1 + 1% Et3N". */
+  notation: z.string(),
+  /** The heading: "EtOAc : hexanes 1 : 4 (20 % EtOAc) + 1% Et3N" (parts, % strong solvent, additives). */
+  label: z.string(),
+  components: z.array(z.object({ solvent: z.string(), parts: z.number() })),
+  additives: z.array(z.object({ additive: z.string(), label: z.string(), percent: z.number() })),
+  strongPercent: z.number().nullable(),
+  /** Recorded Rf ('recorded') or the expected Rf ('model'), when known. */
+  rf: z.number().nullable(),
+  summary: z.string(),
+  notes: z.array(z.string()),
+  /** The recorded plate is an invented demo record. */
+  demo: z.boolean(),
+});
+export type FirstPlate = z.infer<typeof firstPlateSchema>;
+
 export const additiveAdviceSchema = z.object({
   additive: z.string(),
   label: z.string(),
@@ -112,6 +140,7 @@ export const scoutWarningSchema = z.object({
   outcome: z.enum(['partial', 'failed']),
   notation: z.string(),
   message: z.string(),
+  demo: z.boolean(),
 });
 
 export const cautionSchema = z.object({ key: z.string(), title: z.string(), text: z.string() });
@@ -123,6 +152,8 @@ export const scoutResultSchema = z.object({
   }),
   targetRf: z.number(),
   knowledge: z.object({ compounds: z.number().int(), measurements: z.number().int() }),
+  /** The headline: what to run first (see firstPlateSchema); null when Scout has nothing to go on. */
+  firstPlate: firstPlateSchema.nullable(),
   suggestion: suggestionSchema.nullable(),
   /** Why there is no suggestion, when there is none. */
   noSuggestion: z.string().nullable(),

@@ -61,7 +61,10 @@ export function componentsOf(row: Row): { solvent: string; parts: number }[] {
 
 /** Reads a CSV with the columns of tlc-rf.csv into a knowledge set (phase: silica TLC plates); ids count from `idBase` + 1. */
 export function openTlcKnowledge(path: string, idBase = 0): KnowledgeSet {
-  const rows = parse(readFileSync(path), { columns: true, skip_empty_lines: true }) as Row[];
+  return knowledgeOfRows(parse(readFileSync(path), { columns: true, skip_empty_lines: true }) as Row[], path, idBase);
+}
+
+function knowledgeOfRows(rows: Row[], path: string, idBase: number): KnowledgeSet {
   const analysed = analyseSmiles([...new Set(rows.map((row) => row.smiles))]);
   const ids = new Map<string, number>();
   const compounds: ScoutCompound[] = [];
@@ -76,7 +79,7 @@ export function openTlcKnowledge(path: string, idBase = 0): KnowledgeSet {
     }
     measurements.push({
       recordId: null, compoundId: id, phase: 'silica-tlc-f254', components: componentsOf(row), additives: [], mode: 'isocratic',
-      rf: Math.min(1, Math.max(0, Number(row.rf))), outcome: 'clean', outcomeReason: null, visualisations: [],
+      rf: Math.min(1, Math.max(0, Number(row.rf))), outcome: 'clean', outcomeReason: null, visualisations: [], demo: false,
     });
   }
   return { version: `open-tlc:${path}:${rows.length}`, compounds, measurements };
@@ -89,4 +92,16 @@ export function withoutCompound(knowledge: KnowledgeSet, compoundId: number): Kn
     compounds: knowledge.compounds.filter((compound) => compound.id !== compoundId),
     measurements: knowledge.measurements.filter((measurement) => measurement.compoundId !== compoundId),
   };
+}
+
+/**
+ * The fixed compound split of the Scout README: distinct SMILES of the file numbered from 0 in file order, those
+ * with number mod 4 = 3 form the test part. Returns [training, test] knowledge sets (test ids from 1,000,001).
+ */
+export function fixedSplit(path: string): [KnowledgeSet, KnowledgeSet] {
+  const rows = parse(readFileSync(path), { columns: true, skip_empty_lines: true }) as Row[];
+  const order = new Map<string, number>();
+  for (const row of rows) if (!order.has(row.smiles)) order.set(row.smiles, order.size);
+  const isTest = (row: Row) => (order.get(row.smiles) as number) % 4 === 3;
+  return [knowledgeOfRows(rows.filter((row) => !isTest(row)), `${path}:train`, 0), knowledgeOfRows(rows.filter(isTest), `${path}:test`, 1_000_000)];
 }

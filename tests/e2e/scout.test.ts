@@ -23,8 +23,8 @@ describe('Scout in the browser', () => {
     await page.getByRole('button', { name: 'Scout conditions' }).click();
     const heading = page.locator('#scout-suggestion');
     await heading.waitFor({ timeout: 30_000 });
-    // A ratio as parts and as % of the strong solvent (LOOK.md), e.g. "EtOAc : hexanes 1 : 4 (20 % EtOAc)".
-    expect(await heading.textContent()).toMatch(/^\S+ : \S+ [\d.]+ : [\d.]+ \([\d.]+ % \S+\)$|^100 % /);
+    // A ratio as parts and as % of the strong solvent (LOOK.md), e.g. "EtOAc : hexanes 1 : 4 (20 % EtOAc)", then any additive ("+ 1% Et3N").
+    expect(await heading.textContent()).toMatch(/^\S+ : \S+ [\d.]+ : [\d.]+ \([\d.]+ % \S+\)( \+ [\d.]+% \S+)*$|^100 % /);
     await expect(page.getByTestId('scout-confidence').textContent()).resolves.toMatch(/Confidence: (high|medium|low)/);
     const card = (title: string) => page.locator('section').filter({ has: page.getByRole('heading', { name: title, exact: true }) }).last();
     const evidence = card('Why these numbers');
@@ -53,7 +53,7 @@ describe('Scout in the browser', () => {
     await page.getByRole('button', { name: 'Scout conditions' }).click();
     const heading = page.locator('#scout-suggestion');
     await heading.waitFor({ timeout: 30_000 });
-    expect(await heading.textContent()).toMatch(/^\S+ : \S+ [\d.]+ : [\d.]+ \([\d.]+ % \S+\)$|^100 % /);
+    expect(await heading.textContent()).toMatch(/^\S+ : \S+ [\d.]+ : [\d.]+ \([\d.]+ % \S+\)( \+ [\d.]+% \S+)*$|^100 % /);
     const expected = await page.locator('text=Expected Rf').locator('..').textContent();
     expect(expected).toMatch(/0\.\d\d/);
     await expect(page.getByTestId('scout-confidence').textContent()).resolves.toMatch(/Confidence: (high|medium|low)/);

@@ -36,7 +36,7 @@ describe('dependencies', () => {
     for (const tool of ['vite', 'jsdom']) {
       const theirs = (JSON.parse(readFileSync(`node_modules/${tool}/package.json`, 'utf8')) as { engines: { node: string } }).engines.node;
       const needed = theirs.split('||').map((part) => lowerBound(part)).filter((v) => v.length === 2).sort((a, b) => a[0] - b[0] || a[1] - b[1])[0];
-      expect(needed, `${tool} engines ${theirs}`).toBeDefined();
+      expect(needed, `${tool} engines ${theirs}`).toHaveLength(2);
       expect(ours[0] > needed[0] || (ours[0] === needed[0] && ours[1] >= needed[1]), `${tool} needs ${theirs}`).toBe(true);
     }
   });

@@ -5,6 +5,8 @@ import { cholesky, inverseDiagonal } from '../../server/features/scout/engine/li
 import { fitGp, predictGp } from '../../server/features/scout/engine/gaussian-process';
 import { nonIncreasing } from '../../server/features/scout/engine/query-curve';
 import { positionOf } from '../../server/features/scout/engine/eluent-position';
+import { fitLine, lineAt } from '../../server/features/scout/engine/curves';
+import { rfToRm, rmToRf } from '../../shared/domain/rf';
 import { mixtureStrength } from '../../shared/domain/eluent-strength';
 import type { KnowledgeSet, ScoutCompound, ScoutMeasurement, ScoutQuery } from '../../server/features/scout/engine/types';
 
@@ -52,6 +54,28 @@ describe('the algebra under the Scout regression', () => {
     expect(strength.ok && position?.epsilon).toBeCloseTo(strength.ok ? strength.epsilon : Number.NaN, 10);
     expect(positionOf([{ solvent: 'ethyl-acetate', parts: 1 }], 'silica')).toMatchObject({ kind: 'pure', epsilon: 0.48 });
     expect(positionOf([{ solvent: 'water', parts: 1 }, { solvent: 'acetonitrile', parts: 1 }], 'silica')).toBeNull();
+  });
+});
+
+describe('a retention curve that can bend (issue 26, rule 5)', () => {
+  it('when one compound ran at Rf 0.16, 0.41 and 0.70 in 1 : 5, 1 : 1 and 5 : 1 Et2O : hexane, then its own curve bends through all three while no straight line can', () => {
+    // A fact of the trade (common practice, no source) quoted in issue 26.
+    const plates = [[1, 5, 0.16], [1, 1, 0.41], [5, 1, 0.7]].map(([strong, weak, rf]) => {
+      const position = positionOf([{ solvent: 'diethyl-ether', parts: strong }, { solvent: 'hexanes', parts: weak }], 'silica');
+      return { epsilon: position!.epsilon, rm: rfToRm(rf), rf };
+    });
+    const centre = plates[1].epsilon;
+    const curve = fitLine(plates, -5, centre);
+    expect(curve.c).not.toBe(0);
+    for (const plate of plates) expect(Math.abs(rmToRf(lineAt(curve, plate.epsilon)) - plate.rf)).toBeLessThan(0.03);
+    // Any two points through a straight line miss the third: by 0.10–0.15 Rf in log φ (issue 26), by 0.099 or more in ε°.
+    for (const [i, j, k] of [[0, 1, 2], [0, 2, 1], [1, 2, 0]]) {
+      const slope = (plates[j].rm - plates[i].rm) / (plates[j].epsilon - plates[i].epsilon);
+      const straight = rmToRf(plates[i].rm + slope * (plates[k].epsilon - plates[i].epsilon));
+      expect(Math.abs(straight - plates[k].rf)).toBeGreaterThan(0.09);
+    }
+    // Two plates give a straight line (Soczewiński's relation with the pooled slope prior).
+    expect(fitLine(plates.slice(0, 2), -5, centre).c).toBe(0);
   });
 });
 
@@ -110,10 +134,11 @@ describe('Scout on a small knowledge set', () => {
       plate(item.id, 'methanol', 'dichloromethane', 1, 30, 0.12 + 0.02 * index), plate(item.id, 'methanol', 'dichloromethane', 1, 10, 0.3 + 0.02 * index), plate(item.id, 'methanol', 'dichloromethane', 1, 5, 0.5 + 0.02 * index),
     ]);
     const set: KnowledgeSet = { version: 'mixed', compounds: [ester, ...others, ...anilides], measurements: [...measurements, ...polarPlates] };
-    const result = scout(buildScoutModel(set), asQuery(anilides[0]));
+    const result = scout(buildScoutModel(set), { ...asQuery(anilides[0]), id: anilides[0].id });
     expect(result.suggestion?.pair).toMatchObject({ weak: 'dichloromethane', strong: 'methanol' });
-    expect(result.suggestion?.predictedRf).toBeGreaterThan(0.15);
-    expect(result.suggestion?.predictedRf).toBeLessThan(0.45);
+    // Rule 1 of issue 26: the compound's own plate nearest Rf 0.3 (1 : 10, Rf 0.30) comes first, not the model's guess.
+    expect(result.firstPlate).toMatchObject({ source: 'recorded', rf: 0.3 });
+    expect(result.firstPlate?.components).toEqual([{ solvent: 'methanol', parts: 1 }, { solvent: 'dichloromethane', parts: 10 }]);
   });
 
   it('when nothing has been recorded yet, then there is no suggestion, a reason why, and no neighbours', () => {

@@ -7,9 +7,9 @@ import type { KnowledgeSet } from '../../server/features/scout/engine/types';
 /**
  * A smaller version of `npm run eval:scout` on the open TLC data (Xu et al., Chem 2022, Apache-2.0;
  * tests/fixtures/open-tlc): one fixed split — every eighth compound held out, the model built from the others
- * only — through the same engine code the API uses. REFERENCE.md reports, on compounds kept back from this
- * dataset, about 0.18 for the structure-blind mean Rf per eluent and 0.14 for averaging the most similar
- * compounds in the same eluent; Scout must beat both clearly.
+ * only — through the same engine code the API uses, judged only on measured Rf values of compounds it did not
+ * train on. The structure-blind baseline (mean Rf per eluent over the training compounds) is computed in the same
+ * run (about 0.18); Scout must beat it clearly.
  */
 let summary: Summary;
 
@@ -29,8 +29,9 @@ describe('Scout on held-out compounds of the open TLC data', () => {
     expect(summary.mae).toBeLessThan(0.7 * summary.baselineMae);
   });
 
-  it('when the 90 % intervals are checked against the measured Rf, then at least 70 % of measurements fall inside', () => {
-    expect(summary.coverage).toBeGreaterThan(0.7);
+  it('when the 90 % intervals are checked against the measured Rf, then 85–95 % of measurements fall inside (issue 26, rule 5)', () => {
+    expect(summary.coverage).toBeGreaterThanOrEqual(0.85);
+    expect(summary.coverage).toBeLessThanOrEqual(0.95);
   });
 
   it('when the suggested hexane/EtOAc ratio for Rf 0.3 is run on each compound’s measured curve, then more than half land within Rf 0.15–0.45', () => {

@@ -86,17 +86,11 @@ describe('sources a reader can open', () => {
   });
 
   it('cites no "REFERENCE.md" anywhere in the code, seeds or tests', () => {
-    // Scout's engine and tests are being rewritten on another branch; its three mentions are listed for the lead.
-    const pending = [
-      'server/features/scout/engine/curves.ts',
-      'tests/server/scout.test.ts',
-      'tests/server/scout-open-data.test.ts',
-    ];
     const files = ['shared', 'server', 'src', 'seeders', 'tests'].flatMap((folder) => filesUnder(join(root, folder)));
     expect(files.length).toBeGreaterThan(200);
     const citing = files
       .map((path) => relative(root, path))
-      .filter((path) => !pending.includes(path) && path !== 'tests/shared/sources.test.ts')
+      .filter((path) => path !== 'tests/shared/sources.test.ts')
       .filter((path) => readFileSync(join(root, path), 'utf8').includes('REFERENCE.md'));
     expect(citing).toEqual([]);
   });

@@ -46,7 +46,7 @@ export async function classIndex(): Promise<ClassIndex> {
 async function classRecords(key: string): Promise<(ClassRecordRow & { compoundId: number; createdAt: Date })[]> {
   return sequelize.query(
     `SELECT r.id, r.compound_id AS "compoundId", r.outcome, r.stationary_phase AS "stationaryPhase", r.eluent, r.strong_percent AS "strongPercent",
-            r.target_rf AS "targetRf", r.created_at AS "createdAt",
+            r.target_rf AS "targetRf", r.created_at AS "createdAt", r.demo,
             coalesce((SELECT array_agg(v.method ORDER BY v.position) FROM record_visualisations v WHERE v.record_id = r.id), '{}') AS stains
      FROM condition_records r JOIN compounds c ON c.id = r.compound_id
      WHERE r.status = 'active' AND :key = ANY(c.classes)

@@ -15,6 +15,8 @@ export interface ClassRecordRow {
   strongPercent: number | null;
   targetRf: number | null;
   stains: string[];
+  /** An invented demo record: charts count and mark it. */
+  demo: boolean;
 }
 
 export const countOutcomes = (rows: { outcome: keyof OutcomeCounts }[]): OutcomeCounts => {
@@ -54,7 +56,7 @@ export function strengthOnSilica(rows: ClassRecordRow[]): ClassDetail['strength'
   let skipped = 0;
   for (const row of rows) {
     const strength = stationaryPhaseByKey(row.stationaryPhase)?.adsorbent === 'silica' ? mixtureStrength(row.eluent.components, 'silica') : null;
-    if (strength?.ok) points.push({ recordId: row.id, epsilon: strength.epsilon, outcome: row.outcome });
+    if (strength?.ok) points.push({ recordId: row.id, epsilon: strength.epsilon, outcome: row.outcome, demo: row.demo });
     else skipped += 1;
   }
   return { adsorbent: 'silica', points, skipped, source: `${strengthEquation}; adsorbent activity α = ${defaultActivity.silica.value} (${defaultActivity.silica.source})` };
@@ -67,7 +69,7 @@ export function rfInTopPair(rows: ClassRecordRow[]): ClassDetail['rf'] {
   const key = top.solvents.join('+');
   const points = rows
     .filter((row) => pairKey(row) === key && row.eluent.mode === 'isocratic' && row.targetRf !== null && row.strongPercent !== null)
-    .map((row) => ({ recordId: row.id, strongPercent: row.strongPercent as number, rf: row.targetRf as number, outcome: row.outcome }));
+    .map((row) => ({ recordId: row.id, strongPercent: row.strongPercent as number, rf: row.targetRf as number, outcome: row.outcome, demo: row.demo }));
   return points.length ? { pair: top.labels, points } : null;
 }
 

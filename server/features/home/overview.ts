@@ -12,13 +12,14 @@ interface Row {
   contributors_month: string;
   classes: string;
   classes_month: string;
+  demo_records: string;
 }
 
 /** Counts of the base (active records, their compounds, authors and classes), in total and new since the month began. */
 export async function overview(): Promise<Overview> {
   const [row] = await sequelize.query<Row>(
     `WITH month AS (SELECT date_trunc('month', now() AT TIME ZONE 'UTC') AT TIME ZONE 'UTC' AS start),
-     active AS (SELECT r.id, r.compound_id, r.author_id, r.created_at FROM condition_records r WHERE r.status = 'active'),
+     active AS (SELECT r.id, r.compound_id, r.author_id, r.created_at, r.demo FROM condition_records r WHERE r.status = 'active'),
      first_by_compound AS (SELECT compound_id, min(created_at) AS first FROM active GROUP BY compound_id),
      first_by_author AS (SELECT author_id, min(created_at) AS first FROM active GROUP BY author_id),
      first_by_class AS (
@@ -32,7 +33,8 @@ export async function overview(): Promise<Overview> {
        (SELECT count(*) FROM first_by_author) AS contributors,
        (SELECT count(*) FROM first_by_author, month WHERE first >= month.start) AS contributors_month,
        (SELECT count(*) FROM first_by_class) AS classes,
-       (SELECT count(*) FROM first_by_class, month WHERE first >= month.start) AS classes_month`,
+       (SELECT count(*) FROM first_by_class, month WHERE first >= month.start) AS classes_month,
+       (SELECT count(*) FROM active WHERE demo) AS demo_records`,
     { type: QueryTypes.SELECT },
   );
   const growth = (total: string, thisMonth: string) => ({ total: Number(total), thisMonth: Number(thisMonth) });
@@ -42,5 +44,6 @@ export async function overview(): Promise<Overview> {
     compounds: growth(row.compounds, row.compounds_month),
     contributors: growth(row.contributors, row.contributors_month),
     classes: growth(row.classes, row.classes_month),
+    demoRecords: Number(row.demo_records),
   };
 }

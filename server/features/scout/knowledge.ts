@@ -20,7 +20,7 @@ async function knowledgeSignature(): Promise<string> {
   return Object.values(row).join('|');
 }
 
-interface RecordRow { id: number; compound_id: number; stationary_phase: string; eluent: Eluent; outcome: ScoutMeasurement['outcome']; outcome_reason: string | null }
+interface RecordRow { id: number; compound_id: number; stationary_phase: string; eluent: Eluent; outcome: ScoutMeasurement['outcome']; outcome_reason: string | null; demo: boolean }
 interface CompoundRow {
   id: number; idcode: string; name: string | null; canonical_smiles: string; formula: string; mw: number; clogp: number; tpsa: number; hbd: number; hba: number;
   rotatable_bonds: number; aromatic_rings: number; stereocentres: number; charge: number; classes: string[]; fingerprint: Buffer | null;
@@ -31,7 +31,7 @@ const missingFingerprints = new Map<string, Int32Array>();
 /** Active condition records (not merged or retired) as Scout's knowledge set; stored fingerprints are used as they are. */
 export async function loadKnowledge(version: string): Promise<KnowledgeSet> {
   const records = await sequelize.query<RecordRow>(
-    `SELECT id, compound_id, stationary_phase, eluent, outcome, outcome_reason FROM condition_records WHERE status = 'active' ORDER BY id`, { type: QueryTypes.SELECT });
+    `SELECT id, compound_id, stationary_phase, eluent, outcome, outcome_reason, demo FROM condition_records WHERE status = 'active' ORDER BY id`, { type: QueryTypes.SELECT });
   const spots = await sequelize.query<{ record_id: number; rf: number }>(
     `SELECT s.record_id, s.rf FROM record_spots s JOIN condition_records r ON r.id = s.record_id WHERE r.status = 'active' AND s.role = 'target'`, { type: QueryTypes.SELECT });
   const stains = await sequelize.query<{ record_id: number; method: string }>(
@@ -44,7 +44,7 @@ export async function loadKnowledge(version: string): Promise<KnowledgeSet> {
   for (const stain of stains) stainsOf.set(stain.record_id, [...(stainsOf.get(stain.record_id) ?? []), stain.method]);
   const measurements: ScoutMeasurement[] = records.map((record) => ({
     recordId: record.id, compoundId: record.compound_id, phase: record.stationary_phase, components: record.eluent.components, additives: record.eluent.additives ?? [],
-    mode: record.eluent.mode ?? 'isocratic', rf: rfOf.get(record.id) ?? null, outcome: record.outcome, outcomeReason: record.outcome_reason, visualisations: stainsOf.get(record.id) ?? [],
+    mode: record.eluent.mode ?? 'isocratic', rf: rfOf.get(record.id) ?? null, outcome: record.outcome, outcomeReason: record.outcome_reason, visualisations: stainsOf.get(record.id) ?? [], demo: record.demo,
   }));
   const scoutCompounds: ScoutCompound[] = compounds.map((row) => ({
     id: row.id, name: row.name, smiles: row.canonical_smiles,

@@ -33,7 +33,7 @@ export async function findCandidates(indexes: SearchIndexes, input: CandidateInp
   if (input.mode !== 'text' && input.structure) {
     const query = await readStructureQuery(input.structure);
     if (input.mode === 'similar') {
-      const hits = indexes.structures.similar({ fingerprint: query.fingerprint }, { limit: input.limit, threshold: input.threshold });
+      const hits = indexes.structures.similar({ fingerprint: query.fingerprint, idcode: query.idcode, graph: query.graph }, { limit: input.limit, threshold: input.threshold });
       candidates.structure = {
         compoundIds: hits.map((hit) => hit.id),
         similarity: new Map(hits.map((hit) => [hit.id, hit.similarity])),

@@ -1,5 +1,6 @@
 import type { Molecule } from 'openchemlib';
 import { parentOf, parseStructure } from '../../chem';
+import { searchGraphMolecule } from '../../chem/fingerprint';
 import { popcount32 } from '../../chem/similarity-index';
 import { Compound } from '../../db/models';
 import { fingerprintOfIdcode } from '../../core/compound-fingerprints';
@@ -12,6 +13,9 @@ export interface StructureQuery {
   fingerprint: Int32Array;
   /** Isomeric SMILES of the parent, for the answer (so the page can show what was understood). */
   smiles: string;
+  /** The parent's ID code and search graph: similarity is 1 only for the same ID code, and re-ranked with atom pairs. */
+  idcode: string;
+  graph: Uint8Array;
 }
 
 const CACHE_SIZE = 1024;
@@ -39,7 +43,7 @@ export async function readStructureQuery(text: string): Promise<StructureQuery> 
   const idcode = parent.getIDCode();
   const query = Compound.findOne({ where: { idcode }, attributes: ['fingerprint'] })
     .then((stored) => fingerprintOfIdcode(idcode, stored?.fingerprint))
-    .then((fingerprint): StructureQuery => ({ input, fingerprint, smiles }));
+    .then((fingerprint): StructureQuery => ({ input, fingerprint, smiles, idcode, graph: searchGraphMolecule(parent) }));
   cache.set(key, query);
   query.catch(() => {
     if (cache.get(key) === query) cache.delete(key);

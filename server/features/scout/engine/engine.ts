@@ -17,6 +17,9 @@ import { stainAdvice } from './stain-advice';
 import { suggestBestPair, suggestRatio, type RatioSuggestion } from './suggest-ratio';
 import type { KnowledgeSet, ScoutOptions, ScoutQuery } from './types';
 import { failureWarnings } from './warnings';
+import { firstPlate } from './first-plate';
+import { ionisableGroups } from './ionisable';
+import { voteForPair } from './pair-vote';
 
 export type ScoutEngineResult = Omit<ScoutResult, 'query'>;
 
@@ -26,9 +29,10 @@ export class ScoutOptionError extends Error {}
 /** The model of a knowledge set; build once per version and reuse it. */
 export const buildScoutModel = (knowledge: KnowledgeSet) => new ScoutModel(knowledge);
 
-/** 'full' when a recorded compound is close (Tanimoto ≥ 0.5), otherwise descriptors only. */
+/** 'full' when a recorded compound is close (Tanimoto on the substructure keys the kernel uses ≥ 0.5), otherwise descriptors only. */
 export function chooseVariant(ranked: readonly SimilarCompound[]): ModelVariant {
-  return ranked[0] && ranked[0].similarity >= closeSimilarity ? 'full' : 'descriptors';
+  const best = ranked.reduce((max, item) => Math.max(max, item.keys ?? item.similarity), 0);
+  return best >= closeSimilarity ? 'full' : 'descriptors';
 }
 
 /** The query's predicted Rf in an eluent on a phase (for evaluation and checks); same model as `scout`. */
@@ -39,10 +43,10 @@ export function predictRf(model: ScoutModel, query: ScoutQuery, phase: string, c
   return predictInEluent(model, adsorbent, components, variant, model.queryKernel(query, variant));
 }
 
-function curvePoints(suggestion: RatioSuggestion, adsorbent: NonNullable<ReturnType<typeof adsorbentOf>>) {
+function curvePoints(model: ScoutModel, suggestion: RatioSuggestion, adsorbent: NonNullable<ReturnType<typeof adsorbentOf>>) {
   return ladderSteps().map((step) => {
     const point = curveAt(suggestion.found.curve, pairEpsilon(suggestion.pair, step.strongFraction, adsorbent));
-    const [lower, upper] = rfInterval(point.rm, point.sd);
+    const [lower, upper] = rfInterval(point.rm, point.sd, model.readingError);
     return { strongPercent: 100 * step.strongFraction, rf: rmToRf(point.rm), lower, upper };
   });
 }
@@ -61,7 +65,10 @@ export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOption
   const phase = choosePhase(model, close, options.phase);
   const adsorbent = adsorbentOf(phase.key);
   const kernel = model.queryKernel(query, variant);
+  const own = query.id !== null ? model.indexOf(query.id) : undefined;
+  const groups = ionisableGroups(query);
   let suggestion: RatioSuggestion | null = null;
+  let pairNote: string | null = null;
   let noSuggestion: string | null = null;
   if (!adsorbent) noSuggestion = `Scout's strength model (Snyder's ε°) covers silica and alumina only; for ${phase.name}, see the neighbours' conditions.`;
   else {
@@ -69,12 +76,21 @@ export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOption
       const pair = orderPair(options.solventPair.weak, options.solventPair.strong, adsorbent);
       if (!pair) throw new ScoutOptionError(`No strength order is known for ${options.solventPair.weak} and ${options.solventPair.strong} on ${adsorbent} (ε° missing or equal).`);
       suggestion = suggestRatio(model, adsorbent, pair, variant, kernel, targetRf);
-    } else suggestion = suggestBestPair(model, adsorbent, variant, kernel, targetRf);
+    } else {
+      const vote = voteForPair(model, ranked, adsorbent, own);
+      if (vote.pair) suggestion = suggestRatio(model, adsorbent, vote.pair, variant, kernel, targetRf);
+      if (suggestion) pairNote = vote.note;
+      else suggestion = suggestBestPair(model, adsorbent, variant, kernel, targetRf);
+    }
     if (!suggestion) noSuggestion = `No Rf has been recorded on ${adsorbent} yet; record a few plates and Scout will learn from them.`;
   }
   const weighted = suggestion ? contributions(model, suggestion.found.curve.data, variant, kernel, suggestion.point) : [];
   const shares = new Map(weighted.map((item) => [item.index, item.share]));
   const stains = stainAdvice(model, close, query.classes);
+  const headline = firstPlate({
+    model, query, ranked, suggestion, phase, options, targetRf, pairNote,
+    suggestIn: (pair) => (adsorbent ? suggestRatio(model, adsorbent, pair, variant, kernel, targetRf) : null),
+  });
   const basis = variant === 'full' ? 'neighbours-and-descriptors' : 'descriptors-only';
   let output: ScoutEngineResult['suggestion'] = null;
   let evidence: ScoutEngineResult['evidence'] = [];
@@ -84,25 +100,26 @@ export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOption
     const data = suggestion.found.curve.data;
     const closeInPair = ranked.filter((item) => item.similarity >= 0.7 && data.points.has(item.index)).length;
     confidence = judgeConfidence({ suggestion, basis, best: ranked[0], closeInPair, compoundsInPair: suggestion.found.borrowedFrom ? 0 : compoundsIn(data) });
-    evidence = suggestionEvidence(model, suggestion, adsorbent, targetRf, weighted, label.label);
+    evidence = suggestionEvidence(model, suggestion, adsorbent, targetRf, weighted, label.label, ranked);
     const pairOut = (pair: { weak: string; strong: string }) => ({ ...pair, label: pairLabel(pair) });
     output = {
       phase, pair: pairOut(suggestion.pair), parts: suggestion.parts, strongPercent: 100 * suggestion.strongFraction, notation: label.notation, label: label.label,
       epsilon: suggestion.epsilon, predictedRf: suggestion.rf, interval: suggestion.interval, reach: suggestion.reach, basis,
-      borrowedFrom: suggestion.found.borrowedFrom ? pairOut(suggestion.found.borrowedFrom) : null, curve: curvePoints(suggestion, adsorbent), components: label.components,
+      borrowedFrom: suggestion.found.borrowedFrom ? pairOut(suggestion.found.borrowedFrom) : null, curve: curvePoints(model, suggestion, adsorbent), components: label.components,
     };
   }
   return {
     targetRf,
     knowledge: { compounds: model.compounds.length, measurements: model.knowledge.measurements.length },
+    firstPlate: headline,
     suggestion: output,
     noSuggestion,
     neighbours: listNeighbours(model, ranked, k, shares),
-    additives: additiveAdvice(model, close, query.classes),
+    additives: additiveAdvice(model, close, query.classes).filter((item) => groups[item.purpose]),
     stains,
     confidence,
-    warnings: failureWarnings(model, close),
+    warnings: failureWarnings(model, own === undefined || close.some((item) => item.index === own) ? close : [{ index: own, similarity: 1 }, ...close], groups),
     evidence,
-    cautions: cautionsFor({ solventKeys: output?.components.map((part) => part.solvent) ?? [], stainKeys: stains.map((item) => item.stain), flashColumn: true, handlesSilica: true }),
+    cautions: cautionsFor({ solventKeys: (headline?.components ?? output?.components ?? []).map((part) => part.solvent), stainKeys: stains.map((item) => item.stain), flashColumn: true, handlesSilica: true }),
   };
 }

@@ -8,6 +8,8 @@ import type { ScoutModel } from './model';
 import { pairLabel } from './eluent-position';
 import type { WeightedContribution } from './prediction-weights';
 import type { RatioSuggestion } from './suggest-ratio';
+import type { SimilarCompound } from './neighbours';
+import { closeSimilarity } from './additive-advice';
 
 const sourceWords = { measured: 'measured there', 'own-line': 'read off its own line', 'other-pair': 'carried over from another pair' } as const;
 
@@ -22,8 +24,14 @@ function strengthSource(suggestion: RatioSuggestion, adsorbent: Adsorbent): stri
 }
 
 /** The "why" of every number Scout shows: ratio, predicted Rf and interval, ε°, similarities. */
-export function suggestionEvidence(model: ScoutModel, suggestion: RatioSuggestion, adsorbent: Adsorbent, targetRf: number, top: readonly WeightedContribution[], label: string): Evidence[] {
+export function suggestionEvidence(model: ScoutModel, suggestion: RatioSuggestion, adsorbent: Adsorbent, targetRf: number, top: readonly WeightedContribution[], label: string, ranked: readonly SimilarCompound[] = []): Evidence[] {
   const data = suggestion.found.curve.data;
+  const close = ranked.filter((item) => item.similarity >= closeSimilarity && data.points.has(item.index));
+  const plates = close.reduce((sum, item) => sum + (data.points.get(item.index)?.length ?? 0), 0);
+  const demo = close.reduce((sum, item) => sum + model.measurementsOf[item.index].filter((m) => m.demo && m.rf !== null).length, 0);
+  const plain = close.length > 0
+    ? `Fitted to ${plates} plate${plates === 1 ? '' : 's'} of ${close.length} close compound${close.length === 1 ? '' : 's'} in ${pairLabel(data.pair)} (similarity ≥ ${closeSimilarity}) and the descriptors of ${model.compounds.length} recorded compounds${demo > 0 ? `; ${demo} of the close compounds' plates are invented demo data` : ''}.`
+    : `No close compound was run in ${pairLabel(data.pair)}: estimated from the descriptors of ${model.compounds.length} recorded compounds.`;
   const anchors = suggestion.point.from.map(({ anchor }) => `${formatPercent(100 * data.anchors[anchor].fraction)} %`).join(' and ');
   const measured = model.anchorFits(data, suggestion.found.curve.variant).map((fit) => fit.training.sources.filter((source) => source === 'measured').length);
   const names = top.slice(0, 3).map((item) => {
@@ -31,6 +39,11 @@ export function suggestionEvidence(model: ScoutModel, suggestion: RatioSuggestio
     return `${compound.name ?? compound.smiles} (${Math.round(100 * item.share)} %, Rf ${two(item.rf)} ${sourceWords[item.source]})`;
   });
   const lines: Evidence[] = [
+    {
+      quantity: 'in plain words',
+      value: plain,
+      source: `A Gaussian-process regression of RM = log10((1 − Rf)/Rf) over the recorded compounds, at the compositions most plates were run at in ${pairLabel(data.pair)}, weighting each compound by its similarity (structure and polar groups) to yours; the curve between those compositions follows Snyder's solvent strength. The lines below give each number's working.`,
+    },
     {
       quantity: 'ratio',
       value: label,

@@ -47,6 +47,21 @@ export class ScoutModel {
     this.points = this.compounds.map((compound) => this.space.point(compound));
   }
 
+  private reading: number | null = null;
+
+  /**
+   * 90 % half-width of the error of reading one plate, in Rf, from the knowledge set's own repeats (the same
+   * compound twice in the same phase and eluent): 1.645 × the robust normal scale of one reading, median |ΔRf| ×
+   * 1.4826 / √2 (a difference of two readings carries two errors; the median keeps the few wild repeats from
+   * setting it). Fewer than 10 repeats: 0.05 (common practice: a spot's centre is read to about ±0.02–0.05; from
+   * memory). The 90th percentile of |ΔRf| / √2 (0.185 on the open data) over-covered near the origin and front
+   * (0.92–0.97 on the tuning run); this one (≈0.07) covers 0.86–0.87 in every Rf band there.
+   */
+  get readingError(): number {
+    if (this.reading === null) this.reading = repeatReadingError(this.measurementsOf);
+    return this.reading;
+  }
+
   indexOf(compoundId: number): number | undefined {
     return this.positionOf.get(compoundId);
   }
@@ -119,4 +134,22 @@ export class ScoutModel {
     const weights = variantWeights(variant);
     return { values: Float64Array.from(this.points, (other) => this.space.value(point, other, weights)), self: this.space.value(point, point, weights) };
   }
+}
+
+function repeatReadingError(measurementsOf: readonly ScoutMeasurement[][]): number {
+  const differences: number[] = [];
+  for (const list of measurementsOf) {
+    const byEluent = new Map<string, number[]>();
+    for (const item of list) {
+      if (item.rf === null || item.mode !== 'isocratic') continue;
+      const total = item.components.reduce((sum, part) => sum + part.parts, 0);
+      const key = `${item.phase}|${[...item.components].sort((a, b) => a.solvent.localeCompare(b.solvent)).map((part) => `${part.solvent}:${(part.parts / total).toFixed(3)}`).join('|')}|${item.additives.map((a) => a.additive).sort().join(',')}`;
+      byEluent.set(key, [...(byEluent.get(key) ?? []), item.rf]);
+    }
+    for (const rfs of byEluent.values()) for (let i = 1; i < rfs.length; i++) differences.push(Math.abs(rfs[i] - rfs[0]));
+  }
+  if (differences.length < 10) return 0.05;
+  differences.sort((a, b) => a - b);
+  // Robust normal scale of one reading: median |Δ| · 1.4826 / √2 (MAD estimate), times 1.645 for 90 %.
+  return (1.645 * 1.4826 * differences[Math.floor(0.5 * (differences.length - 1))]) / Math.SQRT2;
 }

@@ -23,7 +23,10 @@ export function stainAdvice(model: ScoutModel, close: readonly SimilarCompound[]
   const used = new Map<string, number>();
   for (const record of records) for (const method of new Set(record.visualisations)) if (stainByKey(method)) used.set(method, (used.get(method) ?? 0) + 1);
   const byClass = new Map(suggestStains(queryClasses).map((suggestion) => [suggestion.stain.key, suggestion]));
-  const keys = new Set([...byClass.keys(), ...used.keys()]);
+  const classes = new Set(queryClasses);
+  // A specific stain a neighbour was seen with (bromocresol green for acids) is advised only if the query has a class it shows.
+  const shows = (key: string) => stainByKey(key)!.selectivity !== 'specific' || stainByKey(key)!.detects.some((name) => classes.has(name));
+  const keys = new Set([...byClass.keys(), ...[...used.keys()].filter(shows)]);
   return [...keys]
     .map((key) => {
       const stain = stainByKey(key)!;

@@ -44,7 +44,7 @@ export function suggestRatio(model: ScoutModel, adsorbent: Adsorbent, pair: Solv
   const point = curveAt(found.curve, epsilon);
   return {
     pair: found.pair, found, parts: best.parts, strongFraction: best.strongFraction, exactStrongFraction, epsilon, point,
-    rf: rmToRf(point.rm), interval: rfInterval(point.rm, point.sd), reach,
+    rf: rmToRf(point.rm), interval: rfInterval(point.rm, point.sd, model.readingError), reach,
   };
 }
 

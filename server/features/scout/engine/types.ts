@@ -40,6 +40,8 @@ export interface ScoutMeasurement {
   outcome: Outcome;
   outcomeReason: string | null;
   visualisations: readonly string[];
+  /** An invented demo record (seeders/), shown marked as such wherever Scout cites it. */
+  demo?: boolean;
 }
 
 /** What the engine learns from: compounds and their measurements, with a version that changes when they do. */

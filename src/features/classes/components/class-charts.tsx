@@ -1,5 +1,13 @@
 import type { ClassDetail } from '../../../../shared/schemas/classes';
 import { binValues, Histogram, Scatter } from '../../../components/ui/chart';
+import { DemoMark } from '../../../components/ui/demo-mark';
+
+/** "12 of 40 records here are invented demo data", with the demo mark, when any are. */
+function DemoShare({ points }: { points: { demo: boolean }[] }) {
+  const demo = points.filter((point) => point.demo).length;
+  if (demo === 0) return null;
+  return <p className="text-xs text-ink-soft" data-testid="class-demo-share"><DemoMark /> {demo} of the {points.length} records charted are invented demo data.</p>;
+}
 
 const STEP = 0.05;
 
@@ -21,6 +29,7 @@ export function StrengthHistogram({ strength, className }: { strength: ClassDeta
         Computed from each record’s eluent (a gradient by its final mixture). {strength.source}.
         {strength.skipped > 0 && ` ${strength.skipped} record${strength.skipped === 1 ? '' : 's'} not on silica or with a solvent of unknown ε° left out.`}
       </figcaption>
+      <DemoShare points={strength.points} />
     </figure>
   );
 }
@@ -29,11 +38,14 @@ export function StrengthHistogram({ strength, className }: { strength: ClassDeta
 export function RfScatter({ rf }: { rf: NonNullable<ClassDetail['rf']> }) {
   const strong = rf.pair.join(' / ');
   return (
-    <Scatter
-      title={`Target Rf against eluent composition (${strong})`}
-      x={{ label: '% strong solvent', unit: '% v/v' }}
-      y={{ label: 'target Rf', domain: [0, 1] }}
-      points={rf.points.map((point) => ({ x: point.strongPercent, y: point.rf, label: `record ${point.recordId} (${point.outcome})`, highlight: point.outcome === 'failed' }))}
-    />
+    <div className="space-y-2">
+      <Scatter
+        title={`Target Rf against eluent composition (${strong})`}
+        x={{ label: '% strong solvent', unit: '% v/v' }}
+        y={{ label: 'target Rf', domain: [0, 1] }}
+        points={rf.points.map((point) => ({ x: point.strongPercent, y: point.rf, label: `record ${point.recordId} (${point.outcome}${point.demo ? ', demo data' : ''})`, highlight: point.outcome === 'failed' }))}
+      />
+      <DemoShare points={rf.points} />
+    </div>
   );
 }

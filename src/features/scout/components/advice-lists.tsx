@@ -1,4 +1,5 @@
 import { Link } from 'react-router-dom';
+import { DemoMark } from '../../../components/ui/demo-mark';
 import type { ScoutResult } from '../../../../shared/schemas/scout';
 
 /** Additives the neighbours needed (with counts) and stains likely to show the compound. */
@@ -39,21 +40,26 @@ export function WarningList({ warnings }: { warnings: ScoutResult['warnings'] })
     <ul className="space-y-1 text-sm">
       {warnings.map((warning, index) => (
         <li key={warning.recordId ?? index} className={warning.outcome === 'failed' ? 'text-failed' : 'text-partial'}>
-          {warning.message} {warning.recordId !== null && <Link to={`/records/${warning.recordId}`} className="text-front hover:underline">record #{warning.recordId}</Link>}
+          {warning.message} {warning.recordId !== null && <Link to={`/records/${warning.recordId}`} className="text-front hover:underline">record #{warning.recordId}</Link>} {warning.demo && <DemoMark />}
         </li>
       ))}
     </ul>
   );
 }
 
-/** "Why" lines: each number with the neighbours, equation or table it came from. */
+/** "Why" lines: each number in plain words, with the neighbours, equation or table it came from one click away. */
 export function EvidenceList({ evidence }: { evidence: ScoutResult['evidence'] }) {
   return (
     <dl className="space-y-2 text-sm">
       {evidence.map((line) => (
         <div key={line.quantity}>
           <dt className="font-medium text-ink">{line.quantity}: <span className="figure">{line.value}</span></dt>
-          <dd className="text-xs text-ink-soft">{line.source}</dd>
+          <dd className="text-xs text-ink-soft">
+            <details>
+              <summary className="min-h-6 cursor-pointer text-front">How this was worked out</summary>
+              <p className="mt-1">{line.source}</p>
+            </details>
+          </dd>
         </div>
       ))}
     </dl>

@@ -1,4 +1,5 @@
 import { Link } from 'react-router-dom';
+import { DemoMark } from '../../../components/ui/demo-mark';
 import { StructureImage } from '../../../components/structure-image';
 import { OutcomeBadge } from '../../../components/ui/outcome-badge';
 import type { Neighbour } from '../../../../shared/schemas/scout';
@@ -34,6 +35,7 @@ export function NeighboursTable({ neighbours }: { neighbours: Neighbour[] }) {
                     <span className="figure">{condition.notation}</span>
                     {condition.rf !== null && <span className="figure text-ink-soft">Rf {condition.rf.toFixed(2)}</span>}
                     {condition.recordId !== null && <Link to={`/records/${condition.recordId}`} className="text-front hover:underline">record #{condition.recordId}</Link>}
+                    {condition.demo && <DemoMark />}
                     {condition.outcomeReason && <span className="w-full text-xs text-ink-soft">{condition.outcomeReason}</span>}
                   </li>
                 ))}
