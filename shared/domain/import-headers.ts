@@ -33,6 +33,7 @@ const headerNames: Record<ImportField, readonly string[]> = {
   fractionSize: ['fraction size', 'fraction volume', 'fractions size'],
   fractionsPooled: ['fractions pooled', 'pooled fractions', 'pooled', 'fractions combined', 'combined fractions'],
   date: ['date', 'run date', 'date run', 'experiment date', 'when'],
+  recordId: ['record id', 'rfolio record id', 'rfolio id', 'record no', 'record number'],
   author: ['author', 'author name', 'chemist name', 'chemist', 'user', 'operator', 'researcher', 'initials', 'who', 'by', 'run by', 'recorded by'],
 };
 

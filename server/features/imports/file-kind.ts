@@ -4,8 +4,7 @@ export type FileKind = 'csv' | 'sdf';
 
 /** Magic numbers of files people upload by mistake instead of CSV, with what to do instead. */
 const refusedSignatures: { bytes: number[]; what: string }[] = [
-  { bytes: [0x50, 0x4b, 0x03, 0x04], what: 'a ZIP archive (an Excel .xlsx or OpenDocument workbook is one); save the sheet as CSV' },
-  { bytes: [0xd0, 0xcf, 0x11, 0xe0], what: 'an old Excel .xls workbook; save the sheet as CSV' },
+  { bytes: [0xd0, 0xcf, 0x11, 0xe0], what: 'an old Excel .xls workbook; save it as .xlsx or CSV' },
   { bytes: [0x25, 0x50, 0x44, 0x46], what: 'a PDF document' },
   { bytes: [0x89, 0x50, 0x4e, 0x47], what: 'a PNG image' },
   { bytes: [0xff, 0xd8, 0xff], what: 'a JPEG image' },
@@ -21,7 +20,7 @@ const startsWith = (buffer: Buffer, bytes: number[]) => bytes.every((byte, i) =>
  */
 export function decodeUpload(buffer: Buffer): string {
   for (const { bytes, what } of refusedSignatures) {
-    if (startsWith(buffer, bytes)) throw new UnsupportedMediaTypeError(`The file is ${what}. Upload CSV (comma, semicolon or tab separated) or SDF.`);
+    if (startsWith(buffer, bytes)) throw new UnsupportedMediaTypeError(`The file is ${what}. Upload an .xlsx workbook, CSV (comma, semicolon or tab separated) or SDF.`);
   }
   if (startsWith(buffer, [0xff, 0xfe])) return new TextDecoder('utf-16le').decode(buffer.subarray(2));
   if (startsWith(buffer, [0xfe, 0xff])) return new TextDecoder('utf-16be').decode(buffer.subarray(2));

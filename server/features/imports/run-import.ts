@@ -8,6 +8,7 @@ import { FingerprintsAhead } from './fingerprints-ahead';
 import { openUpload } from './open-upload';
 import { prepareRow, StructureCache, type PreparedRow } from './prepare-row';
 import type { SourceRow } from './source';
+import { rowContext } from './import-context';
 
 const running = new Map<number, Promise<void>>();
 
@@ -69,7 +70,8 @@ async function execute(importId: number): Promise<void> {
   const importRow = await patiently(() => Import.findByPk(importId, { rejectOnEmpty: true }));
   const stored = await patiently(() => blobStorage().get(importRow.fileBlobKey));
   if (!stored) throw new AppError(500, 'import_file_missing', 'The uploaded file is no longer stored.');
-  const source = await openUpload(stored.bytes, importRow.fileName);
+  const source = await openUpload(stored.bytes, importRow.fileName, { sheet: importRow.sheet ?? undefined, headerRow: importRow.headerRow ?? undefined });
+  const context = await patiently(() => rowContext(importRow.dateOrder));
   const structures = new StructureCache();
   const ahead = new FingerprintsAhead();
   let batchNumber = importRow.batchesCommitted;
@@ -84,7 +86,7 @@ async function execute(importId: number): Promise<void> {
     committing?.catch(() => undefined);
     const prepared: PreparedRow[] = [];
     for (const row of rows) {
-      prepared.push(prepareRow(row, importRow.mapping, importRow.format, structures));
+      prepared.push(prepareRow(row, importRow.mapping, importRow.format, structures, context));
       if (prepared.length % YIELD_EVERY === 0) await new Promise((resolve) => setImmediate(resolve));
     }
     await patiently(() => ahead.start(prepared));

@@ -7,6 +7,9 @@ import { ConflictError, NotFoundError } from '../../http/errors';
 import { blobStorage } from '../../storage';
 import { formatOf, mappingFor, openUpload, requireEssentialColumns } from './open-upload';
 import { isRunningHere, runImport } from './run-import';
+import { dateColumnOrder } from './import-context';
+import { presentImport } from './presenters';
+import type { ImportChoice, ImportDto } from '../../../shared/schemas/import';
 
 /** Rows committed per transaction. */
 export const IMPORT_BATCH_SIZE = 200;
@@ -19,23 +22,29 @@ export interface UploadedFile {
   name: string;
 }
 
+const contentTypes = {
+  sdf: 'chemical/x-mdl-sdfile', csv: 'text/csv', xlsx: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+} as const;
+
 export const sha256Of = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
 /**
  * Stores an upload (content-addressed bytes and an import row holding the mapping and the row count) and
  * starts the import in the background. 415/422 when the file cannot be imported, before anything is stored.
  */
-export async function createImport(file: UploadedFile, overrides: Record<string, string>, user: SessionUser): Promise<Import> {
-  const source = await openUpload(file.bytes, file.name);
+export async function createImport(file: UploadedFile, overrides: Record<string, string>, user: SessionUser, choice: ImportChoice = {}): Promise<Import> {
+  const source = await openUpload(file.bytes, file.name, choice);
   const mapping = mappingFor(source, overrides);
   requireEssentialColumns(mapping);
+  const dates = await dateColumnOrder(source, mapping, choice.dateOrder);
   const created = await sequelize.transaction(async (transaction) => {
-    const key = await blobStorage().put(file.bytes, source.kind === 'sdf' ? 'chemical/x-mdl-sdfile' : 'text/csv', transaction);
+    const key = await blobStorage().put(file.bytes, contentTypes[source.kind], transaction);
     const row = await Import.create(
       {
         userId: user.id, fileName: file.name, fileSha256: sha256Of(file.bytes), fileBlobKey: key, byteSize: file.bytes.length,
         format: formatOf(source, mapping), delimiter: source.delimiter, headers: source.headers, mapping, total: source.total,
         blankRows: source.blankRows, batchSize: IMPORT_BATCH_SIZE, heartbeatAt: new Date(),
+        sheet: source.sheet, headerRow: source.kind === 'sdf' ? null : source.headerRow, dateOrder: dates.order,
       },
       { transaction },
     );
@@ -96,4 +105,17 @@ export async function settle(id: number, ms: number): Promise<Import> {
     clearTimeout(timer);
   }
   return getImport(id);
+}
+
+/**
+ * An import as the API shows it, with its pace while it runs (rows a second since it started, seconds left at
+ * that pace) and whether it waits to be resumed (its work stopped with the database and is picked up again).
+ */
+export function presentLive(row: Import): ImportDto {
+  const dto = presentImport(row);
+  if (row.status !== 'running') return dto;
+  const elapsed = ((row.heartbeatAt ?? new Date()).getTime() - new Date(row.createdAt).getTime()) / 1000;
+  const rowsPerSecond = row.processed > 0 && elapsed > 0 ? Math.round((row.processed / elapsed) * 10) / 10 : 0;
+  const secondsLeft = rowsPerSecond > 0 ? Math.ceil((row.total - row.processed) / rowsPerSecond) : null;
+  return { ...dto, rate: { rowsPerSecond, secondsLeft }, waitingToResume: row.error !== null };
 }
