@@ -166,3 +166,16 @@ export const importPreviewSchema = z.object({
   }),
 });
 export type ImportPreview = z.infer<typeof importPreviewSchema>;
+
+/** What undoing an import would do (GET /api/imports/:id/undo-plan), said before the curator confirms. */
+export const undoPlanSchema = z.object({
+  importId: z.number().int(),
+  status: z.enum(importStatuses),
+  retire: z.number().int(),
+  edited: z.array(z.number().int()),
+  keptSurvivors: z.array(z.object({ id: z.number().int(), absorbed: z.array(z.number().int()) })),
+  mergedAway: z.array(z.object({ id: z.number().int(), into: z.number().int() })),
+  alreadyRetired: z.number().int(),
+  summary: z.string(),
+});
+export type UndoPlan = z.infer<typeof undoPlanSchema>;

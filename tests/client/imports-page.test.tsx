@@ -52,7 +52,7 @@ describe('the import page', () => {
     expect(screen.getByLabelText('Field for column "Solvent system"')).toHaveValue('eluent');
     expect(screen.getByText('Rf (column "Rf") 1.4 is outside (0, 1].')).toBeInTheDocument();
     expect(screen.getByText('indole')).toBeInTheDocument();
-    expect(screen.getByRole('button', { name: 'Import all 2 rows' })).toBeEnabled();
+    expect(screen.getByRole('button', { name: 'Import 1 of 2 rows (1 rejected)' })).toBeEnabled();
   });
 
   it('when a column is given a field another column holds, then the other column is released and the preview is asked again with that mapping', async () => {

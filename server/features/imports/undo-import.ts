@@ -3,26 +3,10 @@ import type { SessionUser } from '../../../shared/schemas/auth';
 import { sequelize } from '../../db/sequelize';
 import { AuditEntry, Import } from '../../db/models';
 import { ConflictError, NotFoundError } from '../../http/errors';
+import type { UndoPlan } from '../../../shared/schemas/import';
 
 /** The reason every record retired by undoing import `id` carries. */
 export const undoReason = (id: number) => `import ${id} undone`;
-
-export interface UndoPlan {
-  importId: number;
-  status: string;
-  /** Active records the undo retires (edited ones included, and listed in `edited`). */
-  retire: number;
-  /** Records it added that were edited since (by someone, after the import): retired too, restorable one by one. */
-  edited: number[];
-  /** Records it added that other records were merged into: kept, so the merged records' data stays whole. */
-  keptSurvivors: { id: number; absorbed: number[] }[];
-  /** Records it added that were merged into another record since: left merged (their data lives on in the survivor). */
-  mergedAway: { id: number; into: number }[];
-  /** Records it added already retired (by hand) since: left as they are. */
-  alreadyRetired: number;
-  /** The plan in words, as the import page shows it before the undo. */
-  summary: string;
-}
 
 /** The records of an import the undo leaves alone: survivors of a merge with records outside the undo. */
 const KEPT_SURVIVOR = `EXISTS (SELECT 1 FROM condition_records m WHERE m.merged_into_id = r.id AND m.status = 'merged')`;
@@ -51,7 +35,7 @@ export async function undoPlan(id: number, transaction?: Transaction): Promise<U
     mergedAway.length ? `leaves ${mergedAway.length} merged into other records as they are (${mergedAway.map((item) => `${item.id} → ${item.into}`).join(', ')})` : '',
     alreadyRetired ? `${alreadyRetired} already retired stay retired` : '',
   ].filter(Boolean);
-  return { importId: id, status: importRow.status, retire: retiring.length, edited, keptSurvivors, mergedAway, alreadyRetired, summary: `${parts.join('; ')}.` };
+  return { importId: id, status: importRow.status as UndoPlan['status'], retire: retiring.length, edited, keptSurvivors, mergedAway, alreadyRetired, summary: `${parts.join('; ')}.` };
 }
 
 /**
