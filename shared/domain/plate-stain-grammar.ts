@@ -26,7 +26,7 @@ const QUALIFIER = new RegExp(
     String.raw`after\s+heat(?:ing)?`, String.raw`with\s+heat(?:ing)?`, String.raw`heat\s*gun`, String.raw`hot\s*plate`,
     String.raw`heat(?:ed|ing)?`, String.raw`char(?:red|ring)?`, String.raw`\d{2,3}\s*°?\s*C\b`, String.raw`\d{2,3}\s*deg(?:rees)?\s*C?\b`,
     String.raw`(?:very\s+)?(?:weak(?:ly)?|faint(?:ly)?|strong(?:ly)?|intense|visible|barely(?:\s+visible)?|bright|dark|pale)`,
-    'dip(?:ped)?', 'spray(?:ed)?', 'stain(?:ed)?', 'developed', 'vis(?:ualised|ualized)?', 'only', 'lamp', 'light', 'nm', 'reagent', 'solution', 'Δ', 'then', 'on\\s+plate',
+    'dip(?:ped)?', 'spray(?:ed)?', 'stain(?:ed)?', 'developed', 'vis(?:ualised|ualized)?', 'only', 'lamp', 'light', 'nm', 'reagent', 'solution', 'chamber', 'tank', 'vapou?r', 'Δ', 'then', 'on\\s+plate',
   ]
     .map((word) => `(?:${word})`)
     .join('|'),
