@@ -110,7 +110,7 @@ describe('POST /api/imports refuses what it cannot read', () => {
     const broken = await upload(curator, xlsx, { name: 'history.xlsx' });
     expect(broken.status).toBe(422);
     expect(broken.body.error.message).toMatch(/workbook could not be read/);
-    for (const [content, name, reason] of [[xlsx, 'history.ods', /OpenDocument/], [png, 'plate.csv', /PNG image/], ['just some words\nand more words\n', 'notes.txt', /no comma, semicolon or tab/], ['', 'empty.csv', /empty/]] as const) {
+    for (const [content, name, reason] of [[xlsx, 'history.ods', /OpenDocument/], [png, 'plate.csv', /PNG image/], ['just some words\nand more words\n', 'notes.txt', /No line holds a comma, semicolon or tab/], ['', 'empty.csv', /empty/]] as const) {
       const res = await upload(curator, content, { name });
       expect(res.status, name).toBe(415);
       expect(res.body.error.message).toMatch(reason);

@@ -47,9 +47,10 @@ export function detectKind(text: string, fileName: string): FileKind {
     throw new UnsupportedMediaTypeError(`"${fileName}" is named as SDF but holds no molfile (no V2000/V3000 counts line).`);
   }
   if (text.trim() === '') throw new UnsupportedMediaTypeError('The file is empty.');
-  const firstLine = text.replace(/^\uFEFF/, '').slice(0, 20_000).split(/\r?\n/).find((line) => line.trim() !== '') ?? '';
-  if (!/[,;\t]/.test(firstLine)) {
-    throw new UnsupportedMediaTypeError('The first line holds no comma, semicolon or tab, so this is not a table with headers. Upload CSV (with a header row) or SDF.');
+  // Title and note lines may stand above the header row; one of the first 40 filled lines must be a table row.
+  const lines = text.replace(/^\uFEFF/, '').slice(0, 40_000).split(/\r?\n/).filter((line) => line.trim() !== '').slice(0, 40);
+  if (!lines.some((line) => /[,;\t]/.test(line))) {
+    throw new UnsupportedMediaTypeError('No line holds a comma, semicolon or tab, so this is not a table with headers. Upload CSV (with a header row), an .xlsx workbook or SDF.');
   }
   return 'csv';
 }
