@@ -85,12 +85,13 @@ function readEluent(row: MappedRow, notes: string[]): RecordInput['eluent'] {
 }
 
 /** A secondary value: its problem becomes a warning and the value is left out. */
-function softly<T>(read: () => T, warnings: string[], fallback: T): T {
+function softly<T>(read: () => T, warnings: string[], fallback: T, column?: string): T {
   try {
     return read();
   } catch (error) {
     if (!(error instanceof RowProblem)) throw error;
-    warnings.push(`${error.message} Left out; the row is kept.`);
+    const where = column && !error.message.includes('(column "') ? ` (column "${column}")` : '';
+    warnings.push(`${error.message.replace(/\.$/, '')}${where}. Left out; the row is kept.`);
     return fallback;
   }
 }
@@ -125,7 +126,7 @@ function readColumn(row: MappedRow, warnings: string[]): RecordInput['column'] {
     cartridgeSize: row.cell('cartridge').slice(0, 40) || null,
     silicaG: number('silica', 'Silica mass'),
     sampleMg: number('sampleMass', 'Sample mass'),
-    loadMethod: softly(() => must(readLoad(row.cell('loadMethod'))), warnings, null),
+    loadMethod: softly(() => must(readLoad(row.cell('loadMethod'))), warnings, null, row.header('loadMethod')),
     fractionMl: number('fractionSize', 'Fraction size'),
     fractionsPooled: row.cell('fractionsPooled').slice(0, 60) || null,
     yieldPercent,
@@ -153,12 +154,13 @@ export function readRow(source: SourceRow, mapping: Record<string, string>, form
       warnings.push(`The row has ${source.extraCells.length} cell(s) beyond the last header, not imported: "${source.extraCells.join('", "').slice(0, 120)}".`);
     }
     const column = readColumn(row, warnings);
-    let technique = softly(() => must(readTechnique(row.cell('technique'))), warnings, null);
+    let technique = softly(() => must(readTechnique(row.cell('technique'))), warnings, null, row.header('technique'));
+    if (!technique && row.cell('technique')) facts.sourceTexts.technique = row.cell('technique');
     if (!technique) {
       technique = column ? 'flash' : 'tlc';
       notes.push(`No technique read: recorded as ${technique === 'flash' ? 'a flash column (column details present)' : 'TLC'}.`);
     }
-    let outcome = softly(() => must(readOutcome(row.cell('outcome'))), warnings, null);
+    let outcome = softly(() => must(readOutcome(row.cell('outcome'))), warnings, null, row.header('outcome'));
     if (!outcome) {
       outcome = 'clean';
       if (row.cell('outcome')) facts.sourceTexts.outcome = row.cell('outcome');
