@@ -14,6 +14,7 @@ import { apiRouter } from './routes';
 import { stopMailCatcher } from '../mail/catcher';
 import { stopSearchIndexes } from '../features/search/process-indexes';
 import { noteArrival } from '../db/data-stamp';
+import { stopJobs } from '../jobs/queue';
 
 const clientDir = fileURLToPath(new URL('../../dist/client', import.meta.url));
 
@@ -61,7 +62,7 @@ export function createApp(): AppHandle {
   }
   app.use(errorHandler);
   const close = async () => {
-    await Promise.all([sessions.pool.end(), stopMailCatcher(), stopSearchIndexes()]);
+    await Promise.all([sessions.pool.end(), stopMailCatcher(), stopSearchIndexes(), stopJobs()]);
   };
   return { app, close };
 }

@@ -1,12 +1,12 @@
 import { createHash } from 'node:crypto';
-import { Op } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import { sequelize } from '../../db/sequelize';
 import { AuditEntry, Import, User } from '../../db/models';
 import { ConflictError, NotFoundError } from '../../http/errors';
 import { blobStorage } from '../../storage';
 import { formatOf, mappingFor, openUpload, requireEssentialColumns } from './open-upload';
-import { isRunningHere, runImport } from './run-import';
+import { IMPORT_JOB, isRunningHere, runImport } from './run-import';
 import { dateColumnOrder } from './import-context';
 import { presentImport } from './presenters';
 import type { ImportChoice, ImportDto } from '../../../shared/schemas/import';
@@ -51,14 +51,33 @@ export async function createImport(file: UploadedFile, overrides: Record<string,
     await AuditEntry.create({ actorId: user.id, action: 'import.create', subjectType: 'import', subjectId: String(row.id), details: { fileName: file.name, sha256: row.fileSha256, total: source.total } }, { transaction });
     return row;
   });
-  void runImport(created.id);
+  await runImport(created.id);
   return created;
 }
 
-/** Marks imports whose process stopped mid-way (no heartbeat for two minutes) as failed, so they can be resumed. */
+/** Ids among these whose job is still queued, running or due for a retry (the queue resumes them by itself). */
+async function withLiveJob(ids: number[]): Promise<Set<number>> {
+  try {
+    const rows = await sequelize.query<{ key: string }>(
+      `SELECT singleton_key AS key FROM rfolio_jobs.job WHERE name = :name AND singleton_key IN (:keys) AND state IN ('created', 'retry', 'active')`,
+      { replacements: { name: IMPORT_JOB, keys: ids.map((id) => `import-${id}`) }, type: QueryTypes.SELECT },
+    );
+    return new Set(rows.map((row) => Number(row.key.slice('import-'.length))));
+  } catch {
+    return new Set();
+  }
+}
+
+/**
+ * Marks imports whose work was lost (no heartbeat for two minutes and no job left to resume them) as failed, so
+ * they can be resumed by hand. An import whose job is still queued is left running: the queue resumes it.
+ */
 async function failStalled(): Promise<void> {
   const stalled = await Import.findAll({ where: { status: 'running', heartbeatAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) } }, attributes: ['id'] });
-  const ids = stalled.map((row) => row.id).filter((id) => !isRunningHere(id));
+  const candidates = stalled.map((row) => row.id).filter((id) => !isRunningHere(id));
+  if (candidates.length === 0) return;
+  const live = await withLiveJob(candidates);
+  const ids = candidates.filter((id) => !live.has(id));
   if (ids.length === 0) return;
   await Import.update(
     { status: 'failed', error: 'The import stopped without finishing (its server process ended).', finishedAt: new Date() },
@@ -88,21 +107,22 @@ export async function resumeImport(id: number, user: SessionUser): Promise<Impor
     { status: 'running', error: null, finishedAt: null, heartbeatAt: new Date() },
     { where: { id, status: 'failed' } },
   );
-  if (claimed === 0 || isRunningHere(id)) {
+  if (claimed === 0) {
     const current = await getImport(id);
     throw new ConflictError(`Only a failed import can be resumed; import ${id} is ${current.status}.`, { status: current.status });
   }
   await AuditEntry.create({ actorId: user.id, action: 'import.resume', subjectType: 'import', subjectId: String(id), details: {} });
-  void runImport(id);
+  await runImport(id);
   return getImport(id);
 }
 
-/** Waits up to `ms` for an import to finish in this process (a short file answers with its final counts). */
+/** Waits up to `ms` for an import to finish, whichever process runs it (a short file answers with its final counts). */
 export async function settle(id: number, ms: number): Promise<Import> {
-  if (ms > 0 && isRunningHere(id)) {
-    let timer: NodeJS.Timeout | undefined;
-    await Promise.race([runImport(id), new Promise((resolve) => (timer = setTimeout(resolve, ms)))]);
-    clearTimeout(timer);
+  const deadline = Date.now() + ms;
+  while (Date.now() < deadline) {
+    const current = await Import.findByPk(id, { attributes: ['status'] });
+    if (!current || current.status !== 'running') break;
+    await new Promise((resolve) => setTimeout(resolve, 50));
   }
   return getImport(id);
 }
@@ -117,5 +137,6 @@ export function presentLive(row: Import): ImportDto {
   const elapsed = ((row.heartbeatAt ?? new Date()).getTime() - new Date(row.createdAt).getTime()) / 1000;
   const rowsPerSecond = row.processed > 0 && elapsed > 0 ? Math.round((row.processed / elapsed) * 10) / 10 : 0;
   const secondsLeft = rowsPerSecond > 0 ? Math.ceil((row.total - row.processed) / rowsPerSecond) : null;
-  return { ...dto, rate: { rowsPerSecond, secondsLeft }, waitingToResume: row.error !== null };
+  const silent = Date.now() - (row.heartbeatAt ?? new Date()).getTime() > 60_000 && !isRunningHere(row.id);
+  return { ...dto, rate: { rowsPerSecond, secondsLeft }, waitingToResume: row.error !== null || silent };
 }
