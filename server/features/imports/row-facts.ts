@@ -27,6 +27,24 @@ export interface RowContext {
 
 type Technique = 'tlc' | 'flash' | 'prep_tlc';
 
+/** A group's sheet repeats the same plate and stain texts thousands of times: each distinct text is read once. */
+function remembered<A extends unknown[], R>(read: (...args: A) => R, limit = 20_000): (...args: A) => R {
+  const known = new Map<string, R>();
+  return (...args: A) => {
+    const key = JSON.stringify(args);
+    let found = known.get(key);
+    if (found === undefined) {
+      found = read(...args);
+      if (known.size >= limit) known.clear();
+      known.set(key, found);
+    }
+    return found;
+  };
+}
+
+const plateOf = remembered(readPlate);
+const stainsOf = remembered(readStains);
+
 /** Reads the plate or column medium; anything unread is a warning, never a rejection. */
 export function readPhase(row: MappedRow, technique: Technique, warnings: string[], notes: string[], facts: RowFacts) {
   const written = row.cell('phase');
@@ -36,7 +54,7 @@ export function readPhase(row: MappedRow, technique: Technique, warnings: string
     notes.push(`No stationary phase given: ${stationaryPhaseByKey(key)?.name} assumed.`);
     return { stationaryPhase: key, stationaryPhaseOther: null };
   }
-  const plate = readPlate(written, technique);
+  const plate = plateOf(written, technique);
   if (plate.key === null) {
     facts.sourceTexts.phase = written;
     warnings.push(`${column}: "${written}" is not a phase the catalogue knows; kept as a named "other" phase.`);
@@ -53,7 +71,7 @@ export function readPhase(row: MappedRow, technique: Technique, warnings: string
 export function readVisualisation(row: MappedRow, warnings: string[], facts: RowFacts): RecordInput['visualisation'] {
   const written = row.cell('stain');
   if (!written) return [];
-  const { items, unrecognised } = readStains(written);
+  const { items, unrecognised } = stainsOf(written);
   if (unrecognised.length > 0 || items.some((item) => item.note)) facts.sourceTexts.stain = written;
   if (unrecognised.length > 0) {
     const what = unrecognised.map((part) => `"${part}"`).join(', ');
