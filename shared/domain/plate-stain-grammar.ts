@@ -1,4 +1,4 @@
-import { resolvePhase, resolveStain } from '../catalogue/lookup';
+import { normaliseName, resolvePhase, stainIndex } from '../catalogue/lookup';
 import { stationaryPhaseByKey, stationaryPhases } from '../catalogue/stationary-phases';
 
 /**
@@ -18,6 +18,14 @@ export interface StainsRead {
   items: StainReading[];
   /** Parts of the text no stain was recognised in, as written. */
   unrecognised: string[];
+}
+
+/** Stains by normalised name, looked up exactly (the grammar tries many sub-phrases; fuzzy suggestions are not wanted). */
+let stainNames: Map<string, { key: string }> | null = null;
+function resolveStain(text: string): { ok: true; value: { key: string } } | { ok: false } {
+  stainNames ??= new Map(stainIndex.normalisedNames());
+  const found = stainNames.get(normaliseName(text));
+  return found ? { ok: true, value: found } : { ok: false };
 }
 
 /** Words that say how or how strongly a stain showed, kept as the item's note. */
