@@ -89,6 +89,19 @@ describe('when the server process running an import ends', () => {
   });
 });
 
+describe('after a database restart (issue 23 point 7)', () => {
+  it('the app says an import is waiting to resume while its job waits for the database', async () => {
+    const csv = `smiles,eluent,rf,notes\n${alcohol(28)},EtOAc/hexanes 1:5,0.3,${tag} waiting\n`;
+    const done = await settled(curator, (await upload(curator, csv, { name: 'waiting.csv' })).body.id);
+    expect(done).toMatchObject({ status: 'completed', waitingToResume: false });
+    // As the job leaves it while the database is away: still running, the wait recorded on it.
+    await Import.update({ status: 'running', finishedAt: null, error: 'The database became unavailable.', heartbeatAt: new Date() }, { where: { id: done.id } });
+    const seen = await curator.get(`/api/imports/${done.id}`);
+    expect(seen.body).toMatchObject({ status: 'running', waitingToResume: true, error: 'The database became unavailable.' });
+    await Import.update({ status: 'completed', finishedAt: new Date(), error: null }, { where: { id: done.id } });
+  });
+});
+
 describe('the lease an import job holds while it runs', () => {
   it('is refused to a second holder while the first runs, and free again once the first ends', async () => {
     const key = 900_000 + Math.floor(Math.random() * 1000);
