@@ -40,6 +40,9 @@ async function serve(options: { announce: boolean }) {
   if (options.announce && !usesMailCatcher() && !config.SMTP_HOST) logger.warn('SMTP_HOST is not set: invitations and password resets cannot be e-mailed.');
 
   const { app, close } = createApp();
+  // Work on background jobs (imports) here too, so an import a stopped process left is resumed by this one.
+  const { startJobs } = await import('./jobs/queue');
+  await startJobs().catch((error) => logger.warn({ err: error }, 'job queue not started; the first import starts it'));
   const server = createHttpServer(app);
   server.keepAliveTimeout = 65_000;
   server.listen(config.PORT, config.HOST, () => {

@@ -104,6 +104,8 @@ export function presentRecord(record: FullRecord, canEdit: boolean): RecordDto {
     retiredReason: record.retiredReason,
     retiredAt: iso(record.retiredAt),
     importId: record.importId,
+    recordedBy: record.recordedBy ?? null,
+    sourceTexts: record.sourceTexts ?? null,
     revision: record.revision,
     canEdit,
   };

@@ -15,6 +15,7 @@ import { apiRouter } from './routes';
 import { usesMailCatcher } from '../mail/send';
 import { stopSearchIndexes } from '../features/search/process-indexes';
 import { noteArrival } from '../db/data-stamp';
+import { stopJobs } from '../jobs/queue';
 
 const clientDir = fileURLToPath(new URL('../../dist/client', import.meta.url));
 
@@ -76,7 +77,7 @@ export function createApp(): AppHandle {
   const close = async () => {
     // The catcher (development dependencies) is loaded only where it can run: never in production.
     const stopCatcher = usesMailCatcher() ? import('../mail/catcher').then((catcher) => catcher.stopMailCatcher()) : undefined;
-    await Promise.all([sessions.pool.end(), stopCatcher, stopSearchIndexes()]);
+    await Promise.all([sessions.pool.end(), stopCatcher, stopSearchIndexes(), stopJobs()]);
   };
   return { app, close };
 }

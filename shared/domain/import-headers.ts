@@ -1,4 +1,4 @@
-import { resolveSolvent } from '../catalogue/lookup';
+import { normaliseName, solventIndex } from '../catalogue/lookup';
 import { IGNORE_COLUMN, type ImportField } from '../schemas/import';
 
 /**
@@ -33,6 +33,7 @@ const headerNames: Record<ImportField, readonly string[]> = {
   fractionSize: ['fraction size', 'fraction volume', 'fractions size'],
   fractionsPooled: ['fractions pooled', 'pooled fractions', 'pooled', 'fractions combined', 'combined fractions'],
   date: ['date', 'run date', 'date run', 'experiment date', 'when'],
+  recordId: ['record id', 'rfolio record id', 'rfolio id', 'record no', 'record number'],
   author: ['author', 'author name', 'chemist name', 'chemist', 'user', 'operator', 'researcher', 'initials', 'who', 'by', 'run by', 'recorded by'],
 };
 
@@ -63,6 +64,13 @@ for (const [field, names] of Object.entries(headerNames) as [ImportField, readon
   for (const name of names) fieldByKey.set(headerKey(name), field);
 }
 
+/** Solvents by normalised name, looked up exactly: a header is a solvent's name or not (no fuzzy suggestion, which is slow). */
+let solventNames: Map<string, { key: string }> | null = null;
+function solventNamed(text: string): { key: string } | undefined {
+  solventNames ??= new Map(solventIndex.normalisedNames());
+  return solventNames.get(normaliseName(text));
+}
+
 /** The target for one header: a field, `solvent:<key>` for a column named after a solvent, or "ignore". */
 export function detectTarget(header: string): string {
   const field =
@@ -70,8 +78,8 @@ export function detectTarget(header: string): string {
   if (field) return field;
   const withoutPercent = header.replace(/%|percent/gi, ' ');
   for (const candidate of [header, withoutPercent, words(withoutPercent).filter((word) => !trailingWords.has(word)).join(' ')]) {
-    const solvent = candidate.trim() ? resolveSolvent(candidate.trim()) : null;
-    if (solvent?.ok) return `solvent:${solvent.value.key}`;
+    const solvent = candidate.trim() ? solventNamed(candidate.trim()) : undefined;
+    if (solvent) return `solvent:${solvent.key}`;
   }
   return IGNORE_COLUMN;
 }

@@ -8,7 +8,7 @@ import { solventKeys } from '../catalogue/solvents';
 export const importFields = [
   'name', 'structure', 'phase', 'eluent', 'additive', 'rf', 'rfStartingMaterial', 'rfOther', 'stain',
   'technique', 'outcome', 'outcomeReason', 'notes', 'notebook', 'yield', 'columnDiameter', 'cartridge',
-  'silica', 'sampleMass', 'loadMethod', 'fractionSize', 'fractionsPooled', 'date', 'author',
+  'silica', 'sampleMass', 'loadMethod', 'fractionSize', 'fractionsPooled', 'date', 'author', 'recordId',
 ] as const;
 export type ImportField = (typeof importFields)[number];
 
@@ -19,7 +19,8 @@ export const importFieldLabels: Record<ImportField, string> = {
   outcomeReason: 'outcome reason', notes: 'notes', notebook: 'notebook reference', yield: 'yield (%)',
   columnDiameter: 'column diameter (mm)', cartridge: 'cartridge size', silica: 'silica (g)', sampleMass: 'sample (mg)',
   loadMethod: 'load (dry / liquid)', fractionSize: 'fraction size (mL)', fractionsPooled: 'fractions pooled',
-  date: 'date (kept in notes)', author: 'original author (kept in notes)',
+  date: 'date (the record\'s date)', author: 'person (a member, else "recorded by")',
+  recordId: 'record id (from this app\'s export)',
 };
 
 /** Fields that several columns may feed (their texts are joined); every other field takes one column. */
@@ -52,7 +53,16 @@ export const importMappingSchema = z
   });
 export type ImportMapping = z.infer<typeof importMappingSchema>;
 
-export const importFormats = ['csv', 'sdf', 'open-tlc'] as const;
+export const importFormats = ['csv', 'sdf', 'open-tlc', 'xlsx'] as const;
+export const dateOrders = ['dmy', 'mdy'] as const;
+
+/** Form fields of `POST /api/imports` beside the file and mapping: the sheet, header row and date order chosen. */
+export const importChoiceSchema = z.object({
+  sheet: z.string().max(200).optional(),
+  headerRow: z.coerce.number().int().min(1).max(100_000).optional(),
+  dateOrder: z.enum(dateOrders).optional(),
+});
+export type ImportChoice = z.infer<typeof importChoiceSchema>;
 export const importStatuses = ['running', 'completed', 'failed', 'undone'] as const;
 export const rowResults = ['accepted', 'rejected', 'duplicate'] as const;
 
@@ -71,6 +81,8 @@ export const importRowResultSchema = z.object({
   result: z.enum(rowResults),
   reason: z.string().nullable(),
   notes: z.array(z.string()),
+  /** What was only partly read (each names its column); the row still comes in. */
+  warnings: z.array(z.string()).default([]),
   values: z.record(z.string(), z.string()),
   record: z
     .object({ name: z.string().nullable(), smiles: z.string().nullable(), eluent: z.string(), rf: z.number().nullable(), phase: z.string() })
@@ -107,6 +119,15 @@ export const importDtoSchema = z.object({
   finishedAt: z.string().nullable(),
   undoneAt: z.string().nullable(),
   retiredRecords: z.number().int().nullable(),
+  /** Rows that came in with warnings (something only partly read). */
+  warned: z.number().int().default(0),
+  sheet: z.string().nullable().default(null),
+  headerRow: z.number().int().nullable().default(null),
+  dateOrder: z.enum(dateOrders).nullable().default(null),
+  /** Set while the import runs: rows per second so far and seconds left at that pace. */
+  rate: z.object({ rowsPerSecond: z.number(), secondsLeft: z.number().nullable() }).nullable().default(null),
+  /** True when the import waits for its job to be picked up again (after a database restart or a crash). */
+  waitingToResume: z.boolean().default(false),
 });
 export type ImportDto = z.infer<typeof importDtoSchema>;
 
@@ -124,9 +145,37 @@ export const importPreviewSchema = z.object({
   total: z.number().int(),
   blankRows: z.number().int(),
   rows: z.array(importRowResultSchema),
-  /** Counts over the previewed rows only. */
+  /** Counts over the first `checked` rows (every row of a file up to that size). */
+  checked: z.number().int(),
   accepted: z.number().int(),
   rejected: z.number().int(),
   duplicates: z.number().int(),
+  /** Accepted rows with warnings (they come in). */
+  warned: z.number().int(),
+  /** The workbook sheet read, every sheet, the header row's line or sheet row, and the filled rows above it. */
+  sheet: z.string().nullable(),
+  sheets: z.array(z.string()),
+  headerRow: z.number().int(),
+  titleRows: z.array(z.string()),
+  /** The date column's day/month order: decided, chosen, or to be chosen (`needsChoice`). */
+  dates: z.object({
+    column: z.string().nullable(),
+    order: z.enum(dateOrders).nullable(),
+    needsChoice: z.boolean(),
+    evidence: z.object({ dmy: z.number().int(), mdy: z.number().int(), ambiguous: z.number().int() }),
+  }),
 });
 export type ImportPreview = z.infer<typeof importPreviewSchema>;
+
+/** What undoing an import would do (GET /api/imports/:id/undo-plan), said before the curator confirms. */
+export const undoPlanSchema = z.object({
+  importId: z.number().int(),
+  status: z.enum(importStatuses),
+  retire: z.number().int(),
+  edited: z.array(z.number().int()),
+  keptSurvivors: z.array(z.object({ id: z.number().int(), absorbed: z.array(z.number().int()) })),
+  mergedAway: z.array(z.object({ id: z.number().int(), into: z.number().int() })),
+  alreadyRetired: z.number().int(),
+  summary: z.string(),
+});
+export type UndoPlan = z.infer<typeof undoPlanSchema>;

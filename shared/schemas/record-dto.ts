@@ -100,6 +100,10 @@ export const recordDtoSchema = recordListItemSchema.extend({
   retiredReason: z.string().nullable(),
   retiredAt: z.string().nullable(),
   importId: z.number().int().nullable(),
+  /** Who an imported sheet said recorded it, when no member matched. */
+  recordedBy: z.string().nullable().default(null),
+  /** Texts an import only partly recognised, as the sheet wrote them (field → text). */
+  sourceTexts: z.record(z.string(), z.string()).nullable().default(null),
   revision: z.number().int(),
   /** Whether the signed-in user may edit this record (owner, curator or admin). */
   canEdit: z.boolean(),

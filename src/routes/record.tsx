@@ -59,9 +59,15 @@ export default function RecordPage() {
             {record.status === 'retired' && <Chip tone="spot">retired</Chip>}
           </div>
           <p className="text-sm text-ink-soft">
-            By {record.author.name} on <time dateTime={record.createdAt}>{record.createdAt.slice(0, 10)}</time>
+            {record.recordedBy ? <>Recorded by {record.recordedBy} (imported by {record.author.name})</> : <>By {record.author.name}</>} on{' '}
+            <time dateTime={record.createdAt}>{record.createdAt.slice(0, 10)}</time>
             {record.notebookRef && <> · notebook <span className="figure">{record.notebookRef}</span></>}
           </p>
+          {record.sourceTexts && Object.keys(record.sourceTexts).length > 0 && (
+            <p className="text-xs text-ink-soft" data-testid="source-texts">
+              As the imported sheet wrote it: {Object.entries(record.sourceTexts).map(([field, text]) => `${field} “${text}”`).join(' · ')}
+            </p>
+          )}
           <div className="flex flex-wrap items-center gap-2">
             {record.canEdit && record.status !== 'merged' && <Link to={`/records/${record.id}/edit`} className={buttonClass('primary', 'sm')}>Edit record</Link>}
             <RetireControl record={record} />

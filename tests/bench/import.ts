@@ -72,10 +72,19 @@ async function main() {
     const created = (await res.json()) as { id: number; error?: unknown };
     if (!created.id) throw new Error(`upload refused: ${JSON.stringify(created)}`);
     let body: Record<string, unknown>;
+    let busy = 0;
     do {
       await new Promise((done) => setTimeout(done, 200));
-      body = (await (await call(`/api/imports/${created.id}`)).json()) as Record<string, unknown>;
+      const polled = await call(`/api/imports/${created.id}`);
+      // A loaded machine may answer a poll 503 (database busy); the import goes on, so poll again.
+      if (polled.status !== 200) {
+        busy++;
+        body = { status: 'running' };
+        continue;
+      }
+      body = (await polled.json()) as Record<string, unknown>;
     } while (body.status === 'running');
+    if (busy > 0) console.log(`(${busy} progress polls were answered busy and repeated)`);
     const seconds = (performance.now() - started) / 1000;
     const cpu = process.cpuUsage(cpuBefore);
     console.log(`${label}: ${seconds.toFixed(1)} s — status ${body.status}, ${body.total} rows: accepted ${body.accepted}, rejected ${body.rejected}, duplicates ${body.duplicates}, new compounds ${body.newCompounds} (${(ROWS / seconds).toFixed(0)} rows/s; CPU of this process incl. worker threads ${((cpu.user + cpu.system) / 1e6).toFixed(1)} s)`);

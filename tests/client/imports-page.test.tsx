@@ -12,10 +12,11 @@ function previewFor(mapping: Record<string, string>): ImportPreview {
   const values = { Compound: 'benzyl alcohol', SMILES: 'OCc1ccccc1', 'Solvent system': 'EtOAc/hexanes 1:4', Rf: '0,28', Remarks: 'fine' };
   return {
     dryRun: true, fileName: 'history.csv', sha256: 'a'.repeat(64), format: 'csv', delimiter: ';', headers, mapping, total: 2, blankRows: 1,
-    accepted: 1, rejected: 1, duplicates: 0,
+    accepted: 1, rejected: 1, duplicates: 0, checked: 2, warned: 0, sheet: null, sheets: [], headerRow: 1, titleRows: [],
+    dates: { column: null, order: null, needsChoice: false, evidence: { dmy: 0, mdy: 0, ambiguous: 0 } },
     rows: [
-      { row: 1, line: 2, result: 'accepted', reason: null, notes: ['No outcome given: recorded as clean.'], values, record: { name: 'benzyl alcohol', smiles: 'OCc1ccccc1', eluent: 'EtOAc : hexanes 1 : 4 (20% EtOAc)', rf: 0.28, phase: 'silica gel 40–63 µm' } },
-      { row: 2, line: 3, result: 'rejected', reason: 'Rf (column "Rf") 1.4 is outside (0, 1].', notes: [], values: { ...values, Compound: 'indole', Rf: '1,4' }, record: null },
+      { row: 1, line: 2, result: 'accepted', reason: null, notes: ['No outcome given: recorded as clean.'], warnings: [], values, record: { name: 'benzyl alcohol', smiles: 'OCc1ccccc1', eluent: 'EtOAc : hexanes 1 : 4 (20% EtOAc)', rf: 0.28, phase: 'silica gel 40–63 µm' } },
+      { row: 2, line: 3, result: 'rejected', reason: 'Rf (column "Rf") 1.4 is outside (0, 1].', notes: [], warnings: [], values: { ...values, Compound: 'indole', Rf: '1,4' }, record: null },
     ],
   };
 }
@@ -51,7 +52,7 @@ describe('the import page', () => {
     expect(screen.getByLabelText('Field for column "Solvent system"')).toHaveValue('eluent');
     expect(screen.getByText('Rf (column "Rf") 1.4 is outside (0, 1].')).toBeInTheDocument();
     expect(screen.getByText('indole')).toBeInTheDocument();
-    expect(screen.getByRole('button', { name: 'Import all 2 rows' })).toBeEnabled();
+    expect(screen.getByRole('button', { name: 'Import 1 of 2 rows (1 rejected)' })).toBeEnabled();
   });
 
   it('when a column is given a field another column holds, then the other column is released and the preview is asked again with that mapping', async () => {

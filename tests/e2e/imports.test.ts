@@ -58,7 +58,7 @@ describe('importing a messy spreadsheet in the browser', () => {
   });
 
   it('commits it and sees the counts; the rejected rows are listed with their reasons in the download', async () => {
-    await page.getByRole('button', { name: 'Import all 6 rows' }).click();
+    await page.getByRole('button', { name: 'Import 3 of 6 rows (3 rejected)' }).click();
     await page.getByText('Import finished: group-history.csv').waitFor();
     await expect(page.getByTestId('import-counts').textContent()).resolves.toMatch(/^3 added, 3 rejected, 0 duplicates of 6 rows/);
     importId = Number(await page.locator('tr[data-import-id]').first().getAttribute('data-import-id'));
@@ -81,7 +81,7 @@ describe('importing a messy spreadsheet in the browser', () => {
     await chooseFile('group-history-rejected-rows.csv', [head.join(';'), ...fixed].join('\n'));
     await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe('3 would be added · 0 rejected · 0 duplicates');
     await expect(page.getByLabel('Field for column "reason"').inputValue()).resolves.toBe('ignore');
-    await page.getByRole('button', { name: 'Import all 3 rows' }).click();
+    await page.getByRole('button', { name: 'Import 3 of 3 rows' }).click();
     await page.getByText('Import finished: group-history-rejected-rows.csv').waitFor();
     await expect(page.getByTestId('import-counts').textContent()).resolves.toMatch(/^3 added, 0 rejected, 0 duplicates of 3 rows/);
     await shot(page, 'imports-fixed-rows');

@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Op } from 'sequelize';
 import { createApp } from '../../server/http/app';
-import { Compound, ConditionRecord, Import, ImportRow } from '../../server/db/models';
+import { AuditEntry, Compound, ConditionRecord, Import, ImportRow } from '../../server/db/models';
+import { withLease } from '../../server/jobs/lease';
 import { importEvents } from '../../server/features/imports/commit-batch';
 import { agentFor, type Agent } from '../helpers/agent';
 import { runTag, settled, upload } from '../helpers/imports';
@@ -35,7 +36,7 @@ beforeAll(async () => {
 afterAll(close);
 
 describe('when PostgreSQL stops in the middle of an import', () => {
-  it('leaves nothing of the failed batch, says where it stopped, and a resume completes it with the right counts', async () => {
+  it('leaves nothing of the failed batch, waits for the database and resumes by itself with the right counts (issue 24 point 6)', async () => {
     let stoppedIn = 0;
     let stopped = false;
     // Inside batch 3's transaction, after its compounds, records and rejected rows are written, before it commits.
@@ -59,20 +60,13 @@ describe('when PostgreSQL stops in the middle of an import', () => {
     }
 
     expect(stoppedIn).toBe(importId);
-    const failed = await settled(curator, importId);
-    expect(failed).toMatchObject({ status: 'failed', total: ROWS, processed: 400, lastCommittedRow: 400, batchesCommitted: 2, rejected: 8 });
-    expect(failed.error).toBe('The database became unavailable.');
-    expect(failed.accepted + failed.rejected + failed.duplicates).toBe(400);
-    expect(await ConditionRecord.count({ where: { importId } })).toBe(failed.accepted);
-    expect(await ImportRow.count({ where: { importId, rowNumber: { [Op.gt]: 400 } } })).toBe(0);
-    // C40–C44 alcohols appear only in the failed batch: not one of them was left behind.
-    expect(await Compound.count({ where: { inputStructure: [40, 41, 42, 43, 44].map(alcohol) } })).toBe(0);
-
-    const resumed = await curator.post(`/api/imports/${importId}/resume`).set('X-CSRF-Token', curator.csrf);
-    expect(resumed.status).toBe(202);
+    // Nobody resumes it: the import's job waits for the database and continues from row 401.
     const done = await settled(curator, importId);
-    expect(done).toMatchObject({ status: 'completed', total: ROWS, processed: ROWS, rejected: 20, duplicates: 0, accepted: ROWS - 20, batchesCommitted: 5 });
+    expect(done).toMatchObject({ status: 'completed', total: ROWS, processed: ROWS, rejected: 20, duplicates: 0, accepted: ROWS - 20, error: null });
+    expect(await AuditEntry.count({ where: { action: 'import.resume', subjectId: String(importId) } })).toBe(0);
+    // Nothing of the batch the stop cut short was kept twice: every row once, the C40–C44 alcohols once each.
     expect(await ConditionRecord.count({ where: { importId } })).toBe(ROWS - 20);
+    expect(await ImportRow.count({ where: { importId, kind: 'rejected' } })).toBe(20);
     expect(await ConditionRecord.count({ where: { notes: { [Op.like]: `${tag} row %` } } })).toBe(ROWS - 20);
     expect(await Compound.count({ where: { inputStructure: [40, 41, 42, 43, 44].map(alcohol) } })).toBe(5);
   });
@@ -92,6 +86,28 @@ describe('when the server process running an import ends', () => {
     expect(await settled(curator, done.id)).toMatchObject({ status: 'completed', processed: 2, accepted: 2 });
     const again = await curator.post(`/api/imports/${done.id}/resume`).set('X-CSRF-Token', curator.csrf);
     expect(again.status).toBe(409);
+  });
+});
+
+describe('after a database restart (issue 23 point 7)', () => {
+  it('the app says an import is waiting to resume while its job waits for the database', async () => {
+    const csv = `smiles,eluent,rf,notes\n${alcohol(28)},EtOAc/hexanes 1:5,0.3,${tag} waiting\n`;
+    const done = await settled(curator, (await upload(curator, csv, { name: 'waiting.csv' })).body.id);
+    expect(done).toMatchObject({ status: 'completed', waitingToResume: false });
+    // As the job leaves it while the database is away: still running, the wait recorded on it.
+    await Import.update({ status: 'running', finishedAt: null, error: 'The database became unavailable.', heartbeatAt: new Date() }, { where: { id: done.id } });
+    const seen = await curator.get(`/api/imports/${done.id}`);
+    expect(seen.body).toMatchObject({ status: 'running', waitingToResume: true, error: 'The database became unavailable.' });
+    await Import.update({ status: 'completed', finishedAt: new Date(), error: null }, { where: { id: done.id } });
+  });
+});
+
+describe('the lease an import job holds while it runs', () => {
+  it('is refused to a second holder while the first runs, and free again once the first ends', async () => {
+    const key = 900_000 + Math.floor(Math.random() * 1000);
+    const inner = await withLease(key, async () => withLease(key, async () => 'second'));
+    expect(inner).toEqual({ value: null });
+    expect(await withLease(key, async () => 'again')).toEqual({ value: 'again' });
   });
 });
 

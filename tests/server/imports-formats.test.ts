@@ -103,11 +103,14 @@ describe('POST /api/imports refuses what it cannot read', () => {
     expect(res.body.error.message).toContain('20 MB');
   });
 
-  it('when the file is an Excel workbook, an image or plain text without columns, then 415 with the reason', async () => {
+  it('when the file is a broken workbook, then 422 with the reason; an .ods, an image or plain text without columns, then 415', async () => {
     const xlsx = Buffer.from([0x50, 0x4b, 0x03, 0x04, 0x14, 0x00, 0x06, 0x00]);
     const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
     const before = await Import.count();
-    for (const [content, name, reason] of [[xlsx, 'history.xlsx', /Excel/], [png, 'plate.csv', /PNG image/], ['just some words\nand more words\n', 'notes.txt', /no comma, semicolon or tab/], ['', 'empty.csv', /empty/]] as const) {
+    const broken = await upload(curator, xlsx, { name: 'history.xlsx' });
+    expect(broken.status).toBe(422);
+    expect(broken.body.error.message).toMatch(/workbook could not be read/);
+    for (const [content, name, reason] of [[xlsx, 'history.ods', /OpenDocument/], [png, 'plate.csv', /PNG image/], ['just some words\nand more words\n', 'notes.txt', /No line holds a comma, semicolon or tab/], ['', 'empty.csv', /empty/]] as const) {
       const res = await upload(curator, content, { name });
       expect(res.status, name).toBe(415);
       expect(res.body.error.message).toMatch(reason);

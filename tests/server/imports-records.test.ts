@@ -71,8 +71,9 @@ describe('eluent notations found in lab spreadsheets', () => {
 describe('an imported record and a contributed one', () => {
   const structure = 'O=C(OCc1ccccc1)c1ccc(F)cc1';
   const row = (notes: string) => `SMILES,Eluent,Rf,Stain,Phase,Technique,Outcome,Notes\n${structure},EtOAc/hexanes 1:9,0.41,"UV 254, KMnO4",silica,TLC,clean,${notes}\n`;
+  // A TLC row on "silica" is a silica TLC plate (issue 24), so the contributed twin names the plate.
   const body = (notes: string) => ({
-    structure, eluent: 'EtOAc/hexanes 1:9', spots: [{ role: 'target', rf: 0.41 }], visualisation: ['UV 254', 'KMnO4'], notes,
+    structure, eluent: 'EtOAc/hexanes 1:9', spots: [{ role: 'target', rf: 0.41 }], visualisation: ['UV 254', 'KMnO4'], notes, stationaryPhase: 'silica TLC plate',
   });
 
   it('when a row says what a contributed record says, then it counts as a duplicate (one content-hash definition)', async () => {

@@ -36,7 +36,7 @@ describe('an export imported back (both written by server/features/search/export
     const { records } = await loadListRecords(ids);
     const done = await importFile(curator, toCsv(records), { name: 'export.csv' });
     expect(done).toMatchObject({ status: 'completed', total: 3, rejected: 0, accepted: 0, duplicates: 3 });
-    expect(done.mapping).toMatchObject({ compound: 'name', smiles: 'structure', eluent: 'eluent', additive: 'additive', rf: 'rf', 'rf sm': 'rfStartingMaterial', stain: 'stain', 'record id': 'ignore', formula: 'ignore', 'MW (g/mol)': 'ignore' });
+    expect(done.mapping).toMatchObject({ compound: 'name', smiles: 'structure', eluent: 'eluent', additive: 'additive', rf: 'rf', 'rf sm': 'rfStartingMaterial', stain: 'stain', 'record id': 'recordId', formula: 'ignore', 'MW (g/mol)': 'ignore' });
   });
 
   it('when the SDF export is imported, then the same holds', async () => {

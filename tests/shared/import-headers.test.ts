@@ -24,7 +24,10 @@ describe('detectTarget', () => {
   it('ignores what it does not know, such as a CAS number or the reason column of a rejected-rows download', () => {
     expect(detectTarget('cas')).toBe('ignore');
     expect(detectTarget('reason')).toBe('ignore');
-    expect(detectTarget('record id')).toBe('ignore');
+  });
+
+  it('reads "record id" (the app\'s own export carries it) as the record id, so a re-imported export is recognised', () => {
+    expect(detectTarget('record id')).toBe('recordId');
   });
 });
 

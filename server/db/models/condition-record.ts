@@ -37,6 +37,10 @@ export class ConditionRecord extends Model<InferAttributes<ConditionRecord>, Inf
   declare purityNote: string | null;
   declare notebookRef: string | null;
   declare notes: string | null;
+  /** Who a sheet said recorded it, when no member matched (imports). */
+  declare recordedBy: CreationOptional<string | null>;
+  /** Texts an import only partly recognised, as written (field → text). */
+  declare sourceTexts: CreationOptional<Record<string, string> | null>;
   declare status: CreationOptional<RecordStatus>;
   declare mergedIntoId: CreationOptional<number | null>;
   declare retiredReason: CreationOptional<string | null>;
@@ -81,6 +85,8 @@ ConditionRecord.init(
     purityNote: text(),
     notebookRef: text(),
     notes: text(),
+    recordedBy: text(),
+    sourceTexts: { type: DataTypes.JSONB, allowNull: true },
     status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'active' },
     mergedIntoId: { type: DataTypes.INTEGER, allowNull: true },
     retiredReason: text(),

@@ -9,6 +9,8 @@ export class ImportRow extends Model<InferAttributes<ImportRow>, InferCreationAt
   declare line: number;
   declare cells: Record<string, string>;
   declare reason: string;
+  /** 'rejected': the row was not imported; 'warning': it was, and `reason` says what was only partly read. */
+  declare kind: CreationOptional<'rejected' | 'warning'>;
 }
 
 ImportRow.init(
@@ -19,6 +21,7 @@ ImportRow.init(
     line: { type: DataTypes.INTEGER, allowNull: false },
     cells: { type: DataTypes.JSONB, allowNull: false },
     reason: { type: DataTypes.TEXT, allowNull: false },
+    kind: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'rejected' },
   },
   { sequelize, tableName: 'import_rows', modelName: 'ImportRow', timestamps: false },
 );

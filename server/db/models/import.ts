@@ -2,7 +2,7 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import { sequelize } from '../sequelize';
 
 export type ImportStatus = 'running' | 'completed' | 'failed' | 'undone';
-export type ImportFileFormat = 'csv' | 'sdf' | 'open-tlc';
+export type ImportFileFormat = 'csv' | 'sdf' | 'open-tlc' | 'xlsx';
 
 /**
  * One upload of a group's history: the file (SHA-256, bytes in stored_blobs), its mapping, how far the
@@ -38,6 +38,10 @@ export class Import extends Model<InferAttributes<Import>, InferCreationAttribut
   declare undoneAt: CreationOptional<Date | null>;
   declare undoneBy: CreationOptional<number | null>;
   declare retiredRecords: CreationOptional<number | null>;
+  declare warned: CreationOptional<number>;
+  declare sheet: CreationOptional<string | null>;
+  declare headerRow: CreationOptional<number | null>;
+  declare dateOrder: CreationOptional<'dmy' | 'mdy' | null>;
 }
 
 /** A fresh definition per column: Sequelize writes the column name into the object it is given. */
@@ -73,6 +77,10 @@ Import.init(
     finishedAt: { type: DataTypes.DATE, allowNull: true },
     undoneAt: { type: DataTypes.DATE, allowNull: true },
     undoneBy: { type: DataTypes.INTEGER, allowNull: true },
+    warned: count(),
+    sheet: { type: DataTypes.TEXT, allowNull: true },
+    headerRow: { type: DataTypes.INTEGER, allowNull: true },
+    dateOrder: { type: DataTypes.TEXT, allowNull: true },
     retiredRecords: { type: DataTypes.INTEGER, allowNull: true },
   },
   { sequelize, tableName: 'imports', modelName: 'Import' },

@@ -1,7 +1,9 @@
 import { Readable } from 'node:stream';
 import { parse, CsvError } from 'csv-parse';
 import { UnprocessableError } from '../../http/errors';
-import { uniqueHeaders, type ImportSource, type SourceRow } from './source';
+import { headerScore } from '../../../shared/domain/import-table';
+import type { ImportSource } from './source';
+import { tableSource, type TableRow } from './table-source';
 
 export const delimiters = [',', ';', '\t'] as const;
 
@@ -58,41 +60,17 @@ async function* records(text: string, delimiter: string): AsyncGenerator<{ cells
   }
 }
 
-const isBlank = (cells: readonly string[]) => cells.every((cell) => cell.trim() === '');
-
 /**
- * Opens CSV text for import: sniffs the delimiter, reads the header row and counts the data rows in a
- * first streaming pass (csv-parse: BOM, quoted fields, embedded delimiters and line breaks). Rows are
- * then streamed again on demand. A malformed file (e.g. an unclosed quote) is refused with 422.
+ * Opens CSV text for import: sniffs the delimiter, reads every record (csv-parse: BOM, quoted fields,
+ * embedded delimiters and line breaks) and finds the header row as for a workbook, so title rows above it
+ * are skipped (or takes the line the user chose). A malformed file (e.g. an unclosed quote) is refused with 422.
  */
-export async function openCsv(text: string): Promise<ImportSource> {
-  const delimiter = sniffDelimiter(text);
-  let headers: string[] | null = null;
-  let total = 0;
-  let blankRows = 0;
-  for await (const { cells } of records(text, delimiter)) {
-    if (headers === null) {
-      if (isBlank(cells)) continue;
-      headers = uniqueHeaders(cells);
-    } else if (isBlank(cells)) blankRows++;
-    else total++;
-  }
-  if (headers === null) throw new UnprocessableError('The file holds no header row.');
-  const columns = headers;
-  async function* rows(after = 0): AsyncGenerator<SourceRow> {
-    let seenHeader = false;
-    let row = 0;
-    for await (const { cells, line } of records(text, delimiter)) {
-      if (isBlank(cells)) continue;
-      if (!seenHeader) {
-        seenHeader = true;
-        continue;
-      }
-      row++;
-      if (row <= after) continue;
-      const values = Object.fromEntries(columns.map((header, index) => [header, cells[index] ?? '']));
-      yield { row, line, values, extraCells: cells.slice(columns.length).filter((cell) => cell.trim() !== '') };
-    }
-  }
-  return { kind: 'csv', delimiter, headers: columns, total, blankRows, rows };
+export async function openCsv(text: string, choice: { headerRow?: number } = {}): Promise<ImportSource> {
+  const body = text.replace(/^\uFEFF/, '');
+  const lines = body.split(/\r?\n/);
+  const headerGuess = lines.findIndex((line) => headerScore(line.split(/[,;\t]/)) > 0);
+  const delimiter = sniffDelimiter(lines.slice(Math.max(0, headerGuess)).join('\n'));
+  const table: TableRow[] = [];
+  for await (const { cells, line } of records(text, delimiter)) table.push({ cells, line });
+  return tableSource('csv', table, { delimiter, headerLine: choice.headerRow });
 }

@@ -4,8 +4,7 @@ export type FileKind = 'csv' | 'sdf';
 
 /** Magic numbers of files people upload by mistake instead of CSV, with what to do instead. */
 const refusedSignatures: { bytes: number[]; what: string }[] = [
-  { bytes: [0x50, 0x4b, 0x03, 0x04], what: 'a ZIP archive (an Excel .xlsx or OpenDocument workbook is one); save the sheet as CSV' },
-  { bytes: [0xd0, 0xcf, 0x11, 0xe0], what: 'an old Excel .xls workbook; save the sheet as CSV' },
+  { bytes: [0xd0, 0xcf, 0x11, 0xe0], what: 'an old Excel .xls workbook; save it as .xlsx or CSV' },
   { bytes: [0x25, 0x50, 0x44, 0x46], what: 'a PDF document' },
   { bytes: [0x89, 0x50, 0x4e, 0x47], what: 'a PNG image' },
   { bytes: [0xff, 0xd8, 0xff], what: 'a JPEG image' },
@@ -21,7 +20,7 @@ const startsWith = (buffer: Buffer, bytes: number[]) => bytes.every((byte, i) =>
  */
 export function decodeUpload(buffer: Buffer): string {
   for (const { bytes, what } of refusedSignatures) {
-    if (startsWith(buffer, bytes)) throw new UnsupportedMediaTypeError(`The file is ${what}. Upload CSV (comma, semicolon or tab separated) or SDF.`);
+    if (startsWith(buffer, bytes)) throw new UnsupportedMediaTypeError(`The file is ${what}. Upload an .xlsx workbook, CSV (comma, semicolon or tab separated) or SDF.`);
   }
   if (startsWith(buffer, [0xff, 0xfe])) return new TextDecoder('utf-16le').decode(buffer.subarray(2));
   if (startsWith(buffer, [0xfe, 0xff])) return new TextDecoder('utf-16be').decode(buffer.subarray(2));
@@ -48,9 +47,10 @@ export function detectKind(text: string, fileName: string): FileKind {
     throw new UnsupportedMediaTypeError(`"${fileName}" is named as SDF but holds no molfile (no V2000/V3000 counts line).`);
   }
   if (text.trim() === '') throw new UnsupportedMediaTypeError('The file is empty.');
-  const firstLine = text.replace(/^\uFEFF/, '').slice(0, 20_000).split(/\r?\n/).find((line) => line.trim() !== '') ?? '';
-  if (!/[,;\t]/.test(firstLine)) {
-    throw new UnsupportedMediaTypeError('The first line holds no comma, semicolon or tab, so this is not a table with headers. Upload CSV (with a header row) or SDF.');
+  // Title and note lines may stand above the header row; one of the first 40 filled lines must be a table row.
+  const lines = text.replace(/^\uFEFF/, '').slice(0, 40_000).split(/\r?\n/).filter((line) => line.trim() !== '').slice(0, 40);
+  if (!lines.some((line) => /[,;\t]/.test(line))) {
+    throw new UnsupportedMediaTypeError('No line holds a comma, semicolon or tab, so this is not a table with headers. Upload CSV (with a header row), an .xlsx workbook or SDF.');
   }
   return 'csv';
 }

@@ -5,12 +5,20 @@ import { openCsv } from './csv-source';
 import { decodeUpload, detectKind } from './file-kind';
 import type { ImportFormat } from './read-row';
 import { openSdf } from './sdf-source';
+import { isZip, openWorkbook } from './workbook-source';
 import type { ImportSource } from './source';
 
-/** Decodes and opens an uploaded file (CSV or SDF, told from its content); 415 or 422 with the reason otherwise. */
-export async function openUpload(bytes: Buffer, fileName: string): Promise<ImportSource> {
+/** Which sheet and header row to read (by default the ones that look like the table). */
+export interface TableChoice {
+  sheet?: string;
+  headerRow?: number;
+}
+
+/** Decodes and opens an uploaded file (.xlsx, CSV or SDF, told from its content); 415 or 422 with the reason otherwise. */
+export async function openUpload(bytes: Buffer, fileName: string, choice: TableChoice = {}): Promise<ImportSource> {
+  if (isZip(bytes)) return openWorkbook(bytes, fileName, choice);
   const text = decodeUpload(bytes);
-  return detectKind(text, fileName) === 'sdf' ? openSdf(text) : openCsv(text);
+  return detectKind(text, fileName) === 'sdf' ? openSdf(text) : openCsv(text, choice);
 }
 
 /**
@@ -28,6 +36,7 @@ export function mappingFor(source: ImportSource, overrides: Record<string, strin
 /** SDF, the open dataset's shape (solvents in columns of their own, no eluent column) or plain CSV. */
 export function formatOf(source: ImportSource, mapping: Record<string, string>): ImportFormat {
   if (source.kind === 'sdf') return 'sdf';
+  if (source.kind === 'xlsx') return 'xlsx';
   const targets = Object.values(mapping);
   return !targets.includes('eluent') && targets.some((target) => target.startsWith('solvent:')) ? 'open-tlc' : 'csv';
 }

@@ -5,10 +5,11 @@ import { recordContentHash, type RecordContent } from '../../core/record-columns
 import { MappedRow, readRow, type ImportFormat } from './read-row';
 import type { SourceRow } from './source';
 import { validateRow } from './validate-row';
+import type { RowContext, RowFacts } from './row-facts';
 
 /** A row read, validated and its structure analysed, before the batch decides whether it is new. */
 export type PreparedRow =
-  | { source: SourceRow; ok: true; record: RecordInputParsed & { structure: string }; analysis: StructureAnalysis; notes: string[]; plainNotes?: string | null }
+  | { source: SourceRow; ok: true; record: RecordInputParsed & { structure: string }; analysis: StructureAnalysis; notes: string[]; warnings: string[]; facts: RowFacts }
   | { source: SourceRow; ok: false; reason: string; notes: string[] };
 
 /**
@@ -36,9 +37,9 @@ export class StructureCache {
  * Reads, validates (as a contributed record would be) and analyses one row. Every problem found is listed
  * in the reason, the structure's included, so one round of fixes is enough.
  */
-export function prepareRow(source: SourceRow, mapping: Record<string, string>, format: ImportFormat, structures: StructureCache): PreparedRow {
+export function prepareRow(source: SourceRow, mapping: Record<string, string>, format: ImportFormat, structures: StructureCache, context?: RowContext): PreparedRow {
   const row = new MappedRow(source, mapping);
-  const reading = readRow(source, mapping, format);
+  const reading = readRow(source, mapping, format, context);
   const validation = reading.ok ? validateRow(reading.input, row) : null;
   const text = row.structure();
   const analysis = text ? structures.analyse(text) : null;
@@ -51,8 +52,9 @@ export function prepareRow(source: SourceRow, mapping: Record<string, string>, f
   if (problems.length > 0 || !validation?.ok || !analysis || analysis instanceof Error) {
     return { source, ok: false, reason: [...new Set(problems)].join(' '), notes };
   }
-  const plain = reading.ok && 'plainNotes' in reading ? { plainNotes: reading.plainNotes } : {};
-  return { source, ok: true, record: { ...validation.record, structure: text }, analysis, notes, ...plain };
+  if (!reading.ok) return { source, ok: false, reason: 'The row could not be read.', notes };
+  const warnings = [...reading.warnings, ...validation.warnings];
+  return { source, ok: true, record: { ...validation.record, structure: text }, analysis, notes, warnings, facts: reading.facts };
 }
 
 export type AcceptedRow = Extract<PreparedRow, { ok: true }>;
@@ -64,11 +66,13 @@ export function contentOf(row: AcceptedRow, compoundId: number): RecordContent {
 }
 
 /**
- * The content hashes under which a row counts as already stored: its own, and — when the import added date
- * or author lines to its notes — the one without them, so a re-imported export adds nothing.
+ * The content hashes under which a row counts as already stored: its own, and the one of the same row with
+ * a TLC plate written as column silica (records stored before TLC rows got the TLC plate), so a re-imported
+ * export of older records adds nothing.
  */
 export function contentHashes(row: AcceptedRow, compoundId: number): string[] {
   const content = contentOf(row, compoundId);
   const own = recordContentHash(content);
-  return row.plainNotes === undefined ? [own] : [own, recordContentHash({ ...content, notes: row.plainNotes })];
+  if (content.technique === 'flash' || content.stationaryPhase !== 'silica-tlc-f254') return [own];
+  return [own, recordContentHash({ ...content, stationaryPhase: 'silica-gel' })];
 }

@@ -4,7 +4,7 @@ import type { Import, User } from '../../db/models';
 const iso = (date: Date | null | undefined) => (date ? new Date(date).toISOString() : null);
 
 /** An import row (with its `user` included) as the API's ImportDto. */
-export function presentImport(row: Import & { user?: Pick<User, 'id' | 'name'> }): ImportDto {
+export function presentImport(row: Import & { user?: Pick<User, 'id' | 'name'> }, live: Pick<ImportDto, 'rate' | 'waitingToResume'> = { rate: null, waitingToResume: false }): ImportDto {
   return {
     id: row.id,
     fileName: row.fileName,
@@ -29,5 +29,10 @@ export function presentImport(row: Import & { user?: Pick<User, 'id' | 'name'> }
     finishedAt: iso(row.finishedAt),
     undoneAt: iso(row.undoneAt),
     retiredRecords: row.retiredRecords,
+    warned: row.warned ?? 0,
+    sheet: row.sheet ?? null,
+    headerRow: row.headerRow ?? null,
+    dateOrder: row.dateOrder ?? null,
+    ...live,
   };
 }

@@ -1,17 +1,17 @@
 import { IGNORE_COLUMN, type ImportField } from '../../../shared/schemas/import';
 import type { RecordInput, SpotInput } from '../../../shared/schemas/record';
-import { readLoad, readNumber, readOutcome, readTechnique, splitVisualisations } from './cells';
+import { readLoad, readNumber, readOutcome, readTechnique } from './cells';
 import { eluentFromAmounts, type SolventAmount } from './solvent-columns';
 import type { SourceRow } from './source';
+import { readPhase, readVisualisation, readWhoAndWhen, type RowContext, type RowFacts } from './row-facts';
 
-export type ImportFormat = 'csv' | 'sdf' | 'open-tlc';
+export type ImportFormat = 'csv' | 'sdf' | 'open-tlc' | 'xlsx';
 
-/** A row turned into a record body (still to be validated like a contributed record), with what was assumed. */
 /**
- * `plainNotes` is the notes text without the date and author lines the import adds (undefined when it added
- * none): a row that matches a stored record apart from those lines — as a re-imported export does — is a duplicate.
+ * A row turned into a record body (still to be validated like a contributed record), with what was assumed
+ * (`notes`), what was only partly read (`warnings`, each naming its column) and the row's own facts.
  */
-export type RowReading = { ok: true; input: RecordInput; notes: string[]; plainNotes?: string | null } | { ok: false; reason: string };
+export type RowReading = { ok: true; input: RecordInput; notes: string[]; warnings: string[]; facts: RowFacts } | { ok: false; reason: string };
 
 /** Rf the open TLC dataset reports at or below 0 (spot on the origin) is stored as this smallest readable Rf. */
 export const OPEN_TLC_MIN_RF = 0.001;
@@ -84,87 +84,106 @@ function readEluent(row: MappedRow, notes: string[]): RecordInput['eluent'] {
   return withAdditive(fromColumns.components.map((part) => part.solvent).join('/') + ' ' + fromColumns.components.map((part) => part.parts).join(':'));
 }
 
-function readSpots(row: MappedRow, format: ImportFormat, notes: string[]): SpotInput[] {
+/** A secondary value: its problem becomes a warning and the value is left out. */
+function softly<T>(read: () => T, warnings: string[], fallback: T, column?: string): T {
+  try {
+    return read();
+  } catch (error) {
+    if (!(error instanceof RowProblem)) throw error;
+    const where = column && !error.message.includes('(column "') ? ` (column "${column}")` : '';
+    warnings.push(`${error.message.replace(/\.$/, '')}${where}. Left out; the row is kept.`);
+    return fallback;
+  }
+}
+
+function readSpots(row: MappedRow, format: ImportFormat, notes: string[], warnings: string[]): SpotInput[] {
   const target = readRf(row, 'rf', format, notes);
   if (target === null) throw new RowProblem(row.headersFor('rf')[0] ? `Missing Rf: the "${row.header('rf')}" column is empty.` : 'Missing Rf: no column holds the Rf.');
   const spots: SpotInput[] = [{ role: 'target', rf: target }];
-  const startingMaterial = readRf(row, 'rfStartingMaterial', format, notes);
+  const startingMaterial = softly(() => readRf(row, 'rfStartingMaterial', format, notes), warnings, null);
   if (startingMaterial !== null) spots.push({ role: 'starting_material', rf: startingMaterial, lane: 'starting_material' });
-  const byProduct = readRf(row, 'rfOther', format, notes);
+  const byProduct = softly(() => readRf(row, 'rfOther', format, notes), warnings, null);
   if (byProduct !== null) spots.push({ role: 'by_product', rf: byProduct });
   return spots;
 }
 
-function readColumn(row: MappedRow): RecordInput['column'] {
-  const number = (field: ImportField, label: string, percent = false) => must(readNumber(row.cell(field), `${label} (column "${row.header(field)}")`, { percent }));
-  const yieldPercent = number('yield', 'Yield', true);
-  if (yieldPercent !== null && (yieldPercent < 0 || yieldPercent > 100)) throw new RowProblem(`Yield ${yieldPercent}% (column "${row.header('yield')}") is outside 0–100 %.`);
+function readColumn(row: MappedRow, warnings: string[]): RecordInput['column'] {
+  const number = (field: ImportField, label: string, percent = false) => {
+    const value = softly(() => must(readNumber(row.cell(field), `${label} (column "${row.header(field)}")`, { percent })), warnings, null);
+    if (value !== null && value <= 0 && !percent) {
+      warnings.push(`${label} (column "${row.header(field)}") ${value} is not positive. Left out; the row is kept.`);
+      return null;
+    }
+    return value;
+  };
+  let yieldPercent = number('yield', 'Yield', true);
+  if (yieldPercent !== null && (yieldPercent < 0 || yieldPercent > 100)) {
+    warnings.push(`Yield ${yieldPercent}% (column "${row.header('yield')}") is outside 0–100 %. Left out; the row is kept.`);
+    yieldPercent = null;
+  }
   const column = {
     diameterMm: number('columnDiameter', 'Column diameter'),
-    cartridgeSize: row.cell('cartridge') || null,
+    cartridgeSize: row.cell('cartridge').slice(0, 40) || null,
     silicaG: number('silica', 'Silica mass'),
     sampleMg: number('sampleMass', 'Sample mass'),
-    loadMethod: must(readLoad(row.cell('loadMethod'))),
+    loadMethod: softly(() => must(readLoad(row.cell('loadMethod'))), warnings, null, row.header('loadMethod')),
     fractionMl: number('fractionSize', 'Fraction size'),
-    fractionsPooled: row.cell('fractionsPooled') || null,
+    fractionsPooled: row.cell('fractionsPooled').slice(0, 60) || null,
     yieldPercent,
   };
   return Object.values(column).some((value) => value !== null) ? column : null;
 }
 
-function readNotes(row: MappedRow): { notes: string | null; plainNotes?: string | null } {
-  const plain = row.cell('notes') || null;
-  const provenance = [
-    row.cell('date') ? `Date (from the import): ${row.cell('date')}` : '',
-    row.cell('author') ? `Original author (from the import): ${row.cell('author')}` : '',
-  ].filter(Boolean);
-  if (provenance.length === 0) return { notes: plain };
-  return { notes: [plain, ...provenance].filter(Boolean).join('\n'), plainNotes: plain };
-}
-
 /**
  * Turns one mapped row into a record body as a contributor would send it, plus notes on every default
- * taken (phase, technique, outcome) and every value adjusted. Problems a chemist must fix (missing Rf or
- * eluent, a word that is not a number, a cell beyond the header) reject the row with a reason.
+ * taken and warnings on every secondary text only partly read (plate, stain, date, numbers of the column, words
+ * for technique, outcome or load): those never reject a row. Only what makes a record meaningless or wrong
+ * rejects it: no structure, no Rf or one outside (0, 1], no eluent (an unknown solvent is found at validation).
  */
-export function readRow(source: SourceRow, mapping: Record<string, string>, format: ImportFormat): RowReading {
+export function readRow(source: SourceRow, mapping: Record<string, string>, format: ImportFormat, context: RowContext = { dateOrder: null, members: [] }): RowReading {
   const row = new MappedRow(source, mapping);
   const notes: string[] = [];
+  const warnings: string[] = [];
+  const facts: RowFacts = { date: null, authorId: null, recordedBy: null, sourceTexts: {}, recordId: null };
   try {
-    if (source.extraCells.length > 0) throw new RowProblem(`The row has ${source.extraCells.length} cell(s) beyond the last header: "${source.extraCells.join('", "').slice(0, 120)}".`);
     const structure = row.structure();
     if (!structure) throw new RowProblem(row.headersFor('structure')[0] ? `Missing structure: the "${row.header('structure')}" column is empty.` : 'Missing structure: no column holds a SMILES or molfile.');
-    const spots = readSpots(row, format, notes);
+    const spots = readSpots(row, format, notes, warnings);
     const eluent = readEluent(row, notes);
-    const column = readColumn(row);
-    let technique = must(readTechnique(row.cell('technique')));
+    if (source.extraCells.length > 0) {
+      warnings.push(`The row has ${source.extraCells.length} cell(s) beyond the last header, not imported: "${source.extraCells.join('", "').slice(0, 120)}".`);
+    }
+    const column = readColumn(row, warnings);
+    let technique = softly(() => must(readTechnique(row.cell('technique'))), warnings, null, row.header('technique'));
+    if (!technique && row.cell('technique')) facts.sourceTexts.technique = row.cell('technique');
     if (!technique) {
       technique = column ? 'flash' : 'tlc';
-      notes.push(`No technique given: recorded as ${technique === 'flash' ? 'a flash column (column details present)' : 'TLC'}.`);
+      notes.push(`No technique read: recorded as ${technique === 'flash' ? 'a flash column (column details present)' : 'TLC'}.`);
     }
-    let outcome = must(readOutcome(row.cell('outcome')));
+    let outcome = softly(() => must(readOutcome(row.cell('outcome'))), warnings, null, row.header('outcome'));
     if (!outcome) {
       outcome = 'clean';
-      notes.push('No outcome given: recorded as clean.');
+      if (row.cell('outcome')) facts.sourceTexts.outcome = row.cell('outcome');
+      notes.push('No outcome read: recorded as clean.');
     }
-    const phase = row.cell('phase');
-    const notesText = readNotes(row);
-    if (!phase) notes.push('No stationary phase given: silica gel assumed.');
+    const phase = readPhase(row, technique, warnings, notes, facts);
+    const visualisation = readVisualisation(row, warnings, facts);
+    readWhoAndWhen(row, context, warnings, facts);
     const input: RecordInput = {
       structure,
       ...(row.cell('name') ? { name: row.cell('name') } : {}),
       technique,
-      stationaryPhase: phase || 'silica',
+      ...phase,
       eluent,
       spots,
-      visualisation: splitVisualisations(row.cell('stain')),
+      visualisation,
       outcome,
       outcomeReason: row.cell('outcomeReason') || null,
       column,
       notebookRef: row.cell('notebook') || null,
-      notes: notesText.notes,
+      notes: row.cell('notes') || null,
     };
-    return { ok: true, input, notes, ...('plainNotes' in notesText ? { plainNotes: notesText.plainNotes } : {}) };
+    return { ok: true, input, notes, warnings, facts };
   } catch (error) {
     if (error instanceof RowProblem) return { ok: false, reason: error.message };
     throw error;

@@ -1,4 +1,6 @@
 import { Import } from '../../db/models';
+import { defineJob, enqueue } from '../../jobs/queue';
+import { withLease } from '../../jobs/lease';
 import { AppError } from '../../http/errors';
 import { logger } from '../../http/logger';
 import { isDatabaseDown } from '../../http/middleware/errors';
@@ -8,8 +10,12 @@ import { FingerprintsAhead } from './fingerprints-ahead';
 import { openUpload } from './open-upload';
 import { prepareRow, StructureCache, type PreparedRow } from './prepare-row';
 import type { SourceRow } from './source';
+import { rowContext } from './import-context';
 
-const running = new Map<number, Promise<void>>();
+const running = new Set<number>();
+
+/** The queue's name for import jobs. */
+export const IMPORT_JOB = 'import';
 
 /** True while this process runs the import. */
 export const isRunningHere = (importId: number) => running.has(importId);
@@ -48,28 +54,42 @@ function describeFailure(error: unknown): string {
 }
 
 /**
- * Records that the import stopped. When the database itself is gone, keeps trying (every 0.5 s for up to
- * five minutes) so the import says it failed as soon as the database is back; what it committed stays.
+ * Records that the import stopped for a reason other than the database (a bug, a missing file): status failed
+ * with the reason; what it committed stays and it can be resumed by hand.
  */
 async function markFailed(importId: number, error: unknown): Promise<void> {
   logger.warn({ err: error, importId }, 'import stopped');
-  const message = describeFailure(error);
+  await Import.update({ status: 'failed', error: describeFailure(error), finishedAt: new Date() }, { where: { id: importId, status: 'running' } });
+}
+
+/** What a running import says while it waits for the database to come back (the page shows it). */
+export const WAITING_MESSAGE = 'The database became unavailable.';
+
+/**
+ * Waits (every 0.5 s, up to five minutes) until the database answers again, then records on the import that it
+ * waited, so the page says it resumes by itself; false if the database stayed away.
+ */
+async function waitForDatabase(importId: number): Promise<boolean> {
   for (let attempt = 0; attempt < 600; attempt++) {
     try {
-      await Import.update({ status: 'failed', error: message, finishedAt: new Date() }, { where: { id: importId, status: 'running' } });
-      return;
+      await Import.update({ error: WAITING_MESSAGE }, { where: { id: importId, status: 'running' } });
+      return true;
     } catch (retryError) {
       if (!isDatabaseDown(retryError)) throw retryError;
       await sleep(500);
     }
   }
+  return false;
 }
 
 async function execute(importId: number): Promise<void> {
   const importRow = await patiently(() => Import.findByPk(importId, { rejectOnEmpty: true }));
+  if (importRow.status !== 'running') return;
+  if (importRow.error !== null) await patiently(() => Import.update({ error: null, heartbeatAt: new Date() }, { where: { id: importId, status: 'running' } }));
   const stored = await patiently(() => blobStorage().get(importRow.fileBlobKey));
   if (!stored) throw new AppError(500, 'import_file_missing', 'The uploaded file is no longer stored.');
-  const source = await openUpload(stored.bytes, importRow.fileName);
+  const source = await openUpload(stored.bytes, importRow.fileName, { sheet: importRow.sheet ?? undefined, headerRow: importRow.headerRow ?? undefined });
+  const context = await patiently(() => rowContext(importRow.dateOrder));
   const structures = new StructureCache();
   const ahead = new FingerprintsAhead();
   let batchNumber = importRow.batchesCommitted;
@@ -84,7 +104,7 @@ async function execute(importId: number): Promise<void> {
     committing?.catch(() => undefined);
     const prepared: PreparedRow[] = [];
     for (const row of rows) {
-      prepared.push(prepareRow(row, importRow.mapping, importRow.format, structures));
+      prepared.push(prepareRow(row, importRow.mapping, importRow.format, structures, context));
       if (prepared.length % YIELD_EVERY === 0) await new Promise((resolve) => setImmediate(resolve));
     }
     await patiently(() => ahead.start(prepared));
@@ -104,19 +124,48 @@ async function execute(importId: number): Promise<void> {
   await patiently(() => Import.update({ status: 'completed', finishedAt: new Date(), heartbeatAt: new Date() }, { where: { id: importId, status: 'running' } }));
 }
 
+/** Thrown when another process holds the import's lease: the queue tries the job again later. */
+class RunningElsewhere extends Error {}
+
 /**
- * Runs (or resumes, from the row after `lastCommittedRow`) an import in the background of this process.
- * Each batch is prepared while the previous one commits, and its new compounds' fingerprints are computed
- * in worker threads meanwhile, so the database, the workers and this thread overlap; each batch commits in
- * its own transaction (commitBatch). A failure marks the import failed with the reason; it can be resumed.
+ * One import job: runs (or resumes, from the row after `lastCommittedRow`) the import while holding its lease,
+ * so no two processes run it at once. Each batch is prepared while the previous one commits, and its new
+ * compounds' fingerprints are computed in worker threads meanwhile; each batch commits in its own transaction
+ * (commitBatch). When the database goes away the import stays "running", waits for it and resumes by itself; a
+ * process that dies releases the lease with its connection and the queue hands the job to another process.
  */
-export function runImport(importId: number): Promise<void> {
-  const current = running.get(importId);
-  if (current) return current;
-  const run = execute(importId)
-    .catch((error) => markFailed(importId, error))
-    .catch((error) => logger.error({ err: error, importId }, 'import could not be marked failed'))
-    .finally(() => running.delete(importId));
-  running.set(importId, run);
-  return run;
+async function importJob({ importId }: { importId: number }): Promise<void> {
+  for (let attempt = 0; attempt < 20; attempt++) {
+    let outcome: 'done' | 'database-down';
+    try {
+      const leased = await withLease(importId, async () => {
+        running.add(importId);
+        try {
+          await execute(importId);
+          return 'done' as const;
+        } catch (error) {
+          if (isDatabaseDown(error)) return 'database-down' as const;
+          await markFailed(importId, error).catch((markError) => logger.error({ err: markError, importId }, 'import could not be marked failed'));
+          return 'done' as const;
+        } finally {
+          running.delete(importId);
+        }
+      });
+      if (!leased) throw new RunningElsewhere(`Import ${importId} runs in another process.`);
+      outcome = leased.value;
+    } catch (error) {
+      if (!isDatabaseDown(error)) throw error;
+      outcome = 'database-down';
+    }
+    if (outcome === 'done') return;
+    logger.warn({ importId }, 'import waits for the database to resume');
+    if (!(await waitForDatabase(importId))) throw new Error('The database stayed unavailable; the queue retries the import.');
+  }
+}
+
+defineJob({ name: IMPORT_JOB, handler: importJob, expireInSeconds: 60, retryDelay: 5, retryLimit: 2_000 });
+
+/** Puts the import on the job queue; whichever app process is free runs it (usually this one). */
+export async function runImport(importId: number): Promise<void> {
+  await enqueue(IMPORT_JOB, { importId }, `import-${importId}`);
 }

@@ -27,5 +27,5 @@ export function openSdf(text: string): ImportSource {
       yield { row: record.index, line: record.line, values, extraCells: [] };
     }
   }
-  return { kind: 'sdf', delimiter: null, headers, total: records.length, blankRows: 0, rows };
+  return { kind: 'sdf', delimiter: null, headers, total: records.length, blankRows: 0, rows, headerRow: 0, sheet: null, sheets: [], titleRows: [] };
 }

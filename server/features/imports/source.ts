@@ -11,7 +11,7 @@ export interface SourceRow {
 
 /** An uploaded file opened for import: its headers, row count, and its rows read as a stream. */
 export interface ImportSource {
-  kind: 'csv' | 'sdf';
+  kind: 'csv' | 'sdf' | 'xlsx';
   delimiter: string | null;
   headers: string[];
   /** Data rows (blank rows excluded). */
@@ -20,6 +20,13 @@ export interface ImportSource {
   blankRows: number;
   /** Rows after the given row number, in order. */
   rows(after?: number): AsyncGenerator<SourceRow>;
+  /** Line (CSV) or sheet row (workbook) of the header row; 0 for SDF. */
+  headerRow: number;
+  /** The workbook sheet read (null for CSV and SDF) and every sheet of the workbook. */
+  sheet: string | null;
+  sheets: string[];
+  /** Filled rows above the header row (titles, notes), shortened, for the preview. */
+  titleRows: string[];
 }
 
 /** Headers made usable as keys: trimmed, an empty one named "column N", a repeated one numbered "Rf (2)". */

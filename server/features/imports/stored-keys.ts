@@ -24,3 +24,17 @@ export async function storedCompoundIds(idcodes: readonly string[], transaction?
   });
   return new Map(rows.map((row) => [row.idcode, row.id]));
 }
+
+/**
+ * The compound of each stored record among the ids given (an export of this app carries its record ids), ignoring
+ * records of undone imports: a re-imported export row whose record id names a record of the same compound is that record.
+ */
+export async function storedRecordCompounds(ids: readonly number[], transaction?: Transaction): Promise<Map<number, number>> {
+  if (ids.length === 0) return new Map();
+  const rows = await sequelize.query<{ id: number; compoundId: number }>(
+    `SELECT r.id, r.compound_id AS "compoundId" FROM condition_records r
+     WHERE r.id IN (:ids) AND NOT EXISTS (SELECT 1 FROM imports i WHERE i.id = r.import_id AND i.status = 'undone')`,
+    { replacements: { ids: [...new Set(ids)] }, type: QueryTypes.SELECT, transaction },
+  );
+  return new Map(rows.map((row) => [row.id, row.compoundId]));
+}

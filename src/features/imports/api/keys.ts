@@ -5,5 +5,9 @@ export const importKeys = {
   detail: (id: number) => [...importKeys.all, 'detail', id] as const,
 };
 
-/** Records and search read under these prefixes; an import or its undo changes them. */
-export const changedByImports = [['records'], ['search'], ['compounds'], ['classes'], ['home']] as const;
+/**
+ * Records, search, compounds, classes and the home page's counts (query key ['overview']) read under these
+ * prefixes; an import or its undo changes them. tests/client/imports-keys.test.ts checks each prefix matches
+ * a key the other features really use.
+ */
+export const changedByImports = [['records'], ['search'], ['compounds'], ['classes'], ['overview']] as const;

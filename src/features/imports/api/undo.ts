@@ -1,10 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { importDtoSchema } from '../../../../shared/schemas/import';
+import { importDtoSchema, undoPlanSchema } from '../../../../shared/schemas/import';
 import { changedByImports, importKeys } from './keys';
 
 /** DELETE /api/imports/:id: retires every record the import added (kept, reason "import N undone"). */
 export const undoImport = (id: number) => api(`/api/imports/${id}`, { method: 'DELETE' }, importDtoSchema);
+
+/** GET /api/imports/:id/undo-plan: what the undo would do to records merged or edited since, read before confirming. */
+export const getUndoPlan = (id: number) => api(`/api/imports/${id}/undo-plan`, {}, undoPlanSchema);
 
 export function useUndoImport() {
   const qc = useQueryClient();

@@ -42,7 +42,11 @@ export function ImportHistory({ items }: { items: ImportDto[] }) {
                 </span>
               </td>
               <td className={`py-2 pr-3 font-medium ${statusClass[item.status]}`}>
-                {item.status === 'running' ? `running (${item.processed}/${item.total})` : item.status}
+                {item.status === 'running'
+                  ? item.waitingToResume
+                    ? `waiting to resume (${item.processed}/${item.total})`
+                    : `running (${item.processed}/${item.total})`
+                  : item.status}
               </td>
               <td className="figure py-2 pr-3 text-right">{item.total}</td>
               <td className="figure py-2 pr-3 text-right">{item.accepted}</td>

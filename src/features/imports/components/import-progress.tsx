@@ -9,6 +9,8 @@ const statusText: Record<ImportDto['status'], string> = {
   undone: 'Import undone',
 };
 
+const formatSeconds = (seconds: number) => (seconds < 90 ? `${seconds} s` : `${Math.round(seconds / 60)} min`);
+
 /** The import just started: a progress bar while it runs, then its counts and what to do next. */
 export function ImportProgress({ item }: { item: ImportDto }) {
   const percent = item.total === 0 ? 100 : Math.round((100 * item.processed) / item.total);
@@ -30,9 +32,21 @@ export function ImportProgress({ item }: { item: ImportDto }) {
       >
         <div className={`h-full ${item.status === 'failed' ? 'bg-failed' : 'bg-front'} transition-[width]`} style={{ width: `${percent}%` }} />
       </div>
+      {item.status === 'running' && item.rate && (
+        <p className="figure text-sm text-ink-soft" data-testid="import-rate">
+          {item.rate.rowsPerSecond > 0 ? `${item.rate.rowsPerSecond} rows/s` : 'starting'}
+          {item.rate.secondsLeft !== null && ` · about ${formatSeconds(item.rate.secondsLeft)} left`} · you can leave this page and come back
+        </p>
+      )}
+      {item.waitingToResume && (
+        <p role="status" className="text-sm text-partial">
+          Waiting to resume: {item.error} It continues by itself from row {item.lastCommittedRow + 1} as soon as the database answers again.
+        </p>
+      )}
       <p className="text-sm" data-testid="import-counts">
         {countsLine(item)}
         {item.newCompounds > 0 && <span className="text-ink-soft"> · {item.newCompounds} new compound{item.newCompounds === 1 ? '' : 's'}</span>}
+        {item.warned > 0 && <span className="text-partial"> · {item.warned} came in with warnings</span>}
         {item.blankRows > 0 && <span className="text-ink-soft"> · {item.blankRows} blank row{item.blankRows === 1 ? '' : 's'} skipped</span>}
       </p>
       {item.status === 'failed' && (

@@ -49,6 +49,13 @@ export function PreviewTable({ rows, mapping }: { rows: ImportRowResult[]; mappi
               <td className="figure py-1.5 pr-3">{row.record?.rf ?? <span className="text-ink-soft">{cellFor(row, mapping, 'rf')}</span>}</td>
               <td className="py-1.5 text-xs">
                 {row.reason && <p className={row.result === 'rejected' ? 'text-failed' : 'text-ink-soft'}>{row.reason}</p>}
+                {row.warnings.length > 0 && (
+                  <ul className="text-partial" data-testid="row-warnings">
+                    {row.warnings.map((warning) => (
+                      <li key={warning}>⚠ {warning}</li>
+                    ))}
+                  </ul>
+                )}
                 {row.notes.some((note) => !common.includes(note)) && (
                   <ul className="text-ink-soft">
                     {row.notes.filter((note) => !common.includes(note)).map((note) => (

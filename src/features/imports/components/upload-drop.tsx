@@ -4,7 +4,7 @@ import { buttonClass } from '../../../components/ui/button';
 /** Largest file the server accepts (POST /api/imports answers 413 beyond). */
 export const MAX_IMPORT_MB = 20;
 
-/** Drop a CSV or SDF file here, or choose one; the chosen file's name and size are shown. */
+/** Drop an Excel workbook (.xlsx), CSV or SDF file here, or choose one; the chosen file's name and size are shown. */
 export function UploadDrop({ file, onFile, disabled }: { file: File | null; onFile: (file: File) => void; disabled?: boolean }) {
   const [over, setOver] = useState(false);
   const input = useRef<HTMLInputElement>(null);
@@ -26,7 +26,7 @@ export function UploadDrop({ file, onFile, disabled }: { file: File | null; onFi
       className={`flex flex-wrap items-center gap-4 rounded-plate border-2 border-dashed px-5 py-6 ${over ? 'border-front bg-front-light' : 'border-line bg-plate'}`}
     >
       <div className="min-w-0 flex-1">
-        <p className="font-medium text-ink">{file ? file.name : 'Drop a CSV or SDF file here'}</p>
+        <p className="font-medium text-ink">{file ? file.name : 'Drop an .xlsx workbook, CSV or SDF file here'}</p>
         <p className="text-sm text-ink-soft">
           {file
             ? `${(file.size / 1024).toFixed(file.size < 10_240 ? 1 : 0)} kB`
@@ -40,7 +40,7 @@ export function UploadDrop({ file, onFile, disabled }: { file: File | null; onFi
         ref={input}
         id={id}
         type="file"
-        accept=".csv,.tsv,.txt,.sdf,.sd,text/csv,text/plain"
+        accept=".csv,.tsv,.txt,.sdf,.sd,.xlsx,text/csv,text/plain,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet"
         className="sr-only"
         disabled={disabled}
         onChange={(event) => {
