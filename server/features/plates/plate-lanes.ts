@@ -1,5 +1,5 @@
 import { lineAt, lineWindow, robustSpread, type FrameLine } from './plate-lines';
-import { boxBlur, floatMap, peaks, type FloatMap } from './raster';
+import { boxBlur, floatMap, peaks, type FloatMap, type Mask } from './raster';
 
 /** Where marks may be read: between the lines, minus a margin of a line window, and away from the plate's sides. */
 export type ReadingBand = { x0: number; x1: number; top: number; bottom: number; threshold: number; strong: number; sigma: number };
@@ -17,22 +17,20 @@ export function readingBand(departure: FloatMap, origin: FrameLine, front: Frame
 }
 
 /**
- * Lanes from the column profile: how much ink each column holds between the lines (departure above the noise
- * threshold, summed down the column) plus the application marks on the origin (the departure just around the
- * origin line above the line's own level). Peaks of the smoothed profile, by prominence and at least a small lane
- * pitch apart, are the lanes, left to right.
+ * Lanes from column profiles: the application marks on the origin (the strongest departure just around the origin
+ * line, above the line's own level), and how much ink each column holds between the lines (pixels of marks, pencil
+ * rings filled, counted down the column). Peaks of each smoothed profile, by prominence and at least a small lane
+ * pitch apart, are lane candidates; marked lanes come first (an empty fraction has only its mark), and ink away from
+ * every mark (a lane spotted without a mark) adds a lane. Left to right.
  */
-export function findLanes(departure: FloatMap, origin: FrameLine, band: ReadingBand): number[] {
+export function findLanes(departure: FloatMap, origin: FrameLine, band: ReadingBand, filled: Mask): number[] {
   const { width, height, data } = departure;
   const k = lineWindow(height);
   const ink = new Float64Array(width);
-  for (let x = band.x0; x < band.x1; x++) {
+  for (let sx = 0; sx < filled.width; sx++) {
     let sum = 0;
-    for (let y = Math.max(0, band.top); y < Math.min(height, band.bottom); y++) {
-      const over = data[y * width + x] - band.threshold;
-      if (over > 0) sum += over;
-    }
-    ink[x] = sum;
+    for (let sy = 0; sy < filled.height; sy++) sum += filled.data[sy * filled.width + sx];
+    ink[sx + band.x0] = sum;
   }
   const marks = new Float64Array(width);
   for (let x = band.x0; x < band.x1; x++) {
@@ -43,22 +41,27 @@ export function findLanes(departure: FloatMap, origin: FrameLine, band: ReadingB
   }
   const lineLevel = robustSpread(marks.subarray(band.x0, band.x1)).level;
   for (let x = 0; x < width; x++) marks[x] = Math.max(0, marks[x] - lineLevel - 4 * band.sigma);
-  const inkMax = Math.max(...ink), markMax = Math.max(...marks);
-  const profile = floatMap(width, 1);
-  for (let x = 0; x < width; x++) {
-    profile.data[x] = (inkMax > 0 ? ink[x] / inkMax : 0) + (markMax > 6 * band.sigma ? (0.8 * marks[x]) / markMax : 0);
-  }
-  const smooth = boxBlur(boxBlur(profile, Math.max(1, Math.round(width * 0.006))), Math.max(1, Math.round(width * 0.006)));
-  const found = peaks(smooth.data);
-  if (found.length === 0) return [];
-  const strongest = found[0].prominence;
+  const from = Math.round(width * 0.04), to = Math.round(width * 0.96);
   const pitch = Math.max(4, width * 0.04);
-  const lanes: number[] = [];
-  for (const peak of found) {
-    if (peak.prominence < 0.15 * strongest || peak.value < 0.08) continue;
-    if (peak.index < band.x0 || peak.index > band.x1) continue;
-    if (lanes.some((lane) => Math.abs(lane - peak.index) < pitch)) continue;
-    lanes.push(peak.index);
-  }
+  const pick = (values: Float64Array, share: number, floor: number) => {
+    const profile = floatMap(width, 1);
+    for (let x = from; x < to; x++) profile.data[x] = values[x];
+    const radius = Math.max(1, Math.round(width * 0.006));
+    const found = peaks(boxBlur(boxBlur(profile, radius), radius).data);
+    const chosen: number[] = [];
+    if (found.length === 0) return chosen;
+    for (const peak of found) {
+      if (peak.prominence < share * found[0].prominence || peak.value <= floor) continue;
+      if (peak.index < from || peak.index >= to || chosen.some((lane) => Math.abs(lane - peak.index) < pitch)) continue;
+      chosen.push(peak.index);
+    }
+    return chosen.sort((a, b) => a - b);
+  };
+  const marked = pick(marks, 0.3, 4 * band.sigma);
+  const inked = pick(ink, 0.15, 0);
+  if (marked.length === 0) return inked;
+  const gaps = marked.slice(1).map((x, i) => x - marked[i]).sort((a, b) => a - b);
+  const near = gaps.length ? 0.5 * gaps[gaps.length >> 1] : 0.15 * width;
+  const lanes = [...marked, ...inked.filter((x) => marked.every((lane) => Math.abs(lane - x) > near))];
   return lanes.sort((a, b) => a - b);
 }

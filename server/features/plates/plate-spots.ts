@@ -57,22 +57,35 @@ function splitRows(part: Part, width: number, pitch: number): Part[] {
  * A blob spanning lanes is cut between them; within a lane, a blob whose row profile has two clear peaks is cut at
  * the dip between them; a blob much taller than wide is a streak.
  */
-export function findSpots(departure: FloatMap, band: ReadingBand, lanes: number[], run: number): FrameSpot[] {
+/** The ink between the lines (departure above the threshold) and the same closed by a pixel with holes filled. */
+export type InkMasks = { ink: Mask; closed: Mask; filled: Mask; x0: number; top: number };
+
+export function inkMasks(departure: FloatMap, band: ReadingBand): InkMasks | null {
   const { width, data } = departure;
   const top = Math.max(0, band.top), bottom = Math.min(departure.height, band.bottom);
   const subWidth = band.x1 - band.x0, subHeight = bottom - top;
-  if (subWidth < 4 || subHeight < 4 || lanes.length === 0) return [];
-  const at = (sx: number, sy: number) => (sy + top) * width + sx + band.x0;
+  if (subWidth < 4 || subHeight < 4) return null;
   const ink: Mask = { width: subWidth, height: subHeight, data: new Uint8Array(subWidth * subHeight) };
-  for (let sy = 0; sy < subHeight; sy++) for (let sx = 0; sx < subWidth; sx++) ink.data[sy * subWidth + sx] = data[at(sx, sy)] > band.threshold ? 1 : 0;
-  const filled = fillHoles(morph(morph(ink, 1, true), 1, false));
+  for (let sy = 0; sy < subHeight; sy++) {
+    for (let sx = 0; sx < subWidth; sx++) ink.data[sy * subWidth + sx] = data[(sy + top) * width + sx + band.x0] > band.threshold ? 1 : 0;
+  }
+  const closed = morph(morph(ink, 1, true), 1, false);
+  return { ink, closed, filled: fillHoles(closed), x0: band.x0, top };
+}
+
+export function findSpots(departure: FloatMap, band: ReadingBand, masks: InkMasks, lanes: number[], run: number): FrameSpot[] {
+  const { width, data } = departure;
+  const { closed, filled, x0, top } = masks;
+  if (lanes.length === 0) return [];
+  const subWidth = filled.width;
+  const at = (sx: number, sy: number) => (sy + top) * width + sx + x0;
   const pitch = lanes.length > 1 ? (lanes[lanes.length - 1] - lanes[0]) / (lanes.length - 1) : width;
   const minArea = Math.max(10, (run * 0.012) ** 2 * Math.PI);
   const spots: FrameSpot[] = [];
   for (const blob of components(filled, minArea)) {
     const pixels = Array.from(blob.pixels, (i) => at(i % subWidth, Math.floor(i / subWidth)));
-    const inkCount = Array.from(blob.pixels).filter((i) => ink.data[i]).length;
-    const circle = inkCount < 0.55 * blob.area && blob.area > 3 * minArea;
+    const holeCount = Array.from(blob.pixels).filter((i) => !closed.data[i]).length;
+    const circle = holeCount > 0.12 * blob.area && blob.area > 2 * minArea;
     const weight = circle ? () => 1 : (i: number) => Math.max(0, data[i] - band.threshold);
     const byLane = new Map<number, number[]>();
     for (const i of pixels) {

@@ -3,7 +3,8 @@ import { applyHomography, type Point } from './geometry';
 import { findLanes, readingBand } from './plate-lanes';
 import { findLines, lineAt } from './plate-lines';
 import { departure, straighten } from './plate-frame';
-import { findSpots } from './plate-spots';
+import { findSpots, inkMasks } from './plate-spots';
+import { refineCorners } from './plate-edges';
 import { findPlates, type RgbImage } from './segment';
 import type { PlateReading, PlateReadSpot } from '../../../shared/schemas/plates';
 
@@ -55,7 +56,7 @@ export async function readPlates(bytes: Buffer): Promise<ReadOutcome> {
   const plates: PlateReading['plates'] = [];
   const misses: string[] = [];
   for (const plate of found) {
-    const frame = straighten(image, plate.corners.map(([x, y]) => [x * toRead, y * toRead] as Point));
+    const frame = straighten(image, refineCorners(image, plate.corners.map(([x, y]) => [x * toRead, y * toRead] as Point)));
     if (!frame) continue;
     const map = departure(frame);
     const { origin, front } = findLines(map);
@@ -68,9 +69,10 @@ export async function readPlates(bytes: Buffer): Promise<ReadOutcome> {
       return [round(px * toDisplay), round(py * toDisplay)];
     };
     const band = readingBand(map, origin, front);
-    const laneXs = findLanes(map, origin, band);
+    const masks = inkMasks(map, band);
+    const laneXs = masks ? findLanes(map, origin, band, masks.filled) : [];
     const run = (origin.left + origin.right - front.left - front.right) / 2;
-    const spots = findSpots(map, band, laneXs, run);
+    const spots = masks ? findSpots(map, band, masks, laneXs, run) : [];
     const rfAt = (x: number, y: number) => {
       const o = lineAt(origin, x, frame.width), f = lineAt(front, x, frame.width);
       return (o - y) / (o - f);
