@@ -20,6 +20,7 @@ import { bookmarksRouter } from '../features/bookmarks/routes';
 import { classesRouter } from '../features/classes/routes';
 import { exportRouter } from '../features/search/export-routes';
 import { overviewRouter } from '../features/home/routes';
+import { platesRouter } from '../features/plates/routes';
 
 /** Every API router, mounted under /api. Each route's first handler is `allow(level)`. */
 export function apiRouter(): Router {
@@ -44,5 +45,6 @@ export function apiRouter(): Router {
   api.use('/classes', classesRouter);
   api.use(exportRouter);
   api.use('/overview', overviewRouter);
+  api.use('/plates', platesRouter);
   return api;
 }
