@@ -44,3 +44,45 @@ export const plateReadingSchema = z.object({
   warnings: z.array(z.string()).optional(),
 });
 export type PlateReading = z.infer<typeof plateReadingSchema>;
+
+/** What a lane holds, named by the chemist on the overlay. */
+export const annotationLaneRoles = ['starting_material', 'co_spot', 'mixture', 'fraction', 'other'] as const;
+export const annotationLaneRoleLabels: Record<(typeof annotationLaneRoles)[number], string> = {
+  starting_material: 'SM', co_spot: 'co-spot', mixture: 'RM', fraction: 'fraction', other: 'other',
+};
+export const annotationSpotRoles = ['target', 'starting_material', 'by_product', 'unknown'] as const;
+
+const coordinate = z.number().finite().min(-100_000).max(100_000);
+const point = z.tuple([coordinate, coordinate]);
+
+export const plateAnnotationSchema = z.object({
+  plates: z.array(z.object({
+    corners: z.array(point).length(4),
+    origin: z.array(point).length(2),
+    front: z.array(point).length(2),
+    lanes: z.array(z.object({
+      x: coordinate,
+      label: z.string().trim().max(40).optional(),
+      role: z.enum(annotationLaneRoles).optional(),
+      fraction: z.number().int().min(0).max(10_000).optional(),
+      spots: z.array(z.object({
+        x: coordinate, y: coordinate, rf: z.number().min(-1).max(2), kind: z.enum(plateSpotKinds),
+        role: z.enum(annotationSpotRoles).optional(), rfLow: z.number().optional(), rfHigh: z.number().optional(),
+      })).max(40),
+    })).max(40),
+  })).max(12),
+  /** The proposed pool of a fractions plate and the monitoring sentences, as shown when saved. */
+  pooling: z.string().max(500).optional(),
+  monitoring: z.array(z.string().max(300)).max(12).optional(),
+});
+export type PlateAnnotation = z.infer<typeof plateAnnotationSchema>;
+
+export const photoAnnotationSchema = z.object({
+  photoId: z.number().int(),
+  revision: z.number().int(),
+  annotation: plateAnnotationSchema,
+  savedBy: z.string().nullable(),
+  savedAt: z.string(),
+});
+export type PhotoAnnotation = z.infer<typeof photoAnnotationSchema>;
+export const photoAnnotationHistorySchema = z.object({ items: z.array(photoAnnotationSchema) });

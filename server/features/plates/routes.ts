@@ -1,11 +1,14 @@
 import { Router } from 'express';
 import multer from 'multer';
-import { allow } from '../../http/middleware/access';
+import { allow, currentUser } from '../../http/middleware/access';
 import { readableMultipart } from '../../http/middleware/multipart';
 import { handle } from '../../http/middleware/validate';
 import { BadRequestError, UnprocessableError } from '../../http/errors';
 import { MAX_PHOTO_BYTES } from '../../storage/photo-sniff';
 import { readPhotoPlates } from './service';
+import { annotationHistory, currentAnnotation, saveAnnotation } from './annotations';
+import { idParamSchema } from '../../../shared/schemas/common';
+import { plateAnnotationSchema } from '../../../shared/schemas/plates';
 
 export const platesRouter = Router();
 
@@ -17,4 +20,17 @@ platesRouter.post('/read', allow('member'), readableMultipart(upload.single('pho
   const outcome = await readPhotoPlates(req.file.buffer);
   if (!outcome.ok) throw new UnprocessableError(outcome.message, { missing: outcome.missing, width: outcome.width, height: outcome.height });
   res.json(outcome.reading);
+}));
+
+/** A record photo's plate annotation (the overlay editor's work), its revisions, and saving a new revision. */
+platesRouter.get('/photos/:id/annotation', allow('viewer'), handle({ params: idParamSchema }, async ({ params }, _req, res) => {
+  res.json(await currentAnnotation(params.id));
+}));
+
+platesRouter.get('/photos/:id/annotation/revisions', allow('viewer'), handle({ params: idParamSchema }, async ({ params }, _req, res) => {
+  res.json({ items: await annotationHistory(params.id) });
+}));
+
+platesRouter.put('/photos/:id/annotation', allow('member'), handle({ params: idParamSchema, body: plateAnnotationSchema }, async ({ params, body }, req, res) => {
+  res.json(await saveAnnotation(params.id, body, currentUser(req)));
 }));
