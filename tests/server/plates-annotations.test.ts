@@ -18,7 +18,7 @@ const annotation = (rf: number): PlateAnnotation => ({
   }],
   monitoring: ['New spot at Rf 0.30.'],
 });
-const put = (agent: Agent, body: unknown) => agent.put(`/api/plates/photos/${photoId}/annotation`).set('X-CSRF-Token', agent.csrf).send(body);
+const put = (agent: Agent, body: object) => agent.put(`/api/plates/photos/${photoId}/annotation`).set('X-CSRF-Token', agent.csrf).send(body);
 
 beforeAll(async () => {
   [author, other, viewer] = await Promise.all([agentFor(app, 'member'), agentFor(app, 'member'), agentFor(app, 'viewer')]);

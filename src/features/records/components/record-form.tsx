@@ -16,6 +16,7 @@ import { VisualisationChips } from './visualisation-chips';
 import { CautionsFor } from './cautions-for';
 import type { RecordFormValues } from './record-form-values';
 import { mapServerErrors } from './server-errors';
+import { PlateReaderPanel } from '../../plates/components/plate-reader-panel';
 
 interface RecordFormProps<Out> {
   defaultValues: RecordFormValues;
@@ -83,6 +84,13 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
           <TextField label="Notebook reference" placeholder="e.g. AB-03 p. 41" mono error={errors.notebookRef?.message} {...register('notebookRef')} />
           <TextAreaField label="Notes" rows={3} className="sm:col-span-2" error={errors.notes?.message} {...register('notes')} />
           {withPhotos && <div className="sm:col-span-3"><PhotoDrop files={photos} onChange={setPhotos} /></div>}
+          {withPhotos && photos.length > 0 && (
+            <div className="sm:col-span-3">
+              <PlateReaderPanel files={photos}
+                onUseSpots={(spots) => form.setValue('spots', spots.map((spot) => ({ ...spot, useDistances: false, spotDistanceMm: null, frontDistanceMm: null })), { shouldDirty: true })}
+                onUsePool={(summary) => { form.setValue('showColumn', true); form.setValue('column.fractionsPooled', summary, { shouldDirty: true }); }} />
+            </div>
+          )}
         </section>
 
         {formMessage && <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-sm text-failed">{formMessage}</p>}

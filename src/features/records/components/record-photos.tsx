@@ -3,6 +3,7 @@ import type { RecordDto } from '../../../../shared/schemas/record';
 import { Button } from '../../../components/ui/button';
 import { useRemovePhoto, useUploadPhoto } from '../api/photos';
 import { PhotoDrop } from './photo-drop';
+import { PhotoPlateMarks } from '../../plates/components/photo-plate-marker';
 
 /** Plate photos as thumbnails opening the full image; editors add and remove them here. */
 export function RecordPhotos({ record }: { record: RecordDto }) {
@@ -34,6 +35,7 @@ export function RecordPhotos({ record }: { record: RecordDto }) {
               </a>
               <p className="text-2xs text-ink-soft">{photo.uploadedBy.name} · <span className="figure">{(photo.byteSize / 1024).toFixed(0)} kB</span></p>
               {record.canEdit && <Button size="sm" variant="quiet" onClick={() => remove.mutate(photo.id)} aria-label={`Remove photo ${photo.id}`}>Remove</Button>}
+              <PhotoPlateMarks photo={photo} canEdit={record.canEdit} />
             </li>
           ))}
         </ul>
