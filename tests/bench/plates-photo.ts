@@ -151,7 +151,9 @@ async function storedFor(pixels: Buffer, width: number, height: number, orientat
 /** The encoded photo (JPEG, PNG or WebP, with its EXIF orientation) and its truth. */
 export async function generatePhoto(seed: number, look?: PlateLook): Promise<GeneratedPhoto> {
   const scene = makePhotoScene(seed, look);
-  if (scene.format === 'png') scene.orientation = 1;
+  // Phones write the orientation tag into JPEGs; browsers do not all honour it in PNG or WebP (Chromium 156 ignores
+  // it in WebP), so only JPEGs are stored turned.
+  if (scene.format !== 'jpeg') scene.orientation = 1;
   const { pixels, truth } = drawPhoto(scene);
   const stored = await storedFor(pixels, scene.width, scene.height, scene.orientation);
   let image = sharp(stored.data, { raw: { width: stored.width, height: stored.height, channels: 3 } });

@@ -110,7 +110,7 @@ export function PlateOverlay({ src, width, height, value, onChange, selected, on
             <line x1={plate.front[0][0]} y1={plate.front[0][1]} x2={plate.front[1][0]} y2={plate.front[1][1]} stroke="#0F6E6E" strokeWidth={unit * 0.3} />
             {plate.lanes.map((lane, l) => (
               <g key={l}>
-                <text x={lane.x} y={Math.max(plate.origin[0][1], plate.origin[1][1]) + unit * 2.2} fontSize={unit * 1.4} textAnchor="middle" fill="#C77D14" stroke="white" strokeWidth={unit * 0.15} paintOrder="stroke">{lane.label || l + 1}</text>
+                <text pointerEvents="none" x={lane.x} y={Math.max(plate.origin[0][1], plate.origin[1][1]) + unit * 2.2} fontSize={unit * 1.4} textAnchor="middle" fill="#C77D14" stroke="white" strokeWidth={unit * 0.15} paintOrder="stroke">{lane.label || l + 1}</text>
                 {lane.spots.map((spot, s) => {
                   const isSelected = selected?.plate === p && selected.lane === l && selected.spot === s;
                   const colour = isSelected ? '#C77D14' : '#F6F5F0';
@@ -121,7 +121,7 @@ export function PlateOverlay({ src, width, height, value, onChange, selected, on
                       {spot.kind === 'streak'
                         ? <rect x={spot.x - unit * 0.5} y={spot.y - unit * 1.5} width={unit} height={unit * 3} fill="none" stroke={colour} strokeWidth={unit * 0.25} />
                         : <circle cx={spot.x} cy={spot.y} r={unit * (spot.kind === 'circle' ? 1.1 : 0.8)} fill={spot.kind === 'circle' ? 'none' : `${colour}55`} stroke={colour} strokeWidth={unit * 0.25} />}
-                      <text x={spot.x + unit * 1.4} y={spot.y + unit * 0.5} fontSize={unit * 1.2} fill={colour} stroke="#22252A" strokeWidth={unit * 0.12} paintOrder="stroke">{spot.rf.toFixed(2)}</text>
+                      <text pointerEvents="none" x={spot.x + unit * 1.4} y={spot.y + unit * 0.5} fontSize={unit * 1.2} fill={colour} stroke="#22252A" strokeWidth={unit * 0.12} paintOrder="stroke">{spot.rf.toFixed(2)}</text>
                     </g>
                   );
                 })}
