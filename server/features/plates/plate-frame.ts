@@ -3,7 +3,8 @@ import { boxBlur, floatMap, median, type FloatMap } from './raster';
 import type { RgbImage } from './segment';
 
 /** A plate straightened into its own rectangle: its pixels, and the homography from it back to the photo. */
-export type PlateFrame = { width: number; height: number; rgb: Float32Array; toPhoto: Homography };
+/** `scale`: frame pixels per photo pixel (above 1 for narrow plates sampled finer). */
+export type PlateFrame = { width: number; height: number; rgb: Float32Array; toPhoto: Homography; scale: number };
 
 const MAX_FRAME_PIXELS = 700_000;
 const MIN_FRAME_WIDTH = 240;
@@ -38,7 +39,7 @@ export function straighten(image: RgbImage, corners: Point[]): PlateFrame | null
       }
     }
   }
-  return { width, height, rgb, toPhoto };
+  return { width, height, rgb, toPhoto, scale: width / plateWidth };
 }
 
 /**

@@ -4,10 +4,11 @@ import { boxBlur, floatMap, peaks, type FloatMap, type Mask } from './raster';
 /** Where marks may be read: between the lines, minus a margin of a line window, and away from the plate's sides. */
 export type ReadingBand = { x0: number; x1: number; top: number; bottom: number; threshold: number; strong: number; sigma: number };
 
-export function readingBand(departure: FloatMap, origin: FrameLine, front: FrameLine): ReadingBand {
+/** `edge`: frame pixels at each side where the bench may bleed in (a photo pixel or two of corner error, resampled). */
+export function readingBand(departure: FloatMap, origin: FrameLine, front: FrameLine, edge = 0): ReadingBand {
   const { width, height, data } = departure;
   const k = lineWindow(height);
-  const x0 = Math.round(width * 0.02), x1 = Math.round(width * 0.98);
+  const x0 = Math.round(Math.max(width * 0.02, edge)), x1 = Math.round(Math.min(width * 0.98, width - edge));
   const top = Math.round(Math.max(front.left, front.right) + 1.5 * k);
   const bottom = Math.round(Math.min(origin.left, origin.right) - 1.5 * k);
   const sample: number[] = [];
@@ -41,7 +42,7 @@ export function findLanes(departure: FloatMap, origin: FrameLine, band: ReadingB
   }
   const lineLevel = robustSpread(marks.subarray(band.x0, band.x1)).level;
   for (let x = 0; x < width; x++) marks[x] = Math.max(0, marks[x] - lineLevel - 4 * band.sigma);
-  const from = Math.round(width * 0.04), to = Math.round(width * 0.96);
+  const from = Math.max(Math.round(width * 0.04), band.x0 + 2), to = Math.min(Math.round(width * 0.96), band.x1 - 2);
   const pitch = Math.max(4, width * 0.04);
   const pick = (values: Float64Array, share: number, floor: number) => {
     const profile = floatMap(width, 1);

@@ -83,6 +83,9 @@ export function findSpots(departure: FloatMap, band: ReadingBand, masks: InkMask
   const minArea = Math.max(10, (run * 0.012) ** 2 * Math.PI);
   const spots: FrameSpot[] = [];
   for (const blob of components(filled, minArea)) {
+    // A thin blob along the band's side is the plate's edge bleeding in, not a spot.
+    const atSide = blob.minX === 0 || blob.maxX === subWidth - 1;
+    if (atSide && blob.maxX - blob.minX < 0.04 * width) continue;
     const pixels = Array.from(blob.pixels, (i) => at(i % subWidth, Math.floor(i / subWidth)));
     const holeCount = Array.from(blob.pixels).filter((i) => !closed.data[i]).length;
     const circle = holeCount > 0.12 * blob.area && blob.area > 2 * minArea;

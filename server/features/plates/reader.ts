@@ -68,7 +68,7 @@ export async function readPlates(bytes: Buffer): Promise<ReadOutcome> {
       const [px, py] = applyHomography(frame.toPhoto, [x, y]);
       return [round(px * toDisplay), round(py * toDisplay)];
     };
-    const band = readingBand(map, origin, front);
+    const band = readingBand(map, origin, front, 2.5 * frame.scale + 1);
     const masks = inkMasks(map, band);
     const laneXs = masks ? findLanes(map, origin, band, masks.filled) : [];
     const run = (origin.left + origin.right - front.left - front.right) / 2;
