@@ -21,6 +21,7 @@ afterAll(() => browser?.close());
 describe('a member reads a plate photo while contributing', () => {
   it('uploads a generated photo, has the plate read, drags a spot on the overlay, saves, and finds that Rf on the record', async () => {
     const photo = await generatePhoto(3033, 'kmno4');
+    await page.setViewportSize({ width: 390, height: 844 }); // a phone at the bench
     await page.goto(`${baseUrl}/contribute`);
     await page.getByLabel('SMILES or molfile').fill(smiles);
     await page.getByText('C8H8O2').first().waitFor({ timeout: 20_000 });
@@ -32,6 +33,8 @@ describe('a member reads a plate photo while contributing', () => {
     await spots.first().waitFor({ timeout: 30_000 });
     const found = await spots.count();
     expect(found).toBeGreaterThanOrEqual(3);
+    const panel = (await page.getByRole('region', { name: 'Read the plate from the photo' }).boundingBox())!;
+    expect(panel.x + panel.width).toBeLessThanOrEqual(390); // the reader and its overlay fit a 390 px phone
 
     const last = spots.nth(found - 1);
     const before = Number(await last.getAttribute('data-rf'));
