@@ -22,6 +22,7 @@ import { exportRouter } from '../features/search/export-routes';
 import { overviewRouter } from '../features/home/routes';
 import { adminTokensRouter, tokensRouter } from '../features/tokens/routes';
 import { apiDocsRouter } from '../features/api-docs/routes';
+import { platesRouter } from '../features/plates/routes';
 
 /** Every API router, mounted under /api. Each route's first handler is `allow(level)`. */
 export function apiRouter(): Router {
@@ -49,5 +50,6 @@ export function apiRouter(): Router {
   api.use('/classes', classesRouter);
   api.use(exportRouter);
   api.use('/overview', overviewRouter);
+  api.use('/plates', platesRouter);
   return api;
 }

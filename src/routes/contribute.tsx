@@ -2,6 +2,7 @@ import { useNavigate } from 'react-router-dom';
 import { useCreateRecord } from '../features/records/api/save-record';
 import { useUploadPhoto } from '../features/records/api/photos';
 import { RecordForm } from '../features/records/components/record-form';
+import { PlateReaderPanel } from '../features/plates/components/plate-reader-panel';
 import { createRecordFormSchema, emptyRecordForm } from '../features/records/components/record-form-values';
 
 /** Contribute a condition record: structure, phase, eluent, spots, visualisation, outcome, column, photos. */
@@ -20,6 +21,7 @@ export default function ContributePage() {
       <RecordForm
         defaultValues={emptyRecordForm()}
         schema={createRecordFormSchema}
+        plateReader={(slot) => <PlateReaderPanel {...slot} />}
         submitLabel="Save record"
         onSave={async (body, photos) => {
           const record = await create.mutateAsync(body);

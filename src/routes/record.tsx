@@ -14,6 +14,7 @@ import { useRecord } from '../features/records/api/get-record';
 import { EluentView } from '../features/records/components/eluent-view';
 import { SpotList } from '../features/records/components/spot-list';
 import { RecordPhotos } from '../features/records/components/record-photos';
+import { PhotoPlateMarks } from '../features/plates/components/photo-plate-marker';
 import { HistoryList } from '../features/records/components/history-list';
 import { ColumnDetailsView } from '../features/records/components/column-details-view';
 import { MergedNotice } from '../features/curation/components/merged-notice';
@@ -99,7 +100,7 @@ export default function RecordPage() {
       </div>
 
       {plateForPlan && <ColumnPlanPanel title="Plan a column from this plate" rfTarget={plateForPlan.target} rfImpurity={plateForPlan.nearest} sampleMg={record.column?.sampleMg ?? undefined} />}
-      <Card title="Plate photos"><RecordPhotos record={record} /></Card>
+      <Card title="Plate photos"><RecordPhotos record={record} photoMarks={(photo) => <PhotoPlateMarks photo={photo} canEdit={record.canEdit} />} /></Card>
       <Card title="Contributors">
         <ul className="flex flex-wrap gap-3 text-sm">
           {record.contributors.map((person) => <li key={`${person.id}-${person.role}`}>{person.name} <span className="text-ink-soft">({person.role})</span></li>)}

@@ -1,36 +1,18 @@
-import sharp, { type Metadata } from 'sharp';
+import sharp from 'sharp';
 import { createHash } from 'node:crypto';
 import { sequelize } from '../../db/sequelize';
 import { ConditionRecord, RecordPhoto } from '../../db/models';
-import { ConflictError, ForbiddenError, NotFoundError, UnprocessableError, UnsupportedMediaTypeError } from '../../http/errors';
+import { ConflictError, ForbiddenError, NotFoundError, UnprocessableError } from '../../http/errors';
+import { sniffPhoto } from '../../storage/photo-sniff';
 import { roleAtLeast, type SessionUser } from '../../../shared/schemas/auth';
 import { blobStorage } from '../../storage';
 import { canEditRecord } from './service';
 import { addRevision } from '../../core/record-revisions';
 import type { PhotoContentType } from '../../db/models/record-photo';
 
-/** Largest accepted photo, bytes (10 MB); multer refuses anything larger with 413. */
-export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
+export { MAX_PHOTO_BYTES } from '../../storage/photo-sniff';
 /** Thumbnails fit in this square, px, as WebP. */
 export const THUMB_SIZE_PX = 320;
-
-const accepted: Record<string, PhotoContentType> = { jpeg: 'image/jpeg', png: 'image/png', webp: 'image/webp' };
-
-/** Decodes the image header with sharp: the content decides the type, never the file name or declared type. */
-async function inspect(bytes: Buffer): Promise<{ contentType: PhotoContentType; width: number; height: number }> {
-  let metadata: Metadata;
-  try {
-    metadata = await sharp(bytes).metadata();
-  } catch {
-    throw new UnsupportedMediaTypeError('The file is not a readable image; plate photos must be JPEG, PNG or WebP.');
-  }
-  const contentType = metadata.format ? accepted[metadata.format] : undefined;
-  if (!contentType || !metadata.width || !metadata.height) {
-    throw new UnsupportedMediaTypeError(`The file is ${metadata.format ?? 'of an unknown type'}; plate photos must be JPEG, PNG or WebP.`);
-  }
-  const turned = (metadata.orientation ?? 1) >= 5;
-  return { contentType, width: turned ? metadata.height : metadata.width, height: turned ? metadata.width : metadata.height };
-}
 
 /** The thumbnail; an image whose header reads but whose pixels do not (truncated, damaged) is refused with 422. */
 async function thumbnail(bytes: Buffer, contentType: PhotoContentType): Promise<Buffer> {
@@ -47,7 +29,7 @@ export async function addPhoto(recordId: number, file: { buffer: Buffer; origina
   if (!record) throw new NotFoundError('Record');
   if (!canEditRecord(user, record)) throw new ForbiddenError('Only the record’s author, a curator or an admin may add photos.');
   if (record.status === 'merged') throw new ConflictError(`This record was merged into record ${record.mergedIntoId}; add the photo there.`);
-  const { contentType, width, height } = await inspect(file.buffer);
+  const { contentType, width, height } = await sniffPhoto(file.buffer);
   const thumb = await thumbnail(file.buffer, contentType);
   return sequelize.transaction(async (transaction) => {
     const storage = blobStorage();

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Controller, FormProvider, useForm, useWatch, type Resolver } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
@@ -17,7 +17,18 @@ import { CautionsFor } from './cautions-for';
 import type { RecordFormValues } from './record-form-values';
 import { mapServerErrors } from './server-errors';
 
+type ReadSpot = Omit<RecordFormValues['spots'][number], 'useDistances' | 'spotDistanceMm' | 'frontDistanceMm'>;
+
+/** What the page's plate reader gets from the form: the chosen photos, and where to put spots and a fraction pool. */
+export interface PlateReaderSlot {
+  files: File[];
+  onUseSpots: (spots: ReadSpot[]) => void;
+  onUsePool: (summary: string) => void;
+}
+
 interface RecordFormProps<Out> {
+  /** A plate reader for the chosen photos, supplied by the page (features never import each other). */
+  plateReader?: (slot: PlateReaderSlot) => ReactNode;
   defaultValues: RecordFormValues;
   schema: z.ZodType<Out, RecordFormValues>;
   submitLabel: string;
@@ -28,7 +39,7 @@ interface RecordFormProps<Out> {
 }
 
 /** The condition-record form for contributing and editing: inline checks with the shared schema, server errors on their fields. */
-export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, withPhotos = true }: RecordFormProps<Out>) {
+export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, withPhotos = true, plateReader }: RecordFormProps<Out>) {
   const form = useForm<RecordFormValues, unknown, Out>({ defaultValues, resolver: zodResolver(schema as never) as Resolver<RecordFormValues, unknown, Out>, mode: 'onBlur' });
   const { register, control, handleSubmit, setError, formState: { errors, isSubmitting } } = form;
   const [photos, setPhotos] = useState<File[]>([]);
@@ -83,6 +94,18 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
           <TextField label="Notebook reference" placeholder="e.g. AB-03 p. 41" mono error={errors.notebookRef?.message} {...register('notebookRef')} />
           <TextAreaField label="Notes" rows={3} className="sm:col-span-2" error={errors.notes?.message} {...register('notes')} />
           {withPhotos && <div className="sm:col-span-3"><PhotoDrop files={photos} onChange={setPhotos} /></div>}
+          {withPhotos && plateReader && photos.length > 0 && (
+            <div className="sm:col-span-3">
+              {plateReader({
+                files: photos,
+                onUseSpots: (spots) => form.setValue('spots', spots.map((spot) => ({ ...spot, useDistances: false, spotDistanceMm: null, frontDistanceMm: null })), { shouldDirty: true }),
+                onUsePool: (summary) => {
+                  form.setValue('showColumn', true);
+                  form.setValue('column.fractionsPooled', summary, { shouldDirty: true });
+                },
+              })}
+            </div>
+          )}
         </section>
 
         {formMessage && <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-sm text-failed">{formMessage}</p>}

@@ -1,11 +1,11 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import type { RecordDto } from '../../../../shared/schemas/record';
 import { Button } from '../../../components/ui/button';
 import { useRemovePhoto, useUploadPhoto } from '../api/photos';
 import { PhotoDrop } from './photo-drop';
 
 /** Plate photos as thumbnails opening the full image; editors add and remove them here. */
-export function RecordPhotos({ record }: { record: RecordDto }) {
+export function RecordPhotos({ record, photoMarks }: { record: RecordDto; photoMarks?: (photo: RecordDto['photos'][number]) => ReactNode }) {
   const upload = useUploadPhoto();
   const remove = useRemovePhoto(record.id);
   const [files, setFiles] = useState<File[]>([]);
@@ -34,6 +34,7 @@ export function RecordPhotos({ record }: { record: RecordDto }) {
               </a>
               <p className="text-2xs text-ink-soft">{photo.uploadedBy.name} · <span className="figure">{(photo.byteSize / 1024).toFixed(0)} kB</span></p>
               {record.canEdit && <Button size="sm" variant="quiet" onClick={() => remove.mutate(photo.id)} aria-label={`Remove photo ${photo.id}`}>Remove</Button>}
+              {photoMarks?.(photo)}
             </li>
           ))}
         </ul>
