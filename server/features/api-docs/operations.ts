@@ -22,7 +22,8 @@ import {
   statusChangeResultSchema,
   unmergeResultSchema,
 } from '../../../shared/schemas/curation-dto';
-import { importDtoSchema, importListSchema, importPreviewSchema } from '../../../shared/schemas/import';
+import { importDtoSchema, importListSchema, importPreviewSchema, undoPlanSchema } from '../../../shared/schemas/import';
+import { photoAnnotationHistorySchema, photoAnnotationSchema, plateReadingSchema } from '../../../shared/schemas/plates';
 import { scoutResultSchema } from '../../../shared/schemas/scout';
 import { columnPlanResultSchema, translateEluentResultSchema } from '../../../shared/schemas/tools';
 import { searchContributorsSchema, searchResponseSchema } from '../../../shared/schemas/search';
@@ -372,6 +373,37 @@ export const operations: Record<string, OperationText> = {
     tag: 'Imports',
     summary: 'The rows an import kept out, as CSV',
     answers: [{ status: 200, description: 'CSV.', media: { type: 'text/csv' } }],
+  },
+  'GET /api/imports/{id}/warnings.csv': {
+    tag: 'Imports',
+    summary: 'The rows an import took in with warnings (and why), as CSV',
+    answers: [{ status: 200, description: 'CSV.', media: { type: 'text/csv' } }],
+  },
+  'GET /api/imports/{id}/undo-plan': {
+    tag: 'Imports',
+    summary: 'What undoing the import would do to its records, merged and edited ones included',
+    answers: [ok(undoPlanSchema)],
+  },
+  'POST /api/plates/read': {
+    tag: 'Plates',
+    summary: 'Read plates, origin and front, lanes and spots (with Rf) from a plate photo; nothing is stored',
+    answers: [ok(plateReadingSchema, 'Plates left to right, lanes left to right, spots by Rf ascending.')],
+    extra: { multipart: z.object({ photo: fileField('A JPEG, PNG or WebP photo of one or more plates.') }) },
+  },
+  'GET /api/plates/photos/{id}/annotation': {
+    tag: 'Plates',
+    summary: "A record photo's plate marks (the overlay editor's latest revision)",
+    answers: [ok(photoAnnotationSchema)],
+  },
+  'GET /api/plates/photos/{id}/annotation/revisions': {
+    tag: 'Plates',
+    summary: "Every revision of a record photo's plate marks",
+    answers: [ok(photoAnnotationHistorySchema)],
+  },
+  'PUT /api/plates/photos/{id}/annotation': {
+    tag: 'Plates',
+    summary: "Save a new revision of a record photo's plate marks",
+    answers: [ok(photoAnnotationSchema)],
   },
   'POST /api/imports/{id}/resume': {
     tag: 'Imports',
