@@ -86,7 +86,7 @@ describe('StructureInput', () => {
 
   it('when the server refuses an impossible valence (bromine in a ring, one misplaced click), then the preview names the atom and its element before saving', async () => {
     const message = 'Atom 5 at position 8 (Br) is double-bonded to carbon; a halogen binds carbon by one single bond.';
-    parseServer(() => ({ status: 422, body: { error: { code: 'valence', message, details: { atom: 5, position: 8, token: 'Br' } } } }));
+    parseServer(() => ({ status: 422, body: { error: { code: 'valence', message, details: [{ path: '', message, atom: 5, position: 8, token: 'Br' }] } } }));
     renderWithProviders(<Harness />);
     fireEvent.change(screen.getByLabelText('SMILES or molfile'), { target: { value: 'C1=NC=CBr=C1' } });
     const alert = await screen.findByRole('alert', {}, { timeout: 3000 });
