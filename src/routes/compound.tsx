@@ -58,24 +58,24 @@ export default function CompoundPage() {
   const lanes = lanesOf(compound.records);
   return (
     <article className="space-y-5">
-      <header className="flex flex-wrap items-start gap-5">
-        <StructureImage compoundId={compound.id} name={title} size="lg" link={false} />
-        <div className="min-w-0 flex-1 space-y-2">
+      <header className="grid gap-5 sm:grid-cols-[auto_minmax(0,1fr)] lg:grid-cols-[auto_minmax(0,1fr)_auto]">
+        <StructureImage compoundId={compound.id} name={title} size="lg" link={false} className="max-sm:w-full" />
+        <div className="min-w-0 space-y-2">
           <p className="text-xs text-ink-soft">Compound <span className="figure">#{compound.id}</span></p>
           <div className="flex items-start gap-2">
-            <h1 className="text-2xl font-semibold">{title}</h1>
+            <h1 className="min-w-0 flex-1 text-2xl font-semibold">{title}</h1>
             <BookmarkToggle compoundId={compound.id} label={`compound ${title}`} />
           </div>
           {compound.synonyms.length > 0 && <p className="text-sm text-ink-soft">Also: {compound.synonyms.join(', ')}</p>}
           <p className="figure break-all text-sm">{compound.canonicalSmiles}</p>
           <div className="flex flex-wrap gap-1.5">
-            {compound.classes.map((key) => <Link key={key} to={`/classes/${key}`}><Chip tone="front">{className(key)}</Chip></Link>)}
+            {compound.classes.map((key) => <Link key={key} to={`/classes/${key}`} className="inline-flex min-h-6 items-center"><Chip tone="front">{className(key)}</Chip></Link>)}
           </div>
           <p className="text-sm">
-            <Link className="text-front underline" to={`/records?compoundId=${compound.id}&status=all`}>All records of this compound in the table</Link>
+            <Link className="inline-block min-h-6 py-0.5 text-front underline" to={`/records?compoundId=${compound.id}&status=all`}>All records of this compound in the table</Link>
           </p>
         </div>
-        <Card title="Descriptors" className="min-w-64"><DescriptorTable descriptors={compound.descriptors} /></Card>
+        <Card title="Descriptors" className="sm:col-span-2 lg:col-span-1 lg:min-w-64"><DescriptorTable descriptors={compound.descriptors} /></Card>
       </header>
 
       {lanes.length > 0 && (

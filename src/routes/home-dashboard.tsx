@@ -26,8 +26,8 @@ export default function HomeDashboard({ name }: { name: string }) {
       </header>
       <Card><QuickScout /></Card>
       {overview.data ? <GrowthCounts overview={overview.data} /> : overview.error ? <p role="alert" className="text-failed">{overview.error.message}</p> : null}
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-        <Card title="New in the group" actions={<Link to="/records" className="text-front hover:underline">All records</Link>}>
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <Card title="New in the group" actions={<Link to="/records" className="inline-block min-h-6 py-0.5 text-front hover:underline">All records</Link>}>
           {latest.isLoading ? (
             <PageLoading label="Loading records…" />
           ) : latest.data && latest.data.items.length > 0 ? (
@@ -38,7 +38,7 @@ export default function HomeDashboard({ name }: { name: string }) {
             </EmptyState>
           )}
         </Card>
-        <Card title="My bookmarks" actions={<Link to="/bookmarks" className="text-front hover:underline">All bookmarks ({mine.length})</Link>}>
+        <Card title="My bookmarks" actions={<Link to="/bookmarks" className="inline-block min-h-6 py-0.5 text-front hover:underline">All bookmarks ({mine.length})</Link>}>
           {bookmarks.isLoading ? (
             <PageLoading label="Loading bookmarks…" />
           ) : mine.length > 0 ? (

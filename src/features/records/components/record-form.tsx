@@ -16,6 +16,7 @@ import { VisualisationChips } from './visualisation-chips';
 import { CautionsFor } from './cautions-for';
 import type { RecordFormValues } from './record-form-values';
 import { mapServerErrors } from './server-errors';
+import { RecentCompounds } from './recent-compounds';
 
 interface RecordFormProps<Out> {
   defaultValues: RecordFormValues;
@@ -53,7 +54,8 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
         <section className="space-y-3 rounded-plate border border-line bg-surface p-4">
           <Controller control={control} name="structure" render={({ field }) => (
             <StructureInput value={field.value} onChange={(text, parsed) => { field.onChange(text); if (parsed?.name && !form.getValues('name')) form.setValue('name', parsed.name); }}
-              required error={errors.structure?.message} defaultMode="paste" />
+              required error={errors.structure?.message} defaultMode="paste"
+              extra={<RecentCompounds onPick={(smiles, name) => { field.onChange(smiles); if (name && !form.getValues('name')) form.setValue('name', name); }} />} />
           )} />
           <TextField label="Compound name" hint="Optional; kept as the compound’s name or added to its synonyms." className="max-w-md" {...register('name')} />
         </section>

@@ -9,6 +9,8 @@ import { StructureImage } from '../../../components/structure-image';
 import { DemoMark } from '../../../components/ui/demo-mark';
 import { OutcomeBadge } from '../../../components/ui/outcome-badge';
 import { Score } from './score';
+import { formatDate } from '../../../lib/dates';
+import { strongShareLabel } from '../../../lib/strong-share';
 
 const column = createColumnHelper<SearchRecordHit>();
 const nameOf = (hit: SearchRecordHit) => hit.record.compound.name ?? hit.record.compound.canonicalSmiles;
@@ -42,7 +44,7 @@ function columns(action?: (hit: SearchRecordHit) => ReactNode) {
         return (
           <div className="figure text-xs">
             <p>{eluentSummary.notation}</p>
-            {eluentSummary.strongPercent !== null && eluent.components.length > 1 && <p className="text-ink-soft">{formatNumber(eluentSummary.strongPercent, 1)} % strong</p>}
+            {eluentSummary.strongPercent !== null && eluent.components.length > 1 && <p className="text-ink-soft">{strongShareLabel(eluentSummary)}</p>}
           </div>
         );
       },
@@ -58,7 +60,7 @@ function columns(action?: (hit: SearchRecordHit) => ReactNode) {
     column.display({
       id: 'who',
       header: 'Contributor · added',
-      cell: ({ row }) => <span className="text-xs">{row.original.record.author.name}<br /><time className="figure" dateTime={row.original.record.createdAt}>{row.original.record.createdAt.slice(0, 10)}</time></span>,
+      cell: ({ row }) => <span className="text-xs">{row.original.record.author.name}<br /><time className="figure" dateTime={row.original.record.createdAt}>{formatDate(row.original.record.createdAt)}</time></span>,
     }),
   ];
 }
@@ -67,7 +69,7 @@ function columns(action?: (hit: SearchRecordHit) => ReactNode) {
 export function ResultsTable({ hits, action }: { hits: SearchRecordHit[]; action?: (hit: SearchRecordHit) => ReactNode }) {
   const table = useReactTable({ data: hits, columns: columns(action), getCoreRowModel: getCoreRowModel(), getRowId: (hit) => String(hit.recordId) });
   return (
-    <div className="overflow-x-auto rounded-plate border border-line bg-surface">
+    <div className="relative overflow-x-auto rounded-plate border border-line bg-surface">
       <table className="w-full text-sm">
         <thead className="border-b border-line bg-plate text-left text-xs text-ink-soft">
           {table.getHeaderGroups().map((group) => (
