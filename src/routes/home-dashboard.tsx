@@ -13,7 +13,7 @@ import { useRecords } from '../features/records/api/list-records';
 const SHOWN = 6;
 
 /** A signed-in member's home: Scout box, counts of the base, what is new in the group and their bookmarks. */
-export default function HomeDashboard({ name }: { name: string }) {
+export default function HomeDashboard({ name, firstSignIn }: { name: string; firstSignIn: boolean }) {
   const overview = useOverview();
   const latest = useRecords({ sort: 'createdAt', order: 'desc', page: 1, pageSize: SHOWN });
   const bookmarks = useBookmarks();
@@ -21,7 +21,7 @@ export default function HomeDashboard({ name }: { name: string }) {
   return (
     <section className="space-y-5">
       <header>
-        <h1 className="text-2xl font-semibold">Welcome back, {name}</h1>
+        <h1 className="text-2xl font-semibold">{firstSignIn ? 'Welcome' : 'Welcome back'}, {name}</h1>
         <p className="mt-1 text-sm text-ink-soft">What the group has purified lately, what you keep close, and a quick start for a new compound.</p>
       </header>
       <Card><QuickScout /></Card>

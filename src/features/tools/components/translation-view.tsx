@@ -5,6 +5,9 @@ import type { TranslateEluentResult } from '../../../../shared/schemas/tools';
 
 const label = (key: string) => solventByKey(key)?.label ?? key;
 
+/** How sure a handbook value is, in words a reader uses (the catalogue's provenance codes stay internal). */
+const provenanceWords: Record<string, string> = { confirmed: 'checked against its source', 'from-memory': 'recalled, not yet checked', estimate: 'estimated' };
+
 function Hazards({ title, items }: { title: string; items: TranslateEluentResult['hazards']['source'] }) {
   return (
     <div>
@@ -30,7 +33,7 @@ export function TranslationView({ result }: { result: TranslateEluentResult }) {
       <p className="figure text-2xl text-ink" data-testid="translated-eluent">
         {result.target.components.map((part) => `${formatNumber((100 * part.parts) / total, 1)} % ${label(part.solvent)}`).join(' · ')} {additives}
       </p>
-      <p className="text-2xs text-ink-soft">ε° {result.target.epsilon.toFixed(3)} · {result.equation} · values: {result.values.map((item) => `${item.quantity} ${label(item.solvent)} ${formatNumber(item.value.value, 2)} (${item.value.provenance})`).join('; ')}</p>
+      <p className="text-2xs text-ink-soft">ε° {result.target.epsilon.toFixed(3)} · {result.equation} · values: {result.values.map((item) => `${item.quantity} ${label(item.solvent)} ${formatNumber(item.value.value, 2)} (${provenanceWords[item.value.provenance] ?? 'source not given'})`).join('; ')}</p>
       {result.warnings.length > 0 && <ul className="list-disc space-y-1 pl-5 text-sm text-ink">{result.warnings.map((warning) => <li key={warning}>{warning}</li>)}</ul>}
       <div className="grid gap-3 sm:grid-cols-2">
         <Hazards title="Hazards of the source eluent" items={result.hazards.source} />
