@@ -48,7 +48,7 @@ export default function CurationMergePage() {
         <h1 className="text-2xl font-semibold">Merge records {ids.map((id) => `#${id}`).join(', ')}</h1>
         <p className="mt-1 max-w-3xl text-sm text-ink-soft">
           The survivor keeps its own value for every field unless you pick another record's. Spots, plate photos, visualisations, notes,
-          bookmarks and contributor credits of all records are united on the survivor; nothing is deleted.
+          bookmarks and contributor credits of all records are united on the survivor — one target spot, each stain once; nothing is deleted.
         </p>
       </header>
       {preview.isLoading ? (
@@ -72,7 +72,7 @@ export default function CurationMergePage() {
             />
           </Card>
           <Card title="After the merge">
-            <MergeSummary survivorId={survivorId} united={preview.data!.united} mergedIds={mergedIds} />
+            <MergeSummary survivorId={survivorId} united={preview.data!.united} mergedIds={mergedIds} records={preview.data!.records} />
             <div className="mt-4 flex flex-wrap items-center gap-3">
               <Button variant="primary" disabled={merge.isPending || preview.data!.problems.length > 0} onClick={confirm}>
                 Merge into #{survivorId}
