@@ -16,7 +16,7 @@ export function ResultsGrid({ hits, action }: { hits: SearchCompoundHit[]; actio
             <div className="flex items-start justify-between gap-2">
               <div className="min-w-0">
                 <Link to={`/compounds/${hit.id}`} className="block truncate font-medium text-front hover:underline" title={name}>{name}</Link>
-                <p className="figure text-2xs text-ink-soft">{hit.compound.formula} · {hit.compound.mw.toFixed(1)} g/mol</p>
+                <p className="figure text-2xs text-ink-soft">{hit.compound.formula} · {hit.compound.mw.toFixed(2)} g/mol</p>
               </div>
               <div className="flex items-center gap-1">
                 <Score similarity={hit.similarity} relevance={hit.relevance} />
