@@ -68,7 +68,7 @@ export default function CompoundPage() {
   const { lanes, shared } = lanesOf(compound.records);
   return (
     <article className="space-y-5">
-      <header className="grid gap-5 sm:grid-cols-[auto_minmax(0,1fr)] lg:grid-cols-[auto_minmax(0,1fr)_auto]">
+      <header className="grid grid-cols-1 gap-5 sm:grid-cols-[auto_minmax(0,1fr)] lg:grid-cols-[auto_minmax(0,1fr)_auto]">
         <StructureImage compoundId={compound.id} name={title} size="lg" link={false} className="max-sm:w-full" />
         <div className="min-w-0 space-y-2">
           <p className="text-xs text-ink-soft">Compound <span className="figure">#{compound.id}</span></p>

@@ -41,7 +41,7 @@ export default function RecordPage() {
     <article className="space-y-5">
       {notice && <p role="status" className="rounded-plate border border-line bg-surface px-3 py-2 text-sm">{notice}</p>}
       {record.status === 'merged' && record.mergedIntoId && <MergedNotice mergedIntoId={record.mergedIntoId} />}
-      <header className="grid gap-5 sm:grid-cols-[auto_minmax(0,1fr)] lg:grid-cols-[auto_minmax(0,1fr)_auto]">
+      <header className="grid grid-cols-1 gap-5 sm:grid-cols-[auto_minmax(0,1fr)] lg:grid-cols-[auto_minmax(0,1fr)_auto]">
         <StructureImage compoundId={record.compound.id} name={title} size="lg" className="max-sm:w-full" />
         <div className="min-w-0 space-y-2">
           <p className="text-xs text-ink-soft">Condition record <span className="figure">#{record.id}</span> · r{record.revision}</p>

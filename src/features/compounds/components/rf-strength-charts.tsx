@@ -8,7 +8,7 @@ export function RfStrengthCharts({ records }: { records: RecordListItem[] }) {
   const series = rfSeries(records);
   if (series.length === 0) return <p className="text-sm text-ink-soft">No two-solvent TLC record with a target spot yet: nothing to chart.</p>;
   return (
-    <div className="grid gap-4 md:grid-cols-2">
+    <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
       {series.map((entry) => {
         const maxPercent = Math.max(...entry.points.map((point) => point.percent));
         return (

@@ -7,7 +7,7 @@ export function MergeSummary({ survivorId, united, mergedIds, records }: { survi
   const values = unitedValues(records, survivorId);
   return (
     <div className="space-y-1 text-sm">
-      <dl className="grid gap-x-3 gap-y-1 sm:grid-cols-[8rem_minmax(0,1fr)]">
+      <dl className="grid grid-cols-1 gap-x-3 gap-y-1 sm:grid-cols-[8rem_minmax(0,1fr)]">
         <dt className="font-medium">Spots</dt>
         <dd className="figure text-xs">{spotsText(values.spots)}</dd>
         <dt className="font-medium">Visualisation</dt>

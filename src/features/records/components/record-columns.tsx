@@ -22,7 +22,7 @@ export const recordColumns: RecordColumn[] = [
     id: 'compound', meta: { label: 'Compound', sortKey: 'compound' }, header: 'Compound',
     cell: ({ row }) => (
       <div className="min-w-40">
-        <Link to={`/records/${row.original.id}`} className="font-medium text-front hover:underline">{name(row.original)}</Link>
+        <Link to={`/records/${row.original.id}`} className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline">{name(row.original)}</Link>
         {row.original.demo && <DemoMark className="ml-1" />}
         {row.original.status !== 'active' && <span className="ml-1 text-2xs uppercase text-failed">{row.original.status}</span>}
         <p className="figure text-2xs text-ink-soft">#{row.original.id} · {row.original.compound.formula}</p>

@@ -24,7 +24,7 @@ function columns(action?: (hit: SearchRecordHit) => ReactNode) {
       header: 'Compound · record',
       cell: ({ row }) => (
         <div className="min-w-40">
-          <Link to={`/records/${row.original.recordId}`} className="font-medium text-front hover:underline">{nameOf(row.original)}</Link>
+          <Link to={`/records/${row.original.recordId}`} className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline">{nameOf(row.original)}</Link>
           {row.original.record.demo && <DemoMark className="ml-1" />}
           <p className="figure text-2xs text-ink-soft">record #{row.original.recordId} · {row.original.record.compound.formula}</p>
         </div>
