@@ -16,6 +16,7 @@ export interface RecordState {
   column: Record<string, unknown> | null;
   notebookRef: string | null;
   notes: string | null;
+  runOn?: string | null;
   status: string;
   photoIds: number[];
 }
@@ -53,6 +54,7 @@ export async function loadRecordState(recordId: number, transaction?: Transactio
     column: columnOf(record),
     notebookRef: record.notebookRef,
     notes: record.notes,
+    runOn: record.runOn ?? null,
     status: record.status,
     photoIds: photos.map((photo) => photo.id),
   };

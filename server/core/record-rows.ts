@@ -46,6 +46,7 @@ export function contentColumns(content: RecordContent) {
     ...columnAttributes(content.column),
     notebookRef: content.notebookRef,
     notes: content.notes,
+    runOn: content.runOn ?? null,
     contentHash: recordContentHash(content),
   };
 }
@@ -91,6 +92,7 @@ function initialState(record: ConditionRecord, content: RecordContent): RecordSt
     column: columnOf(record),
     notebookRef: record.notebookRef,
     notes: record.notes,
+    runOn: record.runOn ?? null,
     status: 'active',
     photoIds: [],
   };

@@ -63,6 +63,7 @@ export default function RecordPage() {
             {record.status === 'retired' && <Chip tone="spot">retired</Chip>}
           </div>
           <p className="text-sm text-ink-soft">
+            {record.runOn && <>Plate run on <time dateTime={record.runOn}>{formatDate(record.runOn)}</time> · </>}
             By {record.author.name} on <time dateTime={record.createdAt}>{formatDate(record.createdAt)}</time>
             {record.notebookRef && <> · notebook <span className="figure">{record.notebookRef}</span></>}
           </p>

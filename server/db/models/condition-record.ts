@@ -36,6 +36,8 @@ export class ConditionRecord extends Model<InferAttributes<ConditionRecord>, Inf
   declare yieldPercent: number | null;
   declare purityNote: string | null;
   declare notebookRef: string | null;
+  /** The day the plate was run (YYYY-MM-DD), when given. */
+  declare runOn: CreationOptional<string | null>;
   declare notes: string | null;
   declare status: CreationOptional<RecordStatus>;
   declare mergedIntoId: CreationOptional<number | null>;
@@ -80,6 +82,7 @@ ConditionRecord.init(
     yieldPercent: number(),
     purityNote: text(),
     notebookRef: text(),
+    runOn: { type: DataTypes.DATEONLY, allowNull: true },
     notes: text(),
     status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'active' },
     mergedIntoId: { type: DataTypes.INTEGER, allowNull: true },

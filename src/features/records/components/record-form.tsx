@@ -83,7 +83,8 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
 
         <section className="grid grid-cols-1 gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
           <TextField label="Notebook reference" placeholder="e.g. AB-03 p. 41" mono error={errors.notebookRef?.message} {...register('notebookRef')} />
-          <TextAreaField label="Notes" rows={3} className="sm:col-span-2" error={errors.notes?.message} {...register('notes')} />
+          <TextField label="Plate run on" type="date" hint="The day you ran the plate, if not today." error={errors.runOn?.message} {...register('runOn')} />
+          <TextAreaField label="Notes" rows={3} className="sm:col-span-3" error={errors.notes?.message} {...register('notes')} />
           {withPhotos && <div className="sm:col-span-3"><PhotoDrop files={photos} onChange={setPhotos} /></div>}
         </section>
 
