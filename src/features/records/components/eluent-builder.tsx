@@ -53,7 +53,7 @@ export function EluentBuilder() {
         {components.fields.map((field, index) => {
           const parts = eluent.components[index]?.parts ?? null;
           return (
-            <div key={field.id} className="grid grid-cols-[minmax(0,1fr)_5.5rem_3.5rem_auto] items-start gap-2 sm:grid-cols-[minmax(0,1fr)_8rem_5rem_5rem]">
+            <div key={field.id} role="group" aria-label={`Solvent ${index + 1} of the eluent`} className="grid grid-cols-[minmax(0,1fr)_5.5rem_3.5rem_auto] items-start gap-2 sm:grid-cols-[minmax(0,1fr)_8rem_5rem_5rem]">
               <div className="min-w-0">
                 <select aria-label={`Solvent ${index + 1}`} className={`${controlClass} min-h-10`} {...register(`eluent.components.${index}.solvent`)}>
                   {solventOptions.map((option) => <option key={option.value} value={option.value}>{option.label}</option>)}
