@@ -85,6 +85,7 @@ describe('contributing from a phone', () => {
     await page.getByText('C7H7ClO').first().waitFor({ timeout: 20_000 }); // the server's parse of 4-chlorobenzyl alcohol
     await page.getByLabel('Compound name').fill('4-chlorobenzyl alcohol (phone e2e)');
     await page.getByLabel('Spot 1 Rf').fill('0.28');
+    await page.getByRole('button', { name: 'KMnO4' }).tap();
 
     // The ratio changes after the Rf was typed: the form asks whether the Rf still holds.
     await page.getByLabel('Parts of solvent 2').fill('3');
@@ -120,12 +121,15 @@ describe('contributing from a phone', () => {
 
     await page.getByRole('link', { name: '4-chlorobenzyl alcohol (phone e2e)' }).first().tap();
     await page.waitForURL(/\/compounds\/\d+$/);
-    await page.getByRole('heading', { level: 1 }).waitFor();
+    await page.getByRole('heading', { level: 1, name: '4-chlorobenzyl alcohol (phone e2e)' }).waitFor();
+    await page.getByRole('heading', { name: /^Records \(\d+\)$/ }).waitFor();
+    await page.waitForLoadState('networkidle');
     expect((await measureLayout(page)).scrollWidth).toBeLessThanOrEqual(390);
     await shot(page, 'phone-compound');
 
     await page.goto(`${baseUrl}/search?q=KMnO4`);
     await page.waitForLoadState('networkidle');
+    await page.getByRole('link', { name: '4-chlorobenzyl alcohol (phone e2e)' }).first().waitFor();
     expect((await measureLayout(page)).scrollWidth).toBeLessThanOrEqual(390);
     await shot(page, 'phone-search');
   });
