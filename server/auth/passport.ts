@@ -17,6 +17,8 @@ declare global {
 declare module 'express-session' {
   interface SessionData {
     signedInAt?: number;
+    /** This session began the account's first sign-in ever (the home page then says "Welcome", not "Welcome back"). */
+    firstSignIn?: boolean;
   }
 }
 
@@ -25,7 +27,9 @@ passport.use(
     try {
       const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
       const ok = await verifyPassword(password, user?.passwordHash ?? dummyHash);
-      if (!user || !ok || user.status !== 'active') return done(null, false);
+      if (!user || !ok) return done(null, false);
+      // Only someone who knows the password learns that the account is disabled.
+      if (user.status !== 'active') return done(null, false, { message: 'disabled' });
       done(null, toSessionUser(user));
     } catch (err) {
       done(err);

@@ -17,6 +17,8 @@ export interface RecordContent {
   column: ColumnDetails | null;
   notebookRef: string | null;
   notes: string | null;
+  /** The day the plate was run (YYYY-MM-DD); not part of the content hash (the same conditions on another day are the same). */
+  runOn?: string | null;
 }
 
 const round = (value: number, places: number) => Math.round(value * 10 ** places) / 10 ** places;

@@ -79,6 +79,7 @@ export function presentRecordListItem(record: LoadedRecord, photoCount: number):
     outcome: record.outcome,
     yieldPercent: record.yieldPercent,
     notebookRef: record.notebookRef,
+    runOn: record.runOn ?? null,
     photoCount,
     demo: record.demo,
     createdAt: record.createdAt.toISOString(),

@@ -16,6 +16,7 @@ export interface RecordState {
   column: Record<string, unknown> | null;
   notebookRef: string | null;
   notes: string | null;
+  runOn?: string | null;
   status: string;
   photoIds: number[];
 }
@@ -59,6 +60,7 @@ export function recordState(
     column: columnOf(record),
     notebookRef: record.notebookRef,
     notes: record.notes,
+    runOn: record.runOn ?? null,
     status: record.status,
     photoIds,
   };

@@ -46,6 +46,7 @@ export function contentColumns(content: RecordContent) {
     ...columnAttributes(content.column),
     notebookRef: content.notebookRef,
     notes: content.notes,
+    runOn: content.runOn ?? null,
     contentHash: recordContentHash(content),
   };
 }

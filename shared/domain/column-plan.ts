@@ -50,7 +50,7 @@ function gradientAdvice(rfTarget: number): ColumnPlan['gradient'] {
     return { mode: 'step-gradient', advice: `At Rf ${rfTarget} the target needs about ${Math.round(1 / rfTarget)} CV isocratic: run 2–3 CV in this eluent to clear faster spots, then step to a stronger one.` };
   }
   if (rfTarget > 0.35) return { mode: 'isocratic', advice: 'Weaken the eluent until the target runs at Rf 0.2–0.35, then run isocratic.' };
-  return { mode: 'isocratic', advice: `Isocratic: the target should elute after about ${Math.round(10 / rfTarget) / 10} CV.` };
+  return { mode: 'isocratic', advice: `The target should elute after about ${Math.round(10 / rfTarget) / 10} CV.` };
 }
 
 function loadAdvice(sampleMg: number, deltaRf: number | null): ColumnPlan['load'] {

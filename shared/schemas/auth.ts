@@ -27,7 +27,7 @@ export const sessionUserSchema = z.object({
 });
 export type SessionUser = z.infer<typeof sessionUserSchema>;
 
-export const meResponseSchema = z.object({ user: sessionUserSchema.nullable() });
+export const meResponseSchema = z.object({ user: sessionUserSchema.nullable(), firstSignIn: z.boolean().optional() });
 
 /** A new password: at least 12 characters and none of the common or predictable ones (see password-rules.ts). */
 export const newPasswordSchema = z.string().superRefine((value, ctx) => {

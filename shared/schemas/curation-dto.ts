@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { outcomes, recordStatuses, techniques } from './record-parts';
+import { outcomes, recordStatuses, spotRoles, techniques } from './record-parts';
 import { mergeableFields } from './curation-fields';
 
 /** A record as the curation screens show it: enough to judge whether two records say the same thing. */
@@ -94,7 +94,13 @@ export type UnitedCounts = z.infer<typeof countsSchema>;
 
 /** `GET /api/curation/merge-preview?ids=…`: side-by-side values, per-record and united counts, and blockers. */
 export const mergePreviewSchema = z.object({
-  records: z.array(curationRecordSchema.extend({ notes: z.string().nullable(), counts: countsSchema })),
+  records: z.array(curationRecordSchema.extend({
+    notes: z.string().nullable(),
+    counts: countsSchema,
+    /** Each spot of the record's plate, in plate order, and each visualisation, so the merge screen shows values, not counts. */
+    spots: z.array(z.object({ role: z.enum(spotRoles), rf: z.number(), label: z.string().nullable() })),
+    stains: z.array(z.object({ method: z.string(), note: z.string().nullable(), label: z.string() })),
+  })),
   fields: z.array(mergeFieldSchema),
   /** After the merge: spots, photos and visualisations summed; bookmarks counted once per user; contributors once per person. */
   united: countsSchema,

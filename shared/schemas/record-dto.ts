@@ -78,6 +78,7 @@ export const recordListItemSchema = z.object({
   outcome: z.enum(outcomes),
   yieldPercent: z.number().nullable(),
   notebookRef: z.string().nullable(),
+  runOn: z.string().nullable().optional(),
   photoCount: z.number().int(),
   demo: z.boolean(),
   createdAt: z.string(),

@@ -31,6 +31,12 @@ const recordFields = z.object({
   column: columnDetailsSchema.nullish().transform((value) => value ?? null),
   notebookRef: optionalText(120),
   notes: optionalText(10_000),
+  /** The day the plate was run (YYYY-MM-DD): not in the future (a day's grace for time zones), not before 1900. */
+  runOn: z.iso
+    .date('Give the date as YYYY-MM-DD.')
+    .refine((day) => day >= '1900-01-01' && Date.parse(`${day}T00:00:00Z`) <= Date.now() + 86_400_000, 'The plate cannot have been run in the future.')
+    .nullish()
+    .transform((value) => value ?? null),
 });
 
 /** Structure text (SMILES or molfile) or an existing compound's id; the chemistry engine checks the size and content. */

@@ -9,7 +9,7 @@ export function AccountMenu() {
   const user = data?.user;
   if (!user) {
     return (
-      <Link to="/sign-in" className="text-sm font-medium text-front hover:underline">
+      <Link to="/sign-in" className="inline-block min-h-6 py-0.5 text-sm font-medium text-front hover:underline">
         Sign in
       </Link>
     );

@@ -55,8 +55,8 @@ export function AppLayout() {
       </main>
       <footer className="border-t border-line text-xs text-ink-soft">
         <div className="mx-auto max-w-7xl px-4 py-3 flex flex-wrap gap-4">
-          <span>Rfolio — the group's purification memory.</span>
-          <Link to="/cautions" className="text-front underline">
+          <span className="py-1">Rfolio — the group's purification memory.</span>
+          <Link to="/cautions" className="inline-block min-h-6 py-0.5 text-front underline">
             Lab cautions
           </Link>
         </div>

@@ -37,7 +37,7 @@ export default function AcceptInvitationPage() {
   if (preview.isLoading) return <PageLoading />;
   const inv = preview.data;
   return (
-    <AuthCard title="Join your group’s Rfolio" footer={<Link to="/sign-in" className="text-front hover:underline">Already have an account? Sign in</Link>}>
+    <AuthCard title="Join your group’s Rfolio" footer={<Link to="/sign-in" className="inline-block min-h-6 py-0.5 text-front hover:underline">Already have an account? Sign in</Link>}>
       {!inv ? (
         <FormAlert>{preview.error?.message ?? 'This invitation could not be read.'}</FormAlert>
       ) : (

@@ -3,6 +3,7 @@ import { EmptyState } from '../components/ui/empty-state';
 import { PageLoading } from '../components/ui/page-loading';
 import { useMailbox } from '../features/mailbox/api/mailbox';
 import { ApiRequestError } from '../lib/api-client';
+import { formatDateTime } from '../lib/dates';
 
 /** What the app's own SMTP server caught (development, demo and tests); production has no such inbox. */
 export default function AdminMailboxPage() {
@@ -31,7 +32,7 @@ export default function AdminMailboxPage() {
         <ul className="space-y-3" aria-label="Caught messages">
           {data!.items.map((m) => (
             <li key={m.id}>
-              <Card title={m.subject} level={2} actions={<span className="figure text-xs text-ink-soft">{new Date(m.receivedAt).toLocaleString()}</span>}>
+              <Card title={m.subject} level={2} actions={<span className="figure text-xs text-ink-soft">{formatDateTime(m.receivedAt)}</span>}>
                 <p className="text-sm">
                   <span className="text-ink-soft">To</span> <span className="font-medium">{m.to.join(', ')}</span>
                   <span className="ml-3 text-ink-soft">From</span> {m.from}

@@ -20,7 +20,7 @@ export default function AdminUsersPage() {
             Disabling someone signs them out at once. The group always keeps at least one active admin.
           </p>
         </div>
-        <Link to="/admin/mailbox" className="text-sm text-front hover:underline">
+        <Link to="/admin/mailbox" className="inline-block min-h-6 py-0.5 text-sm text-front hover:underline">
           Local test inbox (not in production)
         </Link>
       </header>

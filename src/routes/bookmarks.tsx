@@ -25,7 +25,7 @@ export default function BookmarksPage() {
           Press the ☆ beside a record or a compound — in search results, on a record or on a compound page — to keep it here.
         </EmptyState>
       ) : (
-        <div className="grid gap-4 lg:grid-cols-2">
+        <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
           <Card title={`Records (${records.length})`}>
             {records.length ? <BookmarkList bookmarks={records} /> : <p className="text-sm text-ink-soft">No bookmarked records.</p>}
           </Card>

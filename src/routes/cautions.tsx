@@ -15,7 +15,7 @@ export default function CautionsPage() {
           Reminders of common practice, not a risk assessment. {deferToSafetyOffice}
         </p>
       </header>
-      <div className="grid gap-4 md:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
         {Object.values(cautions).map((caution) => (
           <Card key={caution.key} title={caution.title}><p className="text-sm">{caution.text}</p></Card>
         ))}

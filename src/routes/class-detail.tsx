@@ -21,7 +21,7 @@ export default function ClassPage() {
   return (
     <section className="space-y-4">
       <header className="space-y-2">
-        <p className="text-sm"><Link to="/classes" className="text-front hover:underline">Compound classes</Link> ›</p>
+        <p className="text-sm"><Link to="/classes" className="inline-block min-h-6 py-0.5 text-front hover:underline">Compound classes</Link> ›</p>
         <h1 className="text-2xl font-semibold">{item.name}</h1>
         <p className="max-w-3xl text-sm text-ink-soft">{item.description}</p>
         <p className="flex flex-wrap items-center gap-2 text-xs text-ink-soft">
@@ -39,16 +39,16 @@ export default function ClassPage() {
         </EmptyState>
       ) : (
         <>
-          <div className="grid gap-4 lg:grid-cols-2">
+          <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
             <Card title="Eluent strength (ε°)"><StrengthHistogram strength={item.strength} className={item.name} /></Card>
             <Card title="Rf against composition">{item.rf ? <RfScatter rf={item.rf} /> : <p className="text-sm text-ink-soft">No isocratic pair with a target Rf yet.</p>}</Card>
           </div>
-          <div className="grid gap-4 lg:grid-cols-3">
+          <div className="grid grid-cols-1 gap-4 lg:grid-cols-3">
             <Card title="Solvents used"><SolventPairs pairs={item.solventPairs} /></Card>
             <Card title="Visualisation that showed it"><UsageList items={item.stains} empty="No visualisation recorded." /></Card>
             <Card title="Additives"><UsageList items={item.additives} empty="No additive was needed in any record." /></Card>
           </div>
-          <Card title={`Newest records (${Math.min(item.records.length, item.recordCount)} of ${item.recordCount})`} actions={<Link to={searchAll} className="text-front hover:underline">All in search</Link>}>
+          <Card title={`Newest records (${Math.min(item.records.length, item.recordCount)} of ${item.recordCount})`} actions={<Link to={searchAll} className="inline-block min-h-6 py-0.5 text-front hover:underline">All in search</Link>}>
             <RecordRows records={item.records} />
           </Card>
         </>

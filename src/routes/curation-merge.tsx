@@ -16,7 +16,7 @@ function MergedPanel({ result }: { result: MergeResult }) {
     <Card title={`Merge #${result.mergeId} done`}>
       <p className="text-sm">
         {result.merged.map((record) => `#${record.id}`).join(', ')} now point to{' '}
-        <Link to={`/records/${result.survivor.id}`} className="text-front hover:underline">record #{result.survivor.id}</Link>.
+        <Link to={`/records/${result.survivor.id}`} className="inline-block min-h-6 py-0.5 text-front hover:underline">record #{result.survivor.id}</Link>.
       </p>
       <div className="mt-3 flex gap-2">
         <Link to={`/records/${result.survivor.id}`} className={buttonClass('primary', 'sm')}>Open the survivor</Link>
@@ -44,11 +44,11 @@ export default function CurationMergePage() {
   return (
     <section className="space-y-5">
       <header>
-        <p className="text-sm"><Link to="/curation" className="text-front hover:underline">Curation queue</Link> /</p>
+        <p className="text-sm"><Link to="/curation" className="inline-block min-h-6 py-0.5 text-front hover:underline">Curation queue</Link> /</p>
         <h1 className="text-2xl font-semibold">Merge records {ids.map((id) => `#${id}`).join(', ')}</h1>
         <p className="mt-1 max-w-3xl text-sm text-ink-soft">
           The survivor keeps its own value for every field unless you pick another record's. Spots, plate photos, visualisations, notes,
-          bookmarks and contributor credits of all records are united on the survivor; nothing is deleted.
+          bookmarks and contributor credits of all records are united on the survivor — one target spot, each stain once; nothing is deleted.
         </p>
       </header>
       {preview.isLoading ? (
@@ -72,7 +72,7 @@ export default function CurationMergePage() {
             />
           </Card>
           <Card title="After the merge">
-            <MergeSummary survivorId={survivorId} united={preview.data!.united} mergedIds={mergedIds} />
+            <MergeSummary survivorId={survivorId} united={preview.data!.united} mergedIds={mergedIds} records={preview.data!.records} />
             <div className="mt-4 flex flex-wrap items-center gap-3">
               <Button variant="primary" disabled={merge.isPending || preview.data!.problems.length > 0} onClick={confirm}>
                 Merge into #{survivorId}

@@ -13,7 +13,7 @@ import { useRecords } from '../features/records/api/list-records';
 const SHOWN = 6;
 
 /** A signed-in member's home: Scout box, counts of the base, what is new in the group and their bookmarks. */
-export default function HomeDashboard({ name }: { name: string }) {
+export default function HomeDashboard({ name, firstSignIn }: { name: string; firstSignIn: boolean }) {
   const overview = useOverview();
   const latest = useRecords({ sort: 'createdAt', order: 'desc', page: 1, pageSize: SHOWN });
   const bookmarks = useBookmarks();
@@ -21,13 +21,13 @@ export default function HomeDashboard({ name }: { name: string }) {
   return (
     <section className="space-y-5">
       <header>
-        <h1 className="text-2xl font-semibold">Welcome back, {name}</h1>
+        <h1 className="text-2xl font-semibold">{firstSignIn ? 'Welcome' : 'Welcome back'}, {name}</h1>
         <p className="mt-1 text-sm text-ink-soft">What the group has purified lately, what you keep close, and a quick start for a new compound.</p>
       </header>
       <Card><QuickScout /></Card>
       {overview.data ? <GrowthCounts overview={overview.data} /> : overview.error ? <p role="alert" className="text-failed">{overview.error.message}</p> : null}
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-        <Card title="New in the group" actions={<Link to="/records" className="text-front hover:underline">All records</Link>}>
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <Card title="New in the group" actions={<Link to="/records" className="inline-block min-h-6 py-0.5 text-front hover:underline">All records</Link>}>
           {latest.isLoading ? (
             <PageLoading label="Loading records…" />
           ) : latest.data && latest.data.items.length > 0 ? (
@@ -38,7 +38,7 @@ export default function HomeDashboard({ name }: { name: string }) {
             </EmptyState>
           )}
         </Card>
-        <Card title="My bookmarks" actions={<Link to="/bookmarks" className="text-front hover:underline">All bookmarks ({mine.length})</Link>}>
+        <Card title="My bookmarks" actions={<Link to="/bookmarks" className="inline-block min-h-6 py-0.5 text-front hover:underline">All bookmarks ({mine.length})</Link>}>
           {bookmarks.isLoading ? (
             <PageLoading label="Loading bookmarks…" />
           ) : mine.length > 0 ? (

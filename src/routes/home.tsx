@@ -13,7 +13,7 @@ export function HomePage() {
   if (user) {
     return (
       <Suspense fallback={<PageLoading />}>
-        <HomeDashboard name={user.name} />
+        <HomeDashboard name={user.name} firstSignIn={!!data?.firstSignIn} />
       </Suspense>
     );
   }

@@ -13,7 +13,7 @@ export default function PasswordResetRequestPage() {
   const form = useForm<PasswordResetRequest>({ resolver: zodResolver(passwordResetRequestSchema) });
   const submit = form.handleSubmit((input) => request.mutate(input));
   return (
-    <AuthCard title="Forgot your password?" footer={<Link to="/sign-in" className="text-front hover:underline">Back to sign-in</Link>}>
+    <AuthCard title="Forgot your password?" footer={<Link to="/sign-in" className="inline-block min-h-6 py-0.5 text-front hover:underline">Back to sign-in</Link>}>
       {request.isSuccess ? (
         <FormAlert tone="clean">{request.data.message}</FormAlert>
       ) : (

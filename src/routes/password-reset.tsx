@@ -9,6 +9,7 @@ import { NewPasswordField } from '../features/auth/components/new-password-field
 import { useCompletePasswordReset, useResetPreview } from '../features/auth/api/password-reset';
 import { applyServerErrors } from '../lib/form-errors';
 import { passwordResetSchema, type PasswordResetInput } from '../../shared/schemas/auth';
+import { formatTime } from '../lib/dates';
 
 /** The page behind the mailed reset link: choose a new password, then sign in with it. */
 export default function PasswordResetPage() {
@@ -28,13 +29,13 @@ export default function PasswordResetPage() {
 
   if (preview.isLoading) return <PageLoading />;
   return (
-    <AuthCard title="Choose a new password" footer={<Link to="/password-reset" className="text-front hover:underline">Ask for a new link</Link>}>
+    <AuthCard title="Choose a new password" footer={<Link to="/password-reset" className="inline-block min-h-6 py-0.5 text-front hover:underline">Ask for a new link</Link>}>
       {preview.error ? (
         <FormAlert>{preview.error.message}</FormAlert>
       ) : (
         <form onSubmit={submit} noValidate className="space-y-4">
           <p className="text-sm text-ink-soft">
-            This link works once, until <span className="figure">{new Date(preview.data!.expiresAt).toLocaleTimeString()}</span>. Setting a
+            This link works once, until <span className="figure">{formatTime(preview.data!.expiresAt)}</span>. Setting a
             new password signs you out on every device.
           </p>
           <NewPasswordField error={form.formState.errors.password?.message} {...form.register('password')} />

@@ -21,6 +21,7 @@ import { MergedNotice } from '../features/curation/components/merged-notice';
 import { RetireControl } from '../features/curation/components/retire-control';
 import { BookmarkToggle } from '../features/bookmarks/components/bookmark-toggle';
 import { ColumnPlanPanel } from '../features/tools/components/column-plan-panel';
+import { formatDate } from '../lib/dates';
 
 /** A condition record with every field, its depiction and plate strip, photos, cautions and history. */
 export default function RecordPage() {
@@ -41,17 +42,20 @@ export default function RecordPage() {
     <article className="space-y-5">
       {notice && <p role="status" className="rounded-plate border border-line bg-surface px-3 py-2 text-sm">{notice}</p>}
       {record.status === 'merged' && record.mergedIntoId && <MergedNotice mergedIntoId={record.mergedIntoId} />}
-      <header className="flex flex-wrap items-start gap-5">
-        <StructureImage compoundId={record.compound.id} name={title} size="lg" />
-        <div className="min-w-0 flex-1 space-y-2">
+      <header className="grid grid-cols-1 gap-5 sm:grid-cols-[auto_minmax(0,1fr)] lg:grid-cols-[auto_minmax(0,1fr)_auto]">
+        <StructureImage compoundId={record.compound.id} name={title} size="lg" className="max-sm:w-full" />
+        <div className="min-w-0 space-y-2">
           <p className="text-xs text-ink-soft">Condition record <span className="figure">#{record.id}</span> · r{record.revision}</p>
           <div className="flex items-start gap-2">
-            <h1 className="text-2xl font-semibold">
+            <h1 className="min-w-0 flex-1 text-2xl font-semibold">
               <Link to={`/compounds/${record.compound.id}`} className="hover:underline">{title}</Link>
             </h1>
             <BookmarkToggle recordId={record.id} label={`record ${record.id}, ${title}`} />
           </div>
-          <p className="figure break-all text-sm text-ink-soft">{record.compound.canonicalSmiles} · {record.compound.formula} · {record.compound.mw.toFixed(2)} g/mol</p>
+          <p className="text-sm text-ink-soft">
+            <span className="figure break-all">{record.compound.canonicalSmiles}</span>
+            <span className="figure whitespace-nowrap"> · {record.compound.formula} · {record.compound.mw.toFixed(2)} g/mol</span>
+          </p>
           <div className="flex flex-wrap items-center gap-2">
             <OutcomeBadge outcome={record.outcome} />
             <Chip>{techniqueLabels[record.technique]}</Chip>
@@ -60,8 +64,9 @@ export default function RecordPage() {
             {record.status === 'retired' && <Chip tone="spot">retired</Chip>}
           </div>
           <p className="text-sm text-ink-soft">
+            {record.runOn && <>Plate run on <time dateTime={record.runOn}>{formatDate(record.runOn)}</time> · </>}
             {record.recordedBy ? <>Recorded by {record.recordedBy} (imported by {record.author.name})</> : <>By {record.author.name}</>} on{' '}
-            <time dateTime={record.createdAt}>{record.createdAt.slice(0, 10)}</time>
+            <time dateTime={record.createdAt}>{formatDate(record.createdAt)}</time>
             {record.notebookRef && <> · notebook <span className="figure">{record.notebookRef}</span></>}
           </p>
           {record.sourceTexts && Object.keys(record.sourceTexts).length > 0 && (
@@ -78,7 +83,7 @@ export default function RecordPage() {
           lanes={[{ label: record.eluentSummary.notation, spots: record.spots.map((spot) => ({ rf: spot.rf, role: spot.role, note: spot.label ?? undefined })) }]} />
       </header>
 
-      <div className="grid gap-5 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-5 lg:grid-cols-2">
         <Card title="Eluent">
           <EluentView record={record} />
           {cautions.length > 0 && <div className="mt-3"><HazardLine>{cautions.map((caution) => caution.title).join(' · ')}.</HazardLine></div>}

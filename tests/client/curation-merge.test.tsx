@@ -4,19 +4,21 @@ import userEvent from '@testing-library/user-event';
 import { Route, Routes } from 'react-router-dom';
 import CurationMergePage from '../../src/routes/curation-merge';
 import { renderWithProviders } from '../helpers/render';
-import type { CurationRecord, MergePreview } from '../../shared/schemas/curation';
+import type { MergePreview } from '../../shared/schemas/curation';
 
-const record = (id: number, notebookRef: string): CurationRecord & { notes: string | null; counts: MergePreview['united'] } => ({
+const record = (id: number, notebookRef: string, rf: number, stains: string[]): MergePreview['records'][number] => ({
   id, status: 'active', mergedIntoId: null,
   compound: { id: 3, name: 'benzyl alcohol', synonyms: [], canonicalSmiles: 'OCc1ccccc1' },
   author: { id: id * 10, name: `Author ${id}` }, technique: 'tlc', stationaryPhase: 'silica-gel', stationaryPhaseLabel: 'silica gel 40–63 µm',
   eluentNotation: 'EtOAc : hexanes 1 : 4', strongSolvent: 'ethyl-acetate', strongPercent: 20, targetRf: 0.3, outcome: 'clean',
   notebookRef, revision: 1, createdAt: '2026-01-05T10:00:00.000Z', updatedAt: '2026-01-05T10:00:00.000Z',
   notes: `notes of ${id}`, counts: { spots: 2, photos: 1, visualisations: 2, bookmarks: 1, contributors: 1 },
+  spots: [{ role: 'target', rf, label: null }, { role: 'starting_material', rf: 0.55, label: 'SM' }],
+  stains: stains.map((label) => ({ method: label.toLowerCase(), note: null, label })),
 });
 
 const preview: MergePreview = {
-  records: [record(5, 'AB-1 p. 4'), record(9, 'CD-2 p. 7')],
+  records: [record(5, 'AB-1 p. 4', 0.3, ['KMnO4']), record(9, 'CD-2 p. 7', 0.32, ['KMnO4', 'CAM'])],
   fields: [
     { field: 'technique', label: 'technique', values: [{ recordId: 5, display: 'TLC' }, { recordId: 9, display: 'TLC' }], differs: false },
     { field: 'notebookRef', label: 'notebook reference', values: [{ recordId: 5, display: 'AB-1 p. 4' }, { recordId: 9, display: 'CD-2 p. 7' }], differs: true },
@@ -37,8 +39,8 @@ function stubServer() {
     if (path === '/api/auth/csrf') return json({ token: 't' });
     if (path === '/api/curation/merge' && init?.method === 'POST') {
       sent.push(JSON.parse(String(init.body)));
-      const { counts: _counts, notes: _notes, ...survivor } = preview.records[0];
-      const { counts: _c, notes: _n, ...merged } = preview.records[1];
+      const { counts: _counts, notes: _notes, spots: _spots, stains: _stains, ...survivor } = preview.records[0];
+      const { counts: _c, notes: _n, spots: _s, stains: _st, ...merged } = preview.records[1];
       return json({ mergeId: 41, survivor, merged: [{ ...merged, status: 'merged', mergedIntoId: 5 }] }, 201);
     }
     throw new Error(`unexpected request: ${init?.method ?? 'GET'} ${path}`);
@@ -68,10 +70,16 @@ describe('the merge screen', () => {
     await waitFor(() => expect(sent).toEqual([{ survivorId: 9, mergedIds: [5], fields: {} }]));
   });
 
-  it('shows what will be united: spots, photos, visualisations, bookmarks and people credited', async () => {
+  it('shows what will be united as values: each spot with its role and Rf, the stains once, then photos, bookmarks and people', async () => {
     stubServer();
     renderPage();
-    const summary = await screen.findByText(/will hold/);
-    expect(summary.textContent).toMatch(/4 spots, 2 plate photos and 4 visualisations; 2 people keep their bookmarks on it, and 2 people stay credited/);
+    const summary = await screen.findByText(/will also hold/);
+    expect(summary.textContent).toMatch(/2 plate photos; 2 people keep their bookmarks on it, and 2 people stay credited/);
+    // Side by side: each record's spots (role and Rf) and stains, not counts.
+    expect(screen.getByText('target Rf 0.32 · starting material Rf 0.55 (SM)')).toBeInTheDocument();
+    // United: the survivor's target only (0.32 stays on #9), KMnO4 named once.
+    expect(screen.getByText('target Rf 0.30 · starting material Rf 0.55 (SM) · starting material Rf 0.55 (SM)')).toBeInTheDocument();
+    expect(screen.getAllByText('KMnO4, CAM')).toHaveLength(2);
+    expect(screen.getByText(/stays on its merged record \(2 in all\)/)).toBeInTheDocument();
   });
 });

@@ -42,16 +42,21 @@ describe('PATCH /api/admin/users/:id', () => {
   it('when an admin disables someone, then their open session ends at once and they cannot sign in; enabling lets them back', async () => {
     const admin = await agentFor(app, 'admin');
     const member = await agentFor(app, 'member');
+    expect((await member.get('/api/auth/me')).body.firstSignIn).toBe(true);
     const off = await admin.patch(`/api/admin/users/${member.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ status: 'disabled' });
     expect(off.body.status).toBe('disabled');
     expect((await member.get('/api/auth/me')).body.user).toBeNull();
     const retry = await agentFor(app);
     const login = await retry.post('/api/auth/login').set('X-CSRF-Token', retry.csrf).send({ email: member.user!.email, password: 'correct-horse-battery-42' });
-    expect(login.status).toBe(401);
+    expect(login.status).toBe(403);
+    expect(login.body.error).toMatchObject({ code: 'account_disabled', message: expect.stringMatching(/disabled/) });
+    const wrong = await retry.post('/api/auth/login').set('X-CSRF-Token', retry.csrf).send({ email: member.user!.email, password: 'not-the-password-at-all' });
+    expect(wrong.status).toBe(401);
     const on = await admin.patch(`/api/admin/users/${member.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ status: 'active' });
     expect(on.body.status).toBe('active');
     const back = await retry.post('/api/auth/login').set('X-CSRF-Token', retry.csrf).send({ email: member.user!.email, password: 'correct-horse-battery-42' });
     expect(back.status).toBe(200);
+    expect((await retry.get('/api/auth/me')).body.firstSignIn).toBe(false);
     const actions = (await AuditEntry.findAll({ where: { subjectType: 'user', subjectId: String(member.user!.id) } })).map((a) => a.action);
     expect(actions).toEqual(expect.arrayContaining(['user.disable', 'user.enable']));
   });

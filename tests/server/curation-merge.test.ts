@@ -44,7 +44,8 @@ describe('POST /api/curation/merge', () => {
     expect(result.merged[0]).toMatchObject({ id: merged, status: 'merged', mergedIntoId: survivor });
 
     const united = await getRecord(survivor);
-    expect(united.spots.map((spot) => spot.rf)).toEqual([0.3, 0.55, 0.32]);
+    // One target spot on the united record (the survivor's); the merged record's target stays on its own page.
+    expect(united.spots.map((spot) => [spot.role, spot.rf])).toEqual([['target', 0.3], ['starting_material', 0.55]]);
     expect(united.visualisations.map((item) => item.method)).toEqual(['uv-254', 'kmno4', 'cam']);
     expect(united.photoCount).toBe(1);
     expect(united.column?.diameterMm).toBe(20);
@@ -56,9 +57,29 @@ describe('POST /api/curation/merge', () => {
 
     const old = await getRecord(merged);
     expect(old).toMatchObject({ status: 'merged', mergedIntoId: survivor });
+    expect(old.spots.map((spot) => [spot.role, spot.rf])).toEqual([['target', 0.32]]);
     const history = recordHistorySchema.parse((await curator.get(`/api/records/${survivor}/history`)).body);
     expect(history.revisions[0].action).toBe('merge');
-    expect(history.revisions[0].changes.map((change) => change.field)).toEqual(expect.arrayContaining(['technique', 'notes', 'spots', 'mergedRecords']));
+    expect(history.revisions[0].changes.map((change) => change.field)).toEqual(expect.arrayContaining(['technique', 'notes', 'visualisations', 'mergedRecords']));
+  });
+
+  it('when records that share stains and each have a target are merged, then no stain repeats and one target spot remains', async () => {
+    const survivor = await recordId(alice, { structure, spots: [{ role: 'target', rf: 0.3 }], visualisation: ['UV 254', 'KMnO4'] });
+    const second = await recordId(bruno, { structure, spots: [{ role: 'target', rf: 0.31 }, { role: 'by_product', rf: 0.7 }], visualisation: ['KMnO4', 'CAM'] });
+    const third = await recordId(bruno, { structure, spots: [{ role: 'target', rf: 0.29 }], visualisation: ['UV 254', 'CAM', 'iodine'] });
+    const res = await post(curator, '/api/curation/merge', { survivorId: survivor, mergedIds: [second, third], fields: {} });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const united = await getRecord(survivor);
+    expect(united.visualisations.map((item) => item.method)).toEqual(['uv-254', 'kmno4', 'cam', 'iodine']);
+    expect(united.spots.filter((spot) => spot.role === 'target').map((spot) => spot.rf)).toEqual([0.3]);
+    expect(united.spots.map((spot) => spot.rf)).toEqual([0.3, 0.7]);
+    // What stayed behind is still on the merged records, and an unmerge gives every record its own rows back.
+    expect((await getRecord(third)).visualisations.map((item) => item.method)).toEqual(['uv-254', 'cam']);
+    const undo = await post(curator, `/api/curation/unmerge/${res.body.mergeId}`, {});
+    expect(undo.status, JSON.stringify(undo.body)).toBeLessThan(300);
+    expect((await getRecord(second)).visualisations.map((item) => item.method)).toEqual(['kmno4', 'cam']);
+    expect((await getRecord(second)).spots.map((spot) => spot.rf)).toEqual([0.31, 0.7]);
+    expect((await getRecord(survivor)).visualisations.map((item) => item.method)).toEqual(['uv-254', 'kmno4']);
   });
 
   it('when the merge is written, then the audit log names the survivor, the merged records and the fields chosen', async () => {

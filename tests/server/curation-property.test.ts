@@ -64,11 +64,21 @@ const omit = (rows: Record<string, unknown>[], keys: string[]) => rows.map((row)
 const rowsOf = (dump: Dump, table: string, recordId: number) => dump[table].filter((row) => row.record_id === recordId);
 const users = (rows: Record<string, unknown>[]) => new Set(rows.map((row) => row.user_id));
 
-/** Nothing a merge unites may shrink: spots, photos, visualisations, revisions, bookmarking users, credited people, notes. */
+/**
+ * Nothing a merge unites may shrink: photos, revisions, bookmarking users, credited people and notes all end on
+ * the survivor; every spot and visualisation is still there (on the survivor, or left on its merged record when
+ * the survivor already has a target spot or that stain), and the survivor names each stain once with one target.
+ */
 function expectNothingDropped(before: Dump, during: Dump, survivorId: number, ids: number[]) {
-  for (const table of ['record_spots', 'record_photos', 'record_visualisations']) {
-    expect(rowsOf(during, table, survivorId).length).toBe(before[table].length);
+  expect(rowsOf(during, 'record_photos', survivorId).length).toBe(before.record_photos.length);
+  for (const table of ['record_spots', 'record_visualisations']) {
+    expect(during[table].filter((row) => ids.includes(Number(row.record_id))).length).toBe(before[table].length);
   }
+  const stains = rowsOf(during, 'record_visualisations', survivorId).map((row) => `${row.method}|${row.note ?? ''}`);
+  expect(new Set(stains).size).toBe(stains.length);
+  expect(new Set(before.record_visualisations.map((row) => `${row.method}|${row.note ?? ''}`)).size).toBe(stains.length);
+  const targets = rowsOf(during, 'record_spots', survivorId).filter((row) => row.role === 'target').length;
+  expect(targets).toBe(before.record_spots.some((row) => row.role === 'target') ? 1 : 0);
   expect(during.record_revisions.length).toBe(before.record_revisions.length + ids.length);
   expect(users(rowsOf(during, 'bookmarks', survivorId))).toEqual(users(before.bookmarks));
   for (const bookmark of before.bookmarks.filter((row) => row.note)) {

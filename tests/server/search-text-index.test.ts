@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { TextIndex } from '../../server/features/search/text-index';
+import { conditionWords } from '../../server/features/search/index-rows';
 
 /** Real compound names (IUPAC/trivial names as commonly written); the notes are invented. */
 function index() {
@@ -48,6 +49,21 @@ describe('the text index', () => {
     const text = index();
     text.apply([], [], [10]);
     expect(text.search('anisaldehyde').records.size).toBe(0);
+  });
+
+  it('when a stain or a solvent is typed, then records visualised or run with it are found (KMnO4, Dragendorff, EtOAc)', () => {
+    // Stain and solvent names as the catalogue spells them (shared/catalogue); common practice names of the trade.
+    const text = new TextIndex();
+    const plain = { notes: '', notebookRef: '', outcomeReason: '' };
+    text.load([], [
+      { id: 21, compoundId: 1, ...plain, conditions: conditionWords({ eluent: { components: [{ solvent: 'hexanes' }, { solvent: 'ethyl-acetate' }] }, stains: [{ method: 'kmno4', note: null }] }) },
+      { id: 22, compoundId: 2, ...plain, conditions: conditionWords({ eluent: { components: [{ solvent: 'dichloromethane' }, { solvent: 'methanol' }], additives: [{ additive: 'triethylamine' }] }, stains: [{ method: 'dragendorff', note: null }] }) },
+    ]);
+    expect([...text.search('KMnO4').records.keys()]).toEqual([21]);
+    expect([...text.search('permanganate').records.keys()]).toEqual([21]);
+    expect([...text.search('Dragendorff').records.keys()]).toEqual([22]);
+    expect([...text.search('EtOAc').records.keys()]).toEqual([21]);
+    expect([...text.search('methanol Et3N').records.keys()]).toEqual([22]);
   });
 
   it('when nothing is like the words, then nothing is returned', () => {

@@ -85,6 +85,19 @@ describe('GET /api/search (text)', () => {
     expect([...first, ...second]).toEqual(all.slice(0, 4));
   });
 
+  it('when a stain or a solvent of the conditions is typed, then the record is found (Dragendorff, KMnO4, DCM)', async () => {
+    const other = uniqueWord();
+    const stained = await createRecord(member, {
+      structure: 'CCCCCCCCCCCCN(C)C', name: `dodecyldimethylamine ${other}`, notes: `batch ${other}`,
+      eluent: { mode: 'isocratic', components: [{ solvent: 'dichloromethane', parts: 95 }, { solvent: 'methanol', parts: 5 }], additives: [], steps: [] },
+      visualisation: ['Dragendorff', 'KMnO4'],
+    });
+    expect(await ids({ q: `Dragendorff ${other}` })).toContain(stained.id);
+    expect(await ids({ q: `KMnO4 ${other}` })).toContain(stained.id);
+    expect(await ids({ q: `dichloromethane ${other}` })).toContain(stained.id);
+    expect(await ids({ q: `ninhydrin ${other}` })).not.toContain(stained.id);
+  });
+
   it('when nobody is signed in, then 401', async () => {
     expect((await (await agentFor(app)).get('/api/search').query({ q: 'benzyl' })).status).toBe(401);
   });

@@ -36,6 +36,8 @@ export class ConditionRecord extends Model<InferAttributes<ConditionRecord>, Inf
   declare yieldPercent: number | null;
   declare purityNote: string | null;
   declare notebookRef: string | null;
+  /** The day the plate was run (YYYY-MM-DD), when given. */
+  declare runOn: CreationOptional<string | null>;
   declare notes: string | null;
   /** Who a sheet said recorded it, when no member matched (imports). */
   declare recordedBy: CreationOptional<string | null>;
@@ -84,6 +86,7 @@ ConditionRecord.init(
     yieldPercent: number(),
     purityNote: text(),
     notebookRef: text(),
+    runOn: { type: DataTypes.DATEONLY, allowNull: true },
     notes: text(),
     recordedBy: text(),
     sourceTexts: { type: DataTypes.JSONB, allowNull: true },

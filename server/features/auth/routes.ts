@@ -19,13 +19,13 @@ authRouter.get('/csrf', allow('public'), (req, res) => {
 });
 
 authRouter.get('/me', allow('public'), (req, res) => {
-  res.set('Cache-Control', 'no-store').json({ user: req.user ?? null });
+  res.set('Cache-Control', 'no-store').json({ user: req.user ?? null, firstSignIn: req.user ? !!req.session.firstSignIn : false });
 });
 
-function authenticate(req: Request): Promise<SessionUser | false> {
+function authenticate(req: Request): Promise<{ user: SessionUser | false; disabled: boolean }> {
   return new Promise((resolve, reject) => {
-    passport.authenticate('local', { session: false }, (err: unknown, user: SessionUser | false) =>
-      err ? reject(err) : resolve(user),
+    passport.authenticate('local', { session: false }, (err: unknown, user: SessionUser | false, info?: { message?: string }) =>
+      err ? reject(err) : resolve({ user, disabled: info?.message === 'disabled' }),
     )(req, req.res!, () => undefined);
   });
 }
@@ -36,7 +36,8 @@ authRouter.post(
   allow('public'),
   signInWaits,
   handle({ body: loginInputSchema }, async (_input, req, res) => {
-    const user = await authenticate(req);
+    const { user, disabled } = await authenticate(req);
+    if (disabled) throw new AppError(403, 'account_disabled', 'This account is disabled. Ask your group’s admin to enable it again.');
     if (!user) throw new AppError(401, 'invalid_credentials', 'Wrong e-mail or password.');
     const token = await signIn(req, user);
     rememberDevice(res, user.email);

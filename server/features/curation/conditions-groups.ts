@@ -1,6 +1,7 @@
 import { compareConditions, duplicateTolerances, type ConditionComparison } from '../../../shared/domain/duplicate-conditions';
 import { formatNumber } from '../../../shared/domain/format-number';
 import { solventByKey } from '../../../shared/catalogue/solvents';
+import { techniqueLabels } from '../../../shared/schemas/record-parts';
 import type { DuplicateGroup, DuplicatePair } from '../../../shared/schemas/curation';
 import { presentCurationRecord } from './presenters';
 import { phaseLabel } from '../../core/record-presenter';
@@ -62,7 +63,7 @@ function reasonsFor(rows: CurationRow[], pairs: DuplicatePair[]): string[] {
   ];
   if (pairs.every((pair) => pair.sameNotebookRef)) reasons.push(`Same notebook reference (${first.notebookRef}).`);
   if (pairs.some((pair) => !pair.sameAdditives)) reasons.push('Additives differ between some of the records (score lowered).');
-  if (pairs.some((pair) => !pair.sameTechnique)) reasons.push(`Techniques differ (${[...new Set(rows.map((row) => row.technique))].join(', ')}; score lowered).`);
+  if (pairs.some((pair) => !pair.sameTechnique)) reasons.push(`Techniques differ (${[...new Set(rows.map((row) => techniqueLabels[row.technique]))].join(', ')}; score lowered).`);
   return reasons;
 }
 

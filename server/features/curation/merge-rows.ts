@@ -3,17 +3,40 @@ import { sequelize } from '../../db/sequelize';
 import { hasBookmarks } from './snapshot';
 
 /**
- * Moves the merged records' spots and visualisations to the survivor, after its own (positions continue
- * from the survivor's last, merged records in the order given), and their photos. Every row keeps its
- * `origin_record_id`, so the united record still tells which plate each spot came from.
+ * Which rows of the merged records move to the survivor. A united record names each stain once and has one
+ * target spot: a visualisation (method and note) the survivor already has, or an earlier merged record brings,
+ * stays on its own merged record; so does every merged target spot when the survivor has a target (else only
+ * the first merged record's target moves). Nothing is deleted: rows that stay are still read on the merged
+ * record's page, and an unmerge restores every row from the before-dump as before.
+ */
+const movingRows: Record<'record_spots' | 'record_visualisations', string> = {
+  record_spots: `
+    SELECT s.id, s.record_id, s.position FROM record_spots s
+    WHERE s.record_id IN (:mergedIds)
+      AND (s.role <> 'target' OR (
+        NOT EXISTS (SELECT 1 FROM record_spots t WHERE t.record_id = :survivorId AND t.role = 'target')
+        AND s.id = (SELECT f.id FROM record_spots f WHERE f.record_id IN (:mergedIds) AND f.role = 'target'
+                    ORDER BY array_position(ARRAY[:mergedIds]::int[], f.record_id), f.position, f.id LIMIT 1)))`,
+  record_visualisations: `
+    SELECT DISTINCT ON (v.method, coalesce(v.note, '')) v.id, v.record_id, v.position FROM record_visualisations v
+    WHERE v.record_id IN (:mergedIds)
+      AND NOT EXISTS (SELECT 1 FROM record_visualisations k
+                      WHERE k.record_id = :survivorId AND k.method = v.method AND coalesce(k.note, '') = coalesce(v.note, ''))
+    ORDER BY v.method, coalesce(v.note, ''), array_position(ARRAY[:mergedIds]::int[], v.record_id), v.position, v.id`,
+};
+
+/**
+ * Moves the merged records' spots and visualisations to the survivor (those `movingRows` lets through), after
+ * its own (positions continue from the survivor's last, merged records in the order given), and their photos.
+ * Every row keeps its `origin_record_id`, so the united record still tells which plate each spot came from.
  */
 export async function moveChildRows(survivorId: number, mergedIds: readonly number[], transaction: Transaction) {
-  for (const table of ['record_spots', 'record_visualisations']) {
+  for (const table of ['record_spots', 'record_visualisations'] as const) {
     await sequelize.query(
       `UPDATE ${table} x SET record_id = :survivorId, position = base.next + moved.rank - 1
        FROM (SELECT coalesce(max(position) + 1, 0) AS next FROM ${table} WHERE record_id = :survivorId) base,
             (SELECT id, row_number() OVER (ORDER BY array_position(ARRAY[:mergedIds]::int[], record_id), position, id) AS rank
-             FROM ${table} WHERE record_id IN (:mergedIds)) moved
+             FROM (${movingRows[table]}) candidates) moved
        WHERE x.id = moved.id`,
       { replacements: { survivorId, mergedIds: [...mergedIds] }, transaction },
     );

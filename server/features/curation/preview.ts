@@ -8,7 +8,7 @@ import { eluentSummary } from '../../../shared/domain/eluent-summary';
 import { solventByKey } from '../../../shared/catalogue/solvents';
 import { formatNumber } from '../../../shared/domain/format-number';
 import { presentCurationRecord } from './presenters';
-import { phaseLabel } from '../../core/record-presenter';
+import { phaseLabel, visualisationLabel } from '../../core/record-presenter';
 import { curationRowsByIds, type CurationRow } from './records';
 import { hasBookmarks } from './snapshot';
 import { readStereo } from './structures';
@@ -62,6 +62,22 @@ async function countsOf(ids: number[]) {
   }]));
 }
 
+/** Every record's spots and visualisations in plate order: the values the merge screen lays side by side. */
+async function childValues(ids: number[]) {
+  const spots = await sequelize.query<{ recordId: number; role: 'target' | 'starting_material' | 'by_product' | 'unknown'; rf: number; label: string | null }>(
+    'SELECT record_id AS "recordId", role, rf, label FROM record_spots WHERE record_id IN (:ids) ORDER BY record_id, position, id',
+    { replacements: { ids }, type: QueryTypes.SELECT },
+  );
+  const stains = await sequelize.query<{ recordId: number; method: string; note: string | null }>(
+    'SELECT record_id AS "recordId", method, note FROM record_visualisations WHERE record_id IN (:ids) ORDER BY record_id, position, id',
+    { replacements: { ids }, type: QueryTypes.SELECT },
+  );
+  return (id: number) => ({
+    spots: spots.filter((spot) => spot.recordId === id).map(({ role, rf, label }) => ({ role, rf: Number(rf), label })),
+    stains: stains.filter((stain) => stain.recordId === id).map(({ method, note }) => ({ method, note, label: visualisationLabel(method, note) })),
+  });
+}
+
 async function unitedPeople(ids: number[]) {
   const bookmarkUsers = (await hasBookmarks())
     ? (await sequelize.query<{ n: string }>('SELECT count(DISTINCT user_id) AS n FROM bookmarks WHERE record_id IN (:ids)', { replacements: { ids }, type: QueryTypes.SELECT }))[0].n
@@ -82,7 +98,8 @@ export async function mergePreview(ids: number[]): Promise<MergePreview> {
   if (rows.length !== ids.length) throw new NotFoundError(`Record ${ids.filter((id) => !rows.some((row) => row.id === id)).join(', ')}`);
   const models = new Map((await ConditionRecord.findAll({ where: { id: ids } })).map((record) => [record.id, record]));
   const counts = await countsOf(ids);
-  const records = rows.map((row) => ({ ...presentCurationRecord(row), notes: row.notes, counts: counts.get(row.id)! }));
+  const values = await childValues(ids);
+  const records = rows.map((row) => ({ ...presentCurationRecord(row), notes: row.notes, counts: counts.get(row.id)!, ...values(row.id) }));
   const fields = mergeableFields.map((field) => {
     const values = rows.map((row) => ({ recordId: row.id, display: display(field, models.get(row.id)!, row) }));
     return { field, label: mergeableFieldLabels[field], values, differs: new Set(values.map((value) => value.display)).size > 1 };

@@ -62,6 +62,7 @@ export async function updateRecord(id: number, patch: RecordUpdateParsed, user: 
       column: patch.column !== undefined ? patch.column : (before.column as RecordContent['column']),
       notebookRef: patch.notebookRef !== undefined ? patch.notebookRef : record.notebookRef,
       notes: patch.notes !== undefined ? patch.notes : record.notes,
+      runOn: patch.runOn !== undefined ? patch.runOn : record.runOn,
     };
     if (content.stationaryPhase === 'other' && !content.stationaryPhaseOther) {
       throw new ValidationError('stationaryPhaseOther: Name the stationary phase when choosing "other".', [{ path: 'body.stationaryPhaseOther', message: 'Name the stationary phase when choosing "other".' }]);

@@ -1,6 +1,9 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
 import { compoundClassByKey } from '../../../shared/catalogue/compound-classes';
+import { additiveByKey } from '../../../shared/catalogue/additives';
+import { solventByKey } from '../../../shared/catalogue/solvents';
+import { stainByKey } from '../../../shared/catalogue/stains';
 import { fingerprintFromBytes } from '../../core/compound-fingerprints';
 import type { CompoundDoc, RecordDoc } from './text-index';
 
@@ -29,6 +32,32 @@ interface RecordRow {
   notes: string | null;
   notebook_ref: string | null;
   outcome_reason: string | null;
+  eluent: { components?: { solvent: string }[]; steps?: { components?: { solvent: string }[] }[]; additives?: { additive: string }[] } | null;
+  stains: { method: string; note: string | null }[] | null;
+}
+
+/**
+ * The words a chemist types for a record's conditions: each solvent's and additive's label and name
+ * ("EtOAc ethyl acetate"), each stain's label, name and synonyms ("KMnO4 potassium permanganate",
+ * "Dragendorff reagent") and a free-text visualisation's own words.
+ */
+export function conditionWords(row: Pick<RecordRow, 'eluent' | 'stains'>): string {
+  const words = new Set<string>();
+  const solventKeys = [...(row.eluent?.components ?? []), ...(row.eluent?.steps ?? []).flatMap((step) => step.components ?? [])].map((part) => part.solvent);
+  for (const key of solventKeys) {
+    const solvent = solventByKey(key);
+    words.add(solvent ? `${solvent.label} ${solvent.name}` : key);
+  }
+  for (const item of row.eluent?.additives ?? []) {
+    const additive = additiveByKey(item.additive);
+    words.add(additive ? `${additive.label} ${additive.name}` : item.additive);
+  }
+  for (const item of row.stains ?? []) {
+    const stain = stainByKey(item.method);
+    words.add(stain ? [stain.label, stain.name, ...stain.synonyms].join(' ') : item.method);
+    if (item.note) words.add(item.note);
+  }
+  return [...words].join(' ');
 }
 
 const classNames = (keys: string[]) => keys.map((key) => compoundClassByKey(key)?.name ?? key);
@@ -52,8 +81,11 @@ export async function loadIndexedCompounds(ids?: number[], transaction?: Transac
 export async function loadRecordDocs(ids?: number[], transaction?: Transaction): Promise<{ active: RecordDoc[]; inactiveIds: number[] }> {
   if (ids && ids.length === 0) return { active: [], inactiveIds: [] };
   const rows = await sequelize.query<RecordRow>(
-    `SELECT id, compound_id, status, notes, notebook_ref, outcome_reason FROM condition_records
-     WHERE ${ids ? 'id IN (:ids)' : "status = 'active'"}`,
+    `SELECT r.id, r.compound_id, r.status, r.notes, r.notebook_ref, r.outcome_reason, r.eluent,
+       (SELECT json_agg(json_build_object('method', v.method, 'note', v.note) ORDER BY v.position)
+          FROM record_visualisations v WHERE v.record_id = r.id) AS stains
+     FROM condition_records r
+     WHERE ${ids ? 'r.id IN (:ids)' : "r.status = 'active'"}`,
     { replacements: { ids }, type: QueryTypes.SELECT, transaction },
   );
   const active = rows.filter((row) => row.status === 'active');
@@ -65,6 +97,7 @@ export async function loadRecordDocs(ids?: number[], transaction?: Transaction):
       notes: row.notes ?? '',
       notebookRef: row.notebook_ref ?? '',
       outcomeReason: row.outcome_reason ?? '',
+      conditions: conditionWords(row),
     })),
     inactiveIds: (ids ?? []).filter((id) => !found.has(id)),
   };

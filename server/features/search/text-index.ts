@@ -8,13 +8,15 @@ export interface CompoundDoc {
   classNames: string[];
 }
 
-/** What text search reads of an active record: its notes and references. */
+/** What text search reads of an active record: its notes, references and the words of its conditions. */
 export interface RecordDoc {
   id: number;
   compoundId: number;
   notes: string;
   notebookRef: string;
   outcomeReason: string;
+  /** Solvents, additives and stains by label, name and synonyms (see index-rows.ts conditionWords). */
+  conditions?: string;
 }
 
 /** Fuzzy-match scores by id: 0 is a perfect match, 1 none. */
@@ -30,11 +32,12 @@ const compoundFields = (doc: CompoundDoc): WeightedFields => [
   { text: doc.classNames.join(' '), weight: 0.5 },
 ];
 
-/** Notebook references weigh most, then notes and the outcome's reason. */
+/** Notebook references weigh most, then notes and the outcome's reason, then the eluent's and stains' words. */
 const recordFields = (doc: RecordDoc): WeightedFields => [
   { text: doc.notebookRef, weight: 1 },
   { text: doc.notes, weight: 0.8 },
   { text: doc.outcomeReason, weight: 0.8 },
+  { text: doc.conditions ?? '', weight: 0.6 },
 ];
 
 /**

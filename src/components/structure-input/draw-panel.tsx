@@ -29,7 +29,7 @@ interface DrawPanelProps {
 /** The drawing tab: a fixed-height, touch-friendly area holding the lazily loaded editor. */
 export function DrawPanel({ value, onChange, labelledBy }: DrawPanelProps) {
   return (
-    <div className="h-[22rem] w-full overflow-hidden rounded-plate border border-line bg-surface sm:h-[26rem]">
+    <div className="h-[26rem] w-full overflow-hidden rounded-plate border border-line bg-surface">
       <EditorLoadBoundary>
         <Suspense fallback={<p className="p-4 text-sm text-ink-soft" role="status">Loading the drawing editor…</p>}>
           <OclEditor value={value} onChange={onChange} labelledBy={labelledBy} />

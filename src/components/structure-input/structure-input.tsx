@@ -1,4 +1,4 @@
-import { useEffect, useId, useRef, useState, type DragEvent } from 'react';
+import { useEffect, useId, useRef, useState, type DragEvent, type ReactNode } from 'react';
 import { Button } from '../ui/button';
 import { DrawPanel } from './draw-panel';
 import { ModeTabs, panelId, tabId, type InputMode } from './mode-tabs';
@@ -22,10 +22,12 @@ export interface StructureInputProps {
   error?: string;
   /** The tab shown first; Draw loads the editor at once, Paste defers it until asked for. */
   defaultMode?: InputMode;
+  /** Shown under the paste box, e.g. recent compounds to pick instead of drawing on a phone. */
+  extra?: ReactNode;
 }
 
 /** The one structure input of the app: draw, paste or drop, with the server's live check beside it. */
-export function StructureInput({ value, onChange, label = 'Structure', required, error, defaultMode = 'draw' }: StructureInputProps) {
+export function StructureInput({ value, onChange, label = 'Structure', required, error, defaultMode = 'draw', extra }: StructureInputProps) {
   const base = useId();
   const [mode, setMode] = useState<InputMode>(defaultMode);
   const [drawOpened, setDrawOpened] = useState(defaultMode === 'draw');
@@ -93,8 +95,8 @@ export function StructureInput({ value, onChange, label = 'Structure', required,
             Clear
           </Button>
         </div>
-        <div className="grid gap-4 p-3 md:grid-cols-[minmax(0,1fr)_16rem]">
-          <div className="relative">
+        <div className="grid grid-cols-1 gap-4 p-3 md:grid-cols-[minmax(0,1fr)_16rem]">
+          <div className="relative min-w-0">
             {drawOpened && (
               /* Hidden by visibility, not display: the editor's canvas keeps its size while Paste is shown. */
               <div
@@ -103,11 +105,13 @@ export function StructureInput({ value, onChange, label = 'Structure', required,
                 aria-labelledby={tabId(base, 'draw')}
                 className={mode === 'draw' ? '' : 'invisible absolute inset-x-0 top-0'}
               >
+                <p className="mb-2 text-xs text-ink-soft sm:hidden">The editor wants a fine pointer; with a thumb, Paste a SMILES or pick a recent compound.</p>
                 <DrawPanel value={value} onChange={edit} labelledBy={labelId} />
               </div>
             )}
             <div role="tabpanel" id={panelId(base, 'paste')} aria-labelledby={tabId(base, 'paste')} hidden={mode !== 'paste'}>
               <PastePanel value={value} onChange={edit} onFile={takeFile} required={required} invalid={invalid} describedBy={errorId} />
+              {extra}
             </div>
             {note && <p className="mt-2 text-xs text-ink-soft" role="status">{note}</p>}
           </div>

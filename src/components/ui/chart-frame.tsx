@@ -61,15 +61,18 @@ export function Axes({ x, y, xDomain, yDomain, sx, sy }: AxesProps) {
 /** A captioned figure: the SVG is one image for assistive technology, with the numbers in a hidden table. */
 export function ChartFigure({ title, summary, table, children }: { title: string; summary: string; table: ReactNode; children: ReactNode }) {
   return (
-    <figure className="w-full">
+    <figure className="relative w-full">
       <figcaption className="mb-1 text-sm font-medium text-ink">{title}</figcaption>
       <svg role="img" aria-label={`${title}. ${summary}`} viewBox={`0 0 ${frame.width} ${frame.height}`} className="h-auto w-full max-w-lg">
         {children}
       </svg>
-      <table className="sr-only">
-        <caption>{title}</caption>
-        {table}
-      </table>
+      {/* In a hidden box, not a hidden table: a table never shrinks below its content, and would widen the page. */}
+      <div className="sr-only">
+        <table>
+          <caption>{title}</caption>
+          {table}
+        </table>
+      </div>
     </figure>
   );
 }

@@ -26,7 +26,8 @@ export function useAcceptInvitation(token: string) {
     mutationFn: (input: InvitationAccept) => acceptInvitation(token, input),
     onSuccess: (res) => {
       setCsrfToken(res.csrfToken);
-      return qc.invalidateQueries();
+      // Everything but the invitation itself: it is used now, and asking again would answer 410.
+      return qc.invalidateQueries({ predicate: (query) => query.queryKey[0] !== 'invitation' });
     },
   });
 }

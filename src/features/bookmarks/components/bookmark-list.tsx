@@ -19,7 +19,7 @@ function Target({ bookmark }: { bookmark: BookmarkDto }) {
         <StructureImage compoundId={record.compound.id} name={record.compound.name ?? undefined} size="sm" />
         <PlateStrip lanes={[{ spots: record.spots.map((spot) => ({ rf: spot.rf, role: spot.role })) }]} title={`Plate of record ${record.id}`} />
         <div className="min-w-0 space-y-0.5">
-          <Link to={`/records/${record.id}`} className="font-medium text-front hover:underline">{record.compound.name ?? record.compound.canonicalSmiles}</Link>
+          <Link to={`/records/${record.id}`} className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline">{record.compound.name ?? record.compound.canonicalSmiles}</Link>
           <p className="figure text-xs">{record.eluentSummary.notation} · Rf {record.targetRf?.toFixed(2) ?? '—'}</p>
           <p className="flex flex-wrap items-center gap-2 text-xs text-ink-soft">
             <OutcomeBadge outcome={record.outcome} /> {record.stationaryPhaseLabel}
@@ -34,7 +34,7 @@ function Target({ bookmark }: { bookmark: BookmarkDto }) {
       <div className="flex flex-wrap items-center gap-3">
         <StructureImage compoundId={compound.id} name={compound.name ?? undefined} size="sm" />
         <div>
-          <Link to={`/compounds/${compound.id}`} className="font-medium text-front hover:underline">{compound.name ?? compound.canonicalSmiles}</Link>
+          <Link to={`/compounds/${compound.id}`} className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline">{compound.name ?? compound.canonicalSmiles}</Link>
           <p className="figure text-xs text-ink-soft">{compound.formula} · {compound.recordCount} active record{compound.recordCount === 1 ? '' : 's'}</p>
         </div>
       </div>

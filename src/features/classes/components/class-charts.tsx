@@ -41,7 +41,7 @@ export function RfScatter({ rf }: { rf: NonNullable<ClassDetail['rf']> }) {
     <div className="space-y-2">
       <Scatter
         title={`Target Rf against eluent composition (${strong})`}
-        x={{ label: '% strong solvent', unit: '% v/v' }}
+        x={{ label: '% stronger solvent', unit: '% v/v' }}
         y={{ label: 'target Rf', domain: [0, 1] }}
         points={rf.points.map((point) => ({ x: point.strongPercent, y: point.rf, label: `record ${point.recordId} (${point.outcome}${point.demo ? ', demo data' : ''})`, highlight: point.outcome === 'failed' }))}
       />

@@ -19,7 +19,7 @@ export function ClassTable({ classes }: { classes: ClassIndexItem[] }) {
           {classes.map((item) => (
             <tr key={item.key} className="border-b border-line/70 last:border-0 hover:bg-plate/60">
               <td className="px-3 py-2">
-                <Link to={`/classes/${item.key}`} className="font-medium text-front hover:underline">{item.name}</Link>
+                <Link to={`/classes/${item.key}`} className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline">{item.name}</Link>
                 <p className="text-xs text-ink-soft">{item.description}</p>
               </td>
               <td className="figure px-3 py-2 text-right">{item.compoundCount}</td>

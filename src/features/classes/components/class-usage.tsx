@@ -26,7 +26,7 @@ export function SolventPairs({ pairs }: { pairs: ClassDetail['solventPairs'] }) 
         <tr>
           <th scope="col" className="py-1 font-medium">Solvents</th>
           <th scope="col" className="px-2 py-1 text-right font-medium">Records</th>
-          <th scope="col" className="px-2 py-1 text-right font-medium">% strong</th>
+          <th scope="col" className="px-2 py-1 text-right font-medium">% stronger solvent</th>
           <th scope="col" className="py-1 pl-3 font-medium">Outcomes</th>
         </tr>
       </thead>

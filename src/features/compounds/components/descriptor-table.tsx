@@ -26,7 +26,7 @@ export function DescriptorTable({ descriptors }: { descriptors: CompoundDetail['
           return (
             <tr key={row.key}>
               <th scope="row" className="pr-4 text-left font-normal text-ink-soft">{row.label}</th>
-              <td className="figure">{typeof value === 'number' ? formatNumber(value, row.digits ?? 0) : value}{row.unit ? ` ${row.unit}` : ''}</td>
+              <td className="figure">{typeof value === 'number' ? (row.key === 'mw' ? value.toFixed(2) : formatNumber(value, row.digits ?? 0)) : value}{row.unit ? ` ${row.unit}` : ''}</td>
             </tr>
           );
         })}

@@ -1,5 +1,6 @@
 import { formatNumber } from '../../../../shared/domain/format-number';
 import type { CurationRecord } from '../../../../shared/schemas/curation';
+import { formatDate } from '../../../lib/dates';
 
 /** "0.85 · high": a duplicate score with a word, so it never rests on a number alone. */
 export function certainty(score: number): string {
@@ -15,4 +16,4 @@ export function strongShare(record: Pick<CurationRecord, 'strongPercent' | 'stro
 
 export const compoundLabel = (record: CurationRecord) => record.compound.name ?? record.compound.canonicalSmiles;
 
-export const day = (iso: string) => iso.slice(0, 10);
+export const day = (iso: string) => formatDate(iso);

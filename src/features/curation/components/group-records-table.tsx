@@ -38,11 +38,11 @@ export function GroupRecordsTable({ records, selected, onToggle }: Props) {
                   aria-label={`Compare record ${record.id}`}
                   checked={selected.has(record.id)}
                   onChange={() => onToggle(record.id)}
-                  className="h-4 w-4 accent-front"
+                  className="accent-front"
                 />
               </td>
               <td className="py-1.5 pr-3">
-                <Link to={`/records/${record.id}`} className="figure text-front hover:underline">#{record.id}</Link>
+                <Link to={`/records/${record.id}`} className="inline-block min-h-6 min-w-6 py-0.5 figure text-front hover:underline">#{record.id}</Link>
               </td>
               <td className="py-1.5 pr-3">{compoundLabel(record)}</td>
               <td className="py-1.5 pr-3">{record.stationaryPhaseLabel}</td>

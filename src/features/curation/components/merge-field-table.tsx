@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { MergeableField, MergePreview } from '../../../../shared/schemas/curation';
+import { spotRoleLabels } from '../../../../shared/schemas/record-parts';
 import { day } from './format';
 
 interface Props {
@@ -10,9 +11,13 @@ interface Props {
   onSurvivor: (recordId: number) => void;
 }
 
-const countRows = [
-  ['spots', 'Spots'], ['photos', 'Plate photos'], ['visualisations', 'Visualisations'], ['bookmarks', 'Bookmarks'], ['contributors', 'People credited'],
-] as const;
+const countRows = [['photos', 'Plate photos'], ['bookmarks', 'Bookmarks'], ['contributors', 'People credited']] as const;
+
+/** A record's spots as a chemist reads them: "target Rf 0.30 · starting material Rf 0.55 (SM)". */
+export function spotsText(spots: MergePreview['records'][number]['spots']): string {
+  if (spots.length === 0) return '—';
+  return spots.map((spot) => `${spotRoleLabels[spot.role]} Rf ${spot.rf.toFixed(2)}${spot.label ? ` (${spot.label})` : ''}`).join(' · ');
+}
 
 /** Records side by side: a survivor radio per record, a radio per differing field, notes and counts below. */
 export function MergeFieldTable({ preview, survivorId, choices, onChoose, onSurvivor }: Props) {
@@ -81,6 +86,14 @@ export function MergeFieldTable({ preview, survivorId, choices, onChoose, onSurv
             {records.map((record) => (
               <td key={record.id} className="whitespace-pre-wrap py-2 pr-3 text-ink-soft">{record.notes ?? '—'}</td>
             ))}
+          </tr>
+          <tr className="border-b border-line/60 align-top">
+            <th scope="row" className="py-2 pr-3 font-medium">Spots</th>
+            {records.map((record) => <td key={record.id} className="figure py-2 pr-3 text-xs">{spotsText(record.spots)}</td>)}
+          </tr>
+          <tr className="border-b border-line/60 align-top">
+            <th scope="row" className="py-2 pr-3 font-medium">Visualisation</th>
+            {records.map((record) => <td key={record.id} className="py-2 pr-3">{record.stains.map((stain) => stain.label).join(', ') || '—'}</td>)}
           </tr>
           {countRows.map(([key, label]) => (
             <tr key={key} className="border-b border-line/60 last:border-0">

@@ -8,7 +8,7 @@ import { useMerges, useUnmerge } from '../api/merges';
 import { day } from './format';
 
 const recordLink = (id: number) => (
-  <Link key={id} to={`/records/${id}`} className="figure text-front hover:underline">#{id}</Link>
+  <Link key={id} to={`/records/${id}`} className="inline-block min-h-6 min-w-6 py-0.5 figure text-front hover:underline">#{id}</Link>
 );
 
 function chosenFields(item: MergeHistoryItem): string {

@@ -5,6 +5,7 @@ import { useMe } from '../../../lib/session';
 import { roleAtLeast } from '../../../../shared/schemas/auth';
 import type { RecordDto } from '../../../../shared/schemas/record';
 import { useRestoreRecord, useRetireRecord } from '../api/retire';
+import { formatDate } from '../../../lib/dates';
 
 type RetirableRecord = Pick<RecordDto, 'id' | 'status' | 'retiredReason' | 'retiredAt' | 'author'>;
 
@@ -52,7 +53,7 @@ export function RetireControl({ record }: { record: RetirableRecord }) {
       <div role="status" className="flex flex-wrap items-center gap-3 rounded-plate border border-failed/40 bg-surface px-3 py-2 text-sm">
         <span>
           <strong className="text-failed">Retired</strong>
-          {record.retiredAt && <> on {record.retiredAt.slice(0, 10)}</>}
+          {record.retiredAt && <> on {formatDate(record.retiredAt)}</>}
           {record.retiredReason && <>: {record.retiredReason}</>}
         </span>
         <Button size="sm" disabled={restore.isPending} onClick={() => restore.mutate(record.id)}>Restore</Button>

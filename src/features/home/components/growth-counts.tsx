@@ -13,7 +13,7 @@ export function GrowthCounts({ overview }: { overview: Overview }) {
   const month = new Date(overview.monthStart).toLocaleDateString(undefined, { month: 'long', year: 'numeric', timeZone: 'UTC' });
   return (
     <>
-      <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+      <dl className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4">
         {tiles.map((tile) => {
           const count = overview[tile.key];
           return (

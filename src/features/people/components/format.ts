@@ -1,7 +1,9 @@
+import { formatDateTime } from '../../../lib/dates';
+
 /** A date and time for the people pages: local, to the minute. */
 export function whenShort(iso: string | null): string {
   if (!iso) return 'never';
-  return new Date(iso).toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
+  return formatDateTime(iso);
 }
 
 export const roleOptions = [

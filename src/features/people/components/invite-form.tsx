@@ -28,7 +28,7 @@ export function InviteForm() {
     });
   });
   return (
-    <form onSubmit={submit} noValidate className="grid gap-3 sm:grid-cols-[1fr_16rem_auto] sm:items-start">
+    <form onSubmit={submit} noValidate className="grid grid-cols-1 gap-3 sm:grid-cols-[1fr_16rem_auto] sm:items-start">
       <TextField label="E-mail" type="email" autoComplete="off" required error={form.formState.errors.email?.message} {...form.register('email')} />
       <SelectField label="Role" options={roleOptions} error={form.formState.errors.role?.message} {...form.register('role')} />
       <Button type="submit" variant="primary" className="sm:mt-6" disabled={create.isPending}>

@@ -9,9 +9,14 @@ const fieldLabels: Record<string, string> = {
   status: 'status', photoIds: 'photos', photos: 'photo', retiredReason: 'retire reason', 'column.diameterMm': 'column diameter (mm)',
   'column.cartridgeSize': 'cartridge', 'column.silicaG': 'silica (g)', 'column.sampleMg': 'sample (mg)', 'column.loadMethod': 'load',
   'column.fractionMl': 'fraction size (mL)', 'column.fractionsPooled': 'fractions pooled', 'column.yieldPercent': 'yield (%)', 'column.purityNote': 'purity note',
+  mergedRecords: 'records merged in', mergedIntoId: 'merged into', merge: 'merge', name: 'name', runOn: 'plate run on',
 };
 
-export const fieldLabel = (field: string) => fieldLabels[field] ?? field;
+/** A field's name in words; an unknown one ("someField" or "some_field") is split into words, never shown raw. */
+export const fieldLabel = (field: string) =>
+  fieldLabels[field] ?? field.replace(/^column\./, 'column ').replace(/_/g, ' ').replace(/([a-z])([A-Z])/g, (_, a: string, b: string) => `${a} ${b.toLowerCase()}`);
+
+const recordList = (value: unknown) => (Array.isArray(value) ? value : [value]).map((id) => `record #${id}`).join(', ');
 
 type SpotLike = { role: keyof typeof spotRoleLabels; rf: number };
 type EluentLike = Parameters<typeof formatEluent>[0];
@@ -34,6 +39,11 @@ export function formatChangeValue(field: string, value: unknown): string {
       return `compound ${value}`;
     case 'photos':
       return `photo ${value}`;
+    case 'mergedRecords':
+    case 'mergedIntoId':
+      return recordList(value);
+    case 'merge':
+      return `merge #${value}`;
     case 'photoIds':
       return (value as number[]).length === 0 ? 'none' : (value as number[]).map((id) => `#${id}`).join(', ');
     default:

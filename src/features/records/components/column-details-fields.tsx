@@ -23,7 +23,7 @@ export function ColumnDetailsFields() {
         <input type="checkbox" {...register('showColumn')} /> Record column details
       </label>
       {show && (
-        <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+        <div className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-3">
           {numberFields.map((field) => (
             <TextField key={field.key} label={`${field.label} (${field.unit})`} type="number" step="any" min="0" mono
               error={columnErrors?.[field.key]?.message} {...register(`column.${field.key}`, { valueAsNumber: true })} />

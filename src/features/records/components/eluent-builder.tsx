@@ -40,40 +40,36 @@ export function EluentBuilder() {
       <legend className="text-sm font-medium">Eluent</legend>
       <div className="flex gap-4 text-sm" role="radiogroup" aria-label="Elution mode">
         {(['isocratic', 'gradient'] as const).map((mode) => (
-          <label key={mode} className="flex items-center gap-1.5">
+          <label key={mode} className="flex min-h-6 items-center gap-1.5">
             <input type="radio" value={mode} {...register('eluent.mode')} />
             {mode}
           </label>
         ))}
       </div>
-      <table className="w-full text-sm">
-        <thead className="text-left text-xs text-ink-soft">
-          <tr><th className="pb-1 font-normal">Solvent</th><th className="pb-1 font-normal">Parts by volume</th><th className="pb-1 font-normal">% v/v</th><th /></tr>
-        </thead>
-        <tbody>
-          {components.fields.map((field, index) => {
-            const parts = eluent.components[index]?.parts ?? null;
-            return (
-              <tr key={field.id}>
-                <td className="pr-2 py-1">
-                  <select aria-label={`Solvent ${index + 1}`} className={`${controlClass} min-h-10`} {...register(`eluent.components.${index}.solvent`)}>
-                    {solventOptions.map((option) => <option key={option.value} value={option.value}>{option.label}</option>)}
-                  </select>
-                  <FieldError error={errors.eluent?.components?.[index]?.solvent} />
-                </td>
-                <td className="pr-2 py-1 w-32">
-                  <input aria-label={`Parts of solvent ${index + 1}`} type="number" step="any" min="0" className={`${controlClass} figure`} {...register(`eluent.components.${index}.parts`, { valueAsNumber: true })} />
-                  <FieldError error={errors.eluent?.components?.[index]?.parts} />
-                </td>
-                <td className="pr-2 py-1 w-20 figure text-ink-soft" aria-live="polite">{valid(parts) && total > 0 ? `${formatNumber((100 * (parts as number)) / total, 1)} %` : '—'}</td>
-                <td className="py-1 w-20">
-                  <Button size="sm" variant="quiet" disabled={components.fields.length === 1} onClick={() => components.remove(index)} aria-label={`Remove solvent ${index + 1}`}>Remove</Button>
-                </td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
+      <div className="space-y-2 text-sm">
+        <p aria-hidden="true" className="grid grid-cols-[minmax(0,1fr)_5.5rem_3.5rem_auto] gap-2 text-xs text-ink-soft sm:grid-cols-[minmax(0,1fr)_8rem_5rem_5rem]">
+          <span>Solvent</span><span>Parts by volume</span><span>% v/v</span><span />
+        </p>
+        {components.fields.map((field, index) => {
+          const parts = eluent.components[index]?.parts ?? null;
+          return (
+            <div key={field.id} role="group" aria-label={`Solvent ${index + 1} of the eluent`} className="grid grid-cols-[minmax(0,1fr)_5.5rem_3.5rem_auto] items-start gap-2 sm:grid-cols-[minmax(0,1fr)_8rem_5rem_5rem]">
+              <div className="min-w-0">
+                <select aria-label={`Solvent ${index + 1}`} className={`${controlClass} min-h-10`} {...register(`eluent.components.${index}.solvent`)}>
+                  {solventOptions.map((option) => <option key={option.value} value={option.value}>{option.label}</option>)}
+                </select>
+                <FieldError error={errors.eluent?.components?.[index]?.solvent} />
+              </div>
+              <div>
+                <input aria-label={`Parts of solvent ${index + 1}`} type="number" inputMode="decimal" step="any" min="0" className={`${controlClass} figure`} {...register(`eluent.components.${index}.parts`, { valueAsNumber: true })} />
+                <FieldError error={errors.eluent?.components?.[index]?.parts} />
+              </div>
+              <span className="figure py-2 text-ink-soft" aria-live="polite">{valid(parts) && total > 0 ? `${formatNumber((100 * (parts as number)) / total, 1)} %` : '—'}</span>
+              <Button size="sm" variant="quiet" disabled={components.fields.length === 1} onClick={() => components.remove(index)} aria-label={`Remove solvent ${index + 1}`}>Remove</Button>
+            </div>
+          );
+        })}
+      </div>
       <FieldError error={errors.eluent?.components?.root ?? (errors.eluent?.components as { message?: string } | undefined)} />
       <div className="flex flex-wrap items-center gap-3">
         <Button size="sm" disabled={components.fields.length >= 4} onClick={() => components.append({ solvent: 'dichloromethane', parts: 1 })}>Add solvent</Button>
@@ -82,7 +78,7 @@ export function EluentBuilder() {
             <>
               <span className="figure">{summary.notation}</span>
               {summary.strongSolvent && summary.strongPercent !== null && eluent.components.length > 1 && (
-                <span className="text-ink-soft"> · <span className="figure">{formatNumber(summary.strongPercent, 1)} %</span> {solventLabel(summary.strongSolvent)} (strong solvent, by Snyder ε°)</span>
+                <span className="text-ink-soft"> · <span className="figure">{formatNumber(summary.strongPercent, 1)} %</span> {solventLabel(summary.strongSolvent)} (the stronger solvent, by Snyder’s ε°)</span>
               )}
             </>
           ) : (

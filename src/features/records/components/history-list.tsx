@@ -1,5 +1,6 @@
 import { useRecordHistory } from '../api/record-history';
 import { fieldLabel, formatChangeValue } from './change-format';
+import { formatDateTime } from '../../../lib/dates';
 
 const actionWords: Record<string, string> = {
   create: 'created the record', update: 'edited', 'photo-add': 'added a photo', 'photo-remove': 'removed a photo', retire: 'retired the record',
@@ -18,7 +19,7 @@ export function HistoryList({ recordId }: { recordId: number }) {
           <p className="text-sm">
             <span className="figure text-ink-soft">r{revision.number}</span>{' '}
             <span className="font-medium">{revision.author?.name ?? 'someone'}</span> {actionWords[revision.action] ?? revision.action}{' '}
-            <time dateTime={revision.at} className="text-ink-soft">{new Date(revision.at).toLocaleString()}</time>
+            <time dateTime={revision.at} className="text-ink-soft">{formatDateTime(revision.at)}</time>
           </p>
           {revision.changes.length > 0 && revision.action !== 'photo-add' && revision.action !== 'photo-remove' && (
             <table className="mt-1 text-xs">

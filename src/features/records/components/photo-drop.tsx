@@ -1,6 +1,6 @@
-import { useId, useState, type DragEvent } from 'react';
+import { useEffect, useId, useMemo, useState, type DragEvent } from 'react';
 import { MAX_PHOTO_BYTES } from '../api/photos';
-import { Button } from '../../../components/ui/button';
+import { Button, buttonClass } from '../../../components/ui/button';
 
 const acceptedTypes = ['image/jpeg', 'image/png', 'image/webp'];
 
@@ -16,9 +16,21 @@ interface PhotoDropProps {
   onChange: (files: File[]) => void;
 }
 
-/** Drop or choose plate photos (JPEG, PNG or WebP, up to 10 MB each); they upload with the record. */
+/** Object URLs of the chosen files for a preview, revoked when the list changes or the form closes. */
+function usePreviews(files: File[]): string[] {
+  const urls = useMemo(() => files.map((file) => URL.createObjectURL(file)), [files]);
+  useEffect(() => () => urls.forEach((url) => URL.revokeObjectURL(url)), [urls]);
+  return urls;
+}
+
+/**
+ * Take a plate photo with the phone's camera, or drop or choose photos (JPEG, PNG or WebP, up to 10 MB each);
+ * each is previewed before it is saved with the record.
+ */
 export function PhotoDrop({ files, onChange }: PhotoDropProps) {
   const id = useId();
+  const cameraId = `${id}-camera`;
+  const previews = usePreviews(files);
   const [dragging, setDragging] = useState(false);
   const [problems, setProblems] = useState<string[]>([]);
   const take = (list: FileList | null) => {
@@ -41,13 +53,19 @@ export function PhotoDrop({ files, onChange }: PhotoDropProps) {
         onDrop={onDrop}
         className={`mt-1 rounded-plate border border-dashed p-4 text-sm ${dragging ? 'border-front bg-front-light' : 'border-line bg-plate'}`}
       >
-        <label htmlFor={id} className="cursor-pointer text-front underline underline-offset-2">Choose photos</label> or drop them here — JPEG, PNG or WebP, up to 10 MB each.
-        <input id={id} type="file" accept={acceptedTypes.join(',')} multiple className="sr-only" onChange={(event) => { take(event.target.files); event.target.value = ''; }} />
+        <div className="flex flex-wrap items-center gap-2">
+          <label htmlFor={cameraId} className={`${buttonClass('secondary')} cursor-pointer`}>Take a photo</label>
+          <input id={cameraId} type="file" accept="image/*" capture="environment" className="sr-only" onChange={(event) => { take(event.target.files); event.target.value = ''; }} />
+          <label htmlFor={id} className={`${buttonClass('quiet')} cursor-pointer`}>Choose photos</label>
+          <input id={id} type="file" accept={acceptedTypes.join(',')} multiple className="sr-only" onChange={(event) => { take(event.target.files); event.target.value = ''; }} />
+        </div>
+        <p className="mt-1 text-xs text-ink-soft">Or drop them here — JPEG, PNG or WebP, up to 10 MB each.</p>
         {files.length > 0 && (
-          <ul className="mt-2 space-y-1">
+          <ul className="mt-2 flex flex-wrap gap-3" aria-label="Photos to save">
             {files.map((file, index) => (
-              <li key={`${file.name}-${index}`} className="flex items-center gap-2">
-                <span className="figure text-xs">{file.name}</span>
+              <li key={`${file.name}-${index}`} className="flex w-36 flex-col gap-1">
+                <img src={previews[index]} alt={`Preview of ${file.name}`} className="h-28 w-36 rounded-plate border border-line bg-surface object-contain" />
+                <span className="figure truncate text-xs" title={file.name}>{file.name}</span>
                 <span className="text-xs text-ink-soft">{(file.size / 1024).toFixed(0)} kB</span>
                 <Button size="sm" variant="quiet" onClick={() => onChange(files.filter((_, other) => other !== index))} aria-label={`Remove ${file.name}`}>Remove</Button>
               </li>

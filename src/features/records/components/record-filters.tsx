@@ -29,7 +29,7 @@ export function RecordFilters({ query, onChange }: RecordFiltersProps) {
     onChange: (event: { target: { value: string } }) => onChange({ [key]: event.target.value || null }),
   });
   return (
-    <form onSubmit={submit} role="search" aria-label="Filter records" className="grid gap-3 rounded-plate border border-line bg-surface p-3 sm:grid-cols-2 lg:grid-cols-4">
+    <form onSubmit={submit} role="search" aria-label="Filter records" className="grid grid-cols-1 gap-3 rounded-plate border border-line bg-surface p-3 sm:grid-cols-2 lg:grid-cols-4">
       <div className="flex items-end gap-2 sm:col-span-2">
         <TextField label="Text" placeholder="name, synonym, notebook, note, reason…" className="flex-1" value={text} onChange={(event) => setText(event.target.value)} />
         <Button type="submit" variant="primary">Filter</Button>

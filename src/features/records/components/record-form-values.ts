@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { recordInputSchema, recordUpdateSchema, type RecordDto, type RecordInput, type RecordUpdate } from '../../../../shared/schemas/record';
+import { formatDate } from '../../../lib/dates';
 import type { loadMethods, outcomes, spotLanes, spotRoles, techniques } from '../../../../shared/schemas/record-parts';
 
 /** A number input's value: NaN (empty input with valueAsNumber) counts as "not given". */
@@ -41,6 +42,8 @@ export interface RecordFormValues {
   };
   notebookRef: string;
   notes: string;
+  /** The day the plate was run, YYYY-MM-DD (a date input's value); empty when not known. */
+  runOn: string;
 }
 
 const num = (value: FormNumber | undefined) => (value === null || value === undefined || Number.isNaN(value) ? null : value);
@@ -54,7 +57,7 @@ export function emptyRecordForm(): RecordFormValues {
     eluent: { mode: 'isocratic', components: [{ solvent: 'ethyl-acetate', parts: 1 }, { solvent: 'hexanes', parts: 4 }], additives: [], steps: [] },
     spots: [emptySpot('target')], visualisation: ['uv-254'], otherVisualisation: '', outcome: 'clean', outcomeReason: '', showColumn: false,
     column: { diameterMm: null, cartridgeSize: '', silicaG: null, sampleMg: null, loadMethod: '', fractionMl: null, fractionsPooled: '', yieldPercent: null, purityNote: '' },
-    notebookRef: '', notes: '',
+    notebookRef: '', notes: '', runOn: formatDate(new Date().toISOString()),
   };
 }
 
@@ -101,6 +104,7 @@ export function toRecordInput(values: RecordFormValues, withStructure = true): R
     column,
     notebookRef: text(values.notebookRef),
     notes: text(values.notes),
+    runOn: values.runOn || null,
   };
 }
 
@@ -160,5 +164,6 @@ export function recordToFormValues(record: RecordDto): RecordFormValues {
     },
     notebookRef: record.notebookRef ?? '',
     notes: record.notes ?? '',
+    runOn: record.runOn ?? '',
   };
 }

@@ -16,6 +16,7 @@ import { VisualisationChips } from './visualisation-chips';
 import { CautionsFor } from './cautions-for';
 import type { RecordFormValues } from './record-form-values';
 import { mapServerErrors } from './server-errors';
+import { RecentCompounds } from './recent-compounds';
 
 type ReadSpot = Omit<RecordFormValues['spots'][number], 'useDistances' | 'spotDistanceMm' | 'frontDistanceMm'>;
 
@@ -64,12 +65,13 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
         <section className="space-y-3 rounded-plate border border-line bg-surface p-4">
           <Controller control={control} name="structure" render={({ field }) => (
             <StructureInput value={field.value} onChange={(text, parsed) => { field.onChange(text); if (parsed?.name && !form.getValues('name')) form.setValue('name', parsed.name); }}
-              required error={errors.structure?.message} defaultMode="paste" />
+              required error={errors.structure?.message} defaultMode="paste"
+              extra={<RecentCompounds onPick={(smiles, name) => { field.onChange(smiles); if (name && !form.getValues('name')) form.setValue('name', name); }} />} />
           )} />
           <TextField label="Compound name" hint="Optional; kept as the compound’s name or added to its synonyms." className="max-w-md" {...register('name')} />
         </section>
 
-        <section className="grid gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
+        <section className="grid grid-cols-1 gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
           <SelectField label="Technique" options={techniques.map((value) => ({ value, label: techniqueLabels[value] }))} {...register('technique')} />
           <SelectField label="Stationary phase" options={stationaryPhases.map((entry) => ({ value: entry.key, label: entry.name }))} error={errors.stationaryPhase?.message} {...register('stationaryPhase')} />
           {phase === 'other' && <TextField label="Phase name" required error={errors.stationaryPhaseOther?.message} {...register('stationaryPhaseOther')} />}
@@ -82,7 +84,7 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
           <CautionsFor />
         </section>
 
-        <section className="grid gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
+        <section className="grid grid-cols-1 gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
           <SelectField label="Outcome" options={outcomes.map((value) => ({ value, label: value }))} {...register('outcome')} />
           <TextAreaField label={outcome === 'clean' ? 'Reason or remark' : 'Reason'} required={outcome === 'failed'} rows={2} className="sm:col-span-2"
             hint={outcome === 'failed' ? 'What went wrong: streaking, co-elution, decomposition…' : undefined} error={errors.outcomeReason?.message} {...register('outcomeReason')} />
@@ -90,9 +92,10 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
 
         <section className="rounded-plate border border-line bg-surface p-4"><ColumnDetailsFields /></section>
 
-        <section className="grid gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
+        <section className="grid grid-cols-1 gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
           <TextField label="Notebook reference" placeholder="e.g. AB-03 p. 41" mono error={errors.notebookRef?.message} {...register('notebookRef')} />
-          <TextAreaField label="Notes" rows={3} className="sm:col-span-2" error={errors.notes?.message} {...register('notes')} />
+          <TextField label="Plate run on" type="date" hint="The day you ran the plate, if not today." error={errors.runOn?.message} {...register('runOn')} />
+          <TextAreaField label="Notes" rows={3} className="sm:col-span-3" error={errors.notes?.message} {...register('notes')} />
           {withPhotos && <div className="sm:col-span-3"><PhotoDrop files={photos} onChange={setPhotos} /></div>}
           {withPhotos && plateReader && photos.length > 0 && (
             <div className="sm:col-span-3">

@@ -23,7 +23,7 @@ export function SuggestionHero({ result }: { result: ScoutResult }) {
     <section aria-labelledby="scout-suggestion" className="flex flex-wrap items-start gap-6 rounded-plate border border-line bg-surface p-5">
       <PlateStrip size="lg" title="Predicted plate" lanes={[{ label: suggestion.notation, spots: [], predicted: { rf: suggestion.predictedRf, low, high }, neighbours }]} />
       <div className="min-w-0 flex-1 space-y-2">
-        <p className="text-xs uppercase tracking-wide text-ink-soft">First plate to run · {plate?.phaseName ?? suggestion.phase.name}</p>
+        <p className="text-xs uppercase tracking-wide text-ink-soft">First plate to run · <span className="normal-case">{plate?.phaseName ?? suggestion.phase.name}</span></p>
         <h2 id="scout-suggestion" className="figure break-words text-3xl font-semibold text-ink">{plate?.label ?? suggestion.label}</h2>
         {plate && (
           <p className="text-base" data-testid="scout-first-plate">

@@ -1,7 +1,6 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
-import { formatNumber } from '../../../../shared/domain/format-number';
 import { techniqueLabels } from '../../../../shared/schemas/record-parts';
 import type { SearchRecordHit } from '../../../../shared/schemas/search';
 import { PlateStrip } from '../../../components/plate-strip';
@@ -9,6 +8,8 @@ import { StructureImage } from '../../../components/structure-image';
 import { DemoMark } from '../../../components/ui/demo-mark';
 import { OutcomeBadge } from '../../../components/ui/outcome-badge';
 import { Score } from './score';
+import { formatDate } from '../../../lib/dates';
+import { strongShareLabel } from '../../../lib/strong-share';
 
 const column = createColumnHelper<SearchRecordHit>();
 const nameOf = (hit: SearchRecordHit) => hit.record.compound.name ?? hit.record.compound.canonicalSmiles;
@@ -22,7 +23,7 @@ function columns(action?: (hit: SearchRecordHit) => ReactNode) {
       header: 'Compound · record',
       cell: ({ row }) => (
         <div className="min-w-40">
-          <Link to={`/records/${row.original.recordId}`} className="font-medium text-front hover:underline">{nameOf(row.original)}</Link>
+          <Link to={`/records/${row.original.recordId}`} className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline">{nameOf(row.original)}</Link>
           {row.original.record.demo && <DemoMark className="ml-1" />}
           <p className="figure text-2xs text-ink-soft">record #{row.original.recordId} · {row.original.record.compound.formula}</p>
         </div>
@@ -42,7 +43,7 @@ function columns(action?: (hit: SearchRecordHit) => ReactNode) {
         return (
           <div className="figure text-xs">
             <p>{eluentSummary.notation}</p>
-            {eluentSummary.strongPercent !== null && eluent.components.length > 1 && <p className="text-ink-soft">{formatNumber(eluentSummary.strongPercent, 1)} % strong</p>}
+            {eluentSummary.strongPercent !== null && eluent.components.length > 1 && <p className="text-ink-soft">{strongShareLabel(eluentSummary)}</p>}
           </div>
         );
       },
@@ -58,7 +59,7 @@ function columns(action?: (hit: SearchRecordHit) => ReactNode) {
     column.display({
       id: 'who',
       header: 'Contributor · added',
-      cell: ({ row }) => <span className="text-xs">{row.original.record.author.name}<br /><time className="figure" dateTime={row.original.record.createdAt}>{row.original.record.createdAt.slice(0, 10)}</time></span>,
+      cell: ({ row }) => <span className="text-xs">{row.original.record.author.name}<br /><time className="figure" dateTime={row.original.record.createdAt}>{formatDate(row.original.record.createdAt)}</time></span>,
     }),
   ];
 }
@@ -67,7 +68,7 @@ function columns(action?: (hit: SearchRecordHit) => ReactNode) {
 export function ResultsTable({ hits, action }: { hits: SearchRecordHit[]; action?: (hit: SearchRecordHit) => ReactNode }) {
   const table = useReactTable({ data: hits, columns: columns(action), getCoreRowModel: getCoreRowModel(), getRowId: (hit) => String(hit.recordId) });
   return (
-    <div className="overflow-x-auto rounded-plate border border-line bg-surface">
+    <div className="relative overflow-x-auto rounded-plate border border-line bg-surface">
       <table className="w-full text-sm">
         <thead className="border-b border-line bg-plate text-left text-xs text-ink-soft">
           {table.getHeaderGroups().map((group) => (

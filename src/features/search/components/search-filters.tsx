@@ -24,7 +24,7 @@ export function SearchFilters({ filters, onChange }: SearchFiltersProps) {
   const active = searchFilterKeys.filter((key) => filters[key]).length;
   return (
     <section aria-label="Filters" className="rounded-plate border border-line bg-surface p-3">
-      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5">
+      <div className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-5">
         <SelectField label="Compound class" placeholder="Any class" options={compoundClasses.map((entry) => ({ value: entry.key, label: entry.name }))} {...field('class')} />
         <SelectField label="Stationary phase" placeholder="Any phase" options={stationaryPhases.map((phase) => ({ value: phase.key, label: phase.name }))} {...field('phase')} />
         <SelectField label="Solvent in the eluent" placeholder="Any solvent" options={solvents.map((solvent) => ({ value: solvent.key, label: `${solvent.label} — ${solvent.name}` }))} {...field('solvent')} />

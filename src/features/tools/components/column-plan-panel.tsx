@@ -41,7 +41,7 @@ export function ColumnPlanPanel({ rfTarget = 0.3, rfImpurity = null, sampleMg = 
   const plan = useColumnPlan(valid ? { sampleMg: massValue as number, rfTarget: targetValue as number, rfImpurity: impurityValue } : null);
   return (
     <Card title={title} level={2}>
-      <form aria-labelledby={`${id}-inputs`} className="grid gap-3 sm:grid-cols-3" onSubmit={(event) => event.preventDefault()}>
+      <form aria-labelledby={`${id}-inputs`} className="grid grid-cols-1 gap-3 sm:grid-cols-3" onSubmit={(event) => event.preventDefault()}>
         <span id={`${id}-inputs`} className="sr-only">Column plan inputs</span>
         <TextField label="Sample (mg)" inputMode="decimal" mono value={mass} onChange={(event) => setMass(event.target.value)} error={errors.mass} />
         <TextField label="Target Rf" inputMode="decimal" mono value={target} onChange={(event) => setTarget(event.target.value)} error={errors.target} hint="In the column eluent." />

@@ -17,7 +17,7 @@ export function EluentTranslator({ initialEluent = 'DCM/MeOH 19:1' }: { initialE
   const translation = useTranslation(deferred ? { from: deferred, to: preset.to, adsorbent } : null);
   return (
     <Card title="Eluent translator">
-      <div className="grid gap-3 sm:grid-cols-3">
+      <div className="grid grid-cols-1 gap-3 sm:grid-cols-3">
         <TextField label="From eluent" mono value={eluent} onChange={(event) => setEluent(event.target.value)} hint='As written in a notebook, e.g. "EtOAc/hexanes 1:4" or "5% MeOH in DCM".' />
         <SelectField label="Into the pair" value={presetKey} onChange={(event) => setPresetKey(event.target.value)} options={pairPresets.map((item) => ({ value: item.key, label: item.label }))} />
         <SelectField label="Adsorbent" value={adsorbent} onChange={(event) => setAdsorbent(event.target.value as 'silica' | 'alumina')} options={[{ value: 'silica', label: 'silica' }, { value: 'alumina', label: 'alumina' }]} />

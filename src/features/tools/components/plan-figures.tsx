@@ -20,7 +20,7 @@ export function PlanFigures({ plan }: { plan: ColumnPlanResult }) {
   const s = plan.sources;
   return (
     <div className="space-y-3">
-      <dl className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3">
+      <dl className="grid grid-cols-1 gap-2 sm:grid-cols-2 lg:grid-cols-3">
         <Figure label="Column diameter" value={formatNumber(plan.diameterMm, 0)} unit="mm" source={s.diameterMm} />
         <Figure label="Silica" value={formatNumber(plan.silicaG, 0)} unit={`g (${formatNumber(plan.silicaToSample, 0)} g per g of sample)`} source={s.silicaG} />
         <Figure label="Eluent, packing and elution" value={formatNumber(plan.eluentMl, 0)} unit="mL" source={s.eluentMl} />

@@ -5,6 +5,8 @@ import type { TranslateEluentResult } from '../../../../shared/schemas/tools';
 
 const label = (key: string) => solventByKey(key)?.label ?? key;
 
+/** How sure a handbook value is, in words a reader uses (the catalogue's provenance codes stay internal). */
+
 function Hazards({ title, items }: { title: string; items: TranslateEluentResult['hazards']['source'] }) {
   return (
     <div>
@@ -32,7 +34,7 @@ export function TranslationView({ result }: { result: TranslateEluentResult }) {
       </p>
       <p className="text-2xs text-ink-soft">ε° {result.target.epsilon.toFixed(3)} · {result.equation} · values: {result.values.map((item) => `${item.quantity} ${label(item.solvent)} ${formatNumber(item.value.value, 2)} (${item.value.source})`).join('; ')}</p>
       {result.warnings.length > 0 && <ul className="list-disc space-y-1 pl-5 text-sm text-ink">{result.warnings.map((warning) => <li key={warning}>{warning}</li>)}</ul>}
-      <div className="grid gap-3 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
         <Hazards title="Hazards of the source eluent" items={result.hazards.source} />
         <Hazards title="Hazards of the translated eluent" items={result.hazards.target} />
       </div>
