@@ -64,14 +64,14 @@ describe('POST /api/plates/read', () => {
   it('when the photo shows no plate, then 422 saying the plate was not found', async () => {
     const res = await read(member, await bench());
     expect(res.status).toBe(422);
-    expect(res.body.error.details.missing).toBe('plate');
+    expect(res.body.error.details[0].missing).toBe('plate');
     expect(res.body.error.message).toMatch(/no TLC plate/i);
   });
 
   it('when the plate has neither origin nor front drawn, then 422 saying which', async () => {
     const res = await read(member, await blankPlate(), 'plate.png', 'image/png');
     expect(res.status).toBe(422);
-    expect(res.body.error.details.missing).toBe('origin and front');
+    expect(res.body.error.details[0].missing).toBe('origin and front');
   });
 
   it('when a generated photo stored sideways (EXIF 8) with two plates is read, then plates, lanes and every spot within 0.03 Rf come back in displayed pixels', async () => {

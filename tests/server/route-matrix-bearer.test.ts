@@ -1,4 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+
+// The calls below come from many client addresses through a trusted proxy on loopback (X-Forwarded-For), so the
+// refused-token throttle, which counts per address, never stands between a call and the answer under test.
+const savedEnv = vi.hoisted(() => {
+  const before = { ...process.env };
+  process.env.TRUST_PROXY = 'loopback';
+  return before;
+});
 import request from 'supertest';
 import { createApp } from '../../server/http/app';
 import { roleAtLeast, roles, type AccessLevel, type Role } from '../../shared/schemas/auth';
@@ -11,6 +19,9 @@ import { probeUrl, routeTable, type RouteEntry } from '../helpers/route-table';
  * and by an unknown token. A token may do what its owner's role may and never more; a read-only one only reads.
  */
 const { app, close } = createApp();
+afterAll(() => {
+  process.env = savedEnv;
+});
 afterAll(close);
 
 const apiRoutes = routeTable(app).filter((r) => r.path.startsWith('/api/'));

@@ -66,7 +66,7 @@ describe('over HTTP', () => {
   it('when a record or a structure preview is sent with C1=NC=CBr=C1, then 422 valence with the atom, and nothing is saved', async () => {
     const preview = await member.post('/api/structures/parse').set('X-CSRF-Token', member.csrf).send({ structure: 'C1=NC=CBr=C1' });
     expect(preview.status).toBe(422);
-    expect(preview.body.error).toMatchObject({ code: 'valence', details: { atom: 5, token: 'Br' } });
+    expect(preview.body.error).toMatchObject({ code: 'valence', details: [{ atom: 5, token: 'Br' }] });
     const before = (await member.get('/api/records?pageSize=1')).body.total;
     const record = await postRecord(member, { structure: 'C1=NC=CBr=C1', notes: 'valence test' });
     expect(record.status).toBe(422);
