@@ -28,9 +28,15 @@ export default tseslint.config(
     plugins: { 'import-x': importX },
     settings: { 'import-x/resolver': { node: { extensions: ['.ts', '.tsx', '.mjs', '.js'] } } },
     rules: {
-      'import-x/no-restricted-paths': ['error', { zones: [...featureZones('server/features'), ...featureZones('src/features')] }],
+      'import-x/no-restricted-paths': [
+        'error',
+        { zones: [...featureZones('server/features'), ...featureZones('src/features')] },
+      ],
       'import-x/no-cycle': ['error', { maxDepth: 2, ignoreExternal: true }],
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrors: 'none' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrors: 'none' },
+      ],
     },
   },
   {

@@ -12,9 +12,12 @@ function firstLoadReport(budgetKb = 250): Plugin {
     name: 'rfolio-first-load-report',
     apply: 'build',
     writeBundle(_options, bundle) {
-      const chunks = new Map(Object.values(bundle).flatMap((c) => (c.type === 'chunk' ? [[c.fileName, c] as const] : [])));
+      const chunks = new Map(
+        Object.values(bundle).flatMap((c) => (c.type === 'chunk' ? [[c.fileName, c] as const] : [])),
+      );
       const kb = (name: string) => gzipSync(chunks.get(name)!.code, { level: 9 }).length / 1000;
-      const hasOcl = (name: string) => chunks.get(name)!.moduleIds.some((id) => id.includes('node_modules/openchemlib'));
+      const hasOcl = (name: string) =>
+        chunks.get(name)!.moduleIds.some((id) => id.includes('node_modules/openchemlib'));
       const firstLoad = new Set<string>();
       for (const entry of chunks.values()) {
         if (!entry.isEntry) continue;
@@ -29,10 +32,14 @@ function firstLoadReport(budgetKb = 250): Plugin {
         const total = [...seen].reduce((n, name) => n + kb(name), 0);
         const ocl = [...seen].some(hasOcl);
         const verdict = total > budgetKb || ocl ? 'OVER BUDGET' : 'within budget';
-        this.info(`first-load JS (${entry.name}): ${total.toFixed(1)} kB gzip in ${seen.size} chunk(s); budget ${budgetKb} kB, ${verdict}; OpenChemLib ${ocl ? 'INCLUDED' : 'not included'}`);
+        this.info(
+          `first-load JS (${entry.name}): ${total.toFixed(1)} kB gzip in ${seen.size} chunk(s); budget ` +
+            `${budgetKb} kB, ${verdict}; OpenChemLib ${ocl ? 'INCLUDED' : 'not included'}`,
+        );
       }
       for (const name of chunks.keys()) {
-        if (!firstLoad.has(name) && hasOcl(name)) this.info(`lazy OpenChemLib chunk: ${name} ${kb(name).toFixed(1)} kB gzip`);
+        if (!firstLoad.has(name) && hasOcl(name))
+          this.info(`lazy OpenChemLib chunk: ${name} ${kb(name).toFixed(1)} kB gzip`);
       }
     },
   };

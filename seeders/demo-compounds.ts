@@ -16,8 +16,13 @@ export interface DemoCompound {
   needs?: 'base' | 'acid' | 'gentle' | 'ammonia';
 }
 
-const c = (name: string, smiles: string, system: DemoCompound['system'], x30: number, needs?: DemoCompound['needs']): DemoCompound =>
-  ({ name, smiles, system, x30, needs });
+const c = (
+  name: string,
+  smiles: string,
+  system: DemoCompound['system'],
+  x30: number,
+  needs?: DemoCompound['needs'],
+): DemoCompound => ({ name, smiles, system, x30, needs });
 
 export const demoCompounds: readonly DemoCompound[] = [
   // alcohols and diols

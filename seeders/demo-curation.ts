@@ -25,8 +25,14 @@ export async function seedDemoStructureDuplicate(transaction: Transaction): Prom
   );
   const authorId = colleague?.id ?? original.authorId;
   const state = await loadRecordState(original.id, transaction);
-  const compound = await findOrCreateCompound('C[C@H](O)c1ccccc1', { name: '(S)-1-phenylethanol', userId: authorId, transaction });
-  const spots = state.spots.map((spot) => (spot.role === 'target' ? { ...spot, rf: Math.round((spot.rf + 0.01) * 100) / 100 } : spot));
+  const compound = await findOrCreateCompound('C[C@H](O)c1ccccc1', {
+    name: '(S)-1-phenylethanol',
+    userId: authorId,
+    transaction,
+  });
+  const spots = state.spots.map((spot) =>
+    spot.role === 'target' ? { ...spot, rf: Math.round((spot.rf + 0.01) * 100) / 100 } : spot,
+  );
   const content = {
     compoundId: compound.id,
     technique: state.technique,

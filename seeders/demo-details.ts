@@ -12,12 +12,14 @@ const uvClasses = new Set(['aromatic', 'heteroaromatic', 'conjugated']);
 export function demoVisualisations(classes: readonly string[], random: Random): Visualisation[] {
   const chosen: string[] = [];
   if (classes.some((key) => uvClasses.has(key))) chosen.push('uv-254');
-  const meets = (stain: (typeof stains)[number]) => !stain.nonDestructive && stain.detects.some((key) => classes.includes(key));
+  const meets = (stain: (typeof stains)[number]) =>
+    !stain.nonDestructive && stain.detects.some((key) => classes.includes(key));
   const specific = stains.filter((stain) => meets(stain) && stain.selectivity === 'specific');
   const broad = stains.filter((stain) => meets(stain) && stain.selectivity !== 'specific');
   if (specific.length > 0) chosen.push(random.pick(specific).key);
   if (broad.length > 0 && (chosen.length < 2 || random.chance(0.3))) chosen.push(random.pick(broad).key);
-  if (chosen.length === 0 || (chosen.length === 1 && chosen[0] === 'uv-254' && random.chance(0.5))) chosen.push(random.pick(['pma', 'iodine', 'cam']));
+  if (chosen.length === 0 || (chosen.length === 1 && chosen[0] === 'uv-254' && random.chance(0.5)))
+    chosen.push(random.pick(['pma', 'iodine', 'cam']));
   return [...new Set(chosen)].map((method) => ({ method, note: null }));
 }
 
@@ -33,7 +35,13 @@ const stillTable = [
   { diameterMm: 50, loadMg: 2500, fractionMl: 50 },
 ];
 
-const purityNotes = ['clean by ¹H NMR', '≥95 % by ¹H NMR', 'trace grease by ¹H NMR', 'single spot by TLC', 'clean by LC-MS'];
+const purityNotes = [
+  'clean by ¹H NMR',
+  '≥95 % by ¹H NMR',
+  'trace grease by ¹H NMR',
+  'single spot by TLC',
+  'clean by LC-MS',
+];
 
 /**
  * Invented flash-column details consistent with Still's table: the narrowest column whose load covers the

@@ -20,7 +20,11 @@ export async function seedDemoPeople(password: string, transaction: Transaction)
   const passwordHash = await hashPassword(password);
   const ids: number[] = [];
   for (const person of benchChemists) {
-    const [user] = await User.findOrCreate({ where: { email: person.email }, defaults: { ...person, role: 'member', passwordHash }, transaction });
+    const [user] = await User.findOrCreate({
+      where: { email: person.email },
+      defaults: { ...person, role: 'member', passwordHash },
+      transaction,
+    });
     ids.push(user.id);
   }
   for (const email of ['member@example.org', 'curator@example.org']) {

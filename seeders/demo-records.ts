@@ -8,7 +8,14 @@ import { insertRecord } from '../server/core/record-rows';
 import { demoCompounds } from './demo-compounds';
 import { planDemoRecords } from './demo-plan';
 
-const initialsOf = (name: string) => name.replace(/\(demo\)/, '').split(/[\s-]+/).filter(Boolean).map((part) => part[0].toUpperCase()).join('').slice(0, 3);
+const initialsOf = (name: string) =>
+  name
+    .replace(/\(demo\)/, '')
+    .split(/[\s-]+/)
+    .filter(Boolean)
+    .map((part) => part[0].toUpperCase())
+    .join('')
+    .slice(0, 3);
 
 /**
  * Seeds the invented group's records (flagged `demo`) over the demo compounds. Compounds and their
@@ -16,13 +23,19 @@ const initialsOf = (name: string) => name.replace(/\(demo\)/, '').split(/[\s-]+/
  * their revision, inside the caller's transaction. Returns how many records were written.
  */
 export async function seedDemoRecords(authorIds: number[], transaction: Transaction): Promise<number> {
-  const compounds = await findOrCreateCompounds(demoCompounds.map((compound) => ({ structure: compound.smiles, name: compound.name })), {
-    userId: authorIds[0] ?? null,
-    transaction,
-  });
+  const compounds = await findOrCreateCompounds(
+    demoCompounds.map((compound) => ({ structure: compound.smiles, name: compound.name })),
+    {
+      userId: authorIds[0] ?? null,
+      transaction,
+    },
+  );
   const authors = await User.findAll({ where: { id: authorIds }, transaction });
   const initials = new Map(authors.map((author) => [author.id, initialsOf(author.name)]));
-  const plan = planDemoRecords(demoCompounds.map((compound, index) => ({ ...compound, classes: compounds[index].classes })), authorIds.length);
+  const plan = planDemoRecords(
+    demoCompounds.map((compound, index) => ({ ...compound, classes: compounds[index].classes })),
+    authorIds.length,
+  );
   const pages = new Map<number, number>();
   for (const item of plan.sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime())) {
     const authorId = authorIds[item.author];

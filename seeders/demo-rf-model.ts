@@ -44,10 +44,67 @@ export interface DemoSystem {
 }
 
 export const demoSystems: Record<'EH' | 'DM' | 'EP' | 'RP', DemoSystem> = {
-  EH: { weak: 'hexanes', strong: 'ethyl-acetate', phase: 'silica', ladder: [[100, 1], [50, 1], [20, 1], [10, 1], [9, 1], [5, 1], [4, 1], [3, 1], [2, 1], [3, 2], [1, 1], [1, 2], [1, 4]] },
-  DM: { weak: 'dichloromethane', strong: 'methanol', phase: 'silica', ladder: [[100, 1], [50, 1], [30, 1], [20, 1], [15, 1], [10, 1], [9, 1], [5, 1]] },
-  EP: { weak: 'pentane', strong: 'diethyl-ether', phase: 'silica', ladder: [[200, 1], [100, 1], [50, 1], [20, 1], [10, 1], [5, 1]] },
-  RP: { weak: 'water', strong: 'acetonitrile', phase: 'c18', ladder: [[9, 1], [4, 1], [7, 3], [3, 2], [1, 1], [2, 3]] },
+  EH: {
+    weak: 'hexanes',
+    strong: 'ethyl-acetate',
+    phase: 'silica',
+    ladder: [
+      [100, 1],
+      [50, 1],
+      [20, 1],
+      [10, 1],
+      [9, 1],
+      [5, 1],
+      [4, 1],
+      [3, 1],
+      [2, 1],
+      [3, 2],
+      [1, 1],
+      [1, 2],
+      [1, 4],
+    ],
+  },
+  DM: {
+    weak: 'dichloromethane',
+    strong: 'methanol',
+    phase: 'silica',
+    ladder: [
+      [100, 1],
+      [50, 1],
+      [30, 1],
+      [20, 1],
+      [15, 1],
+      [10, 1],
+      [9, 1],
+      [5, 1],
+    ],
+  },
+  EP: {
+    weak: 'pentane',
+    strong: 'diethyl-ether',
+    phase: 'silica',
+    ladder: [
+      [200, 1],
+      [100, 1],
+      [50, 1],
+      [20, 1],
+      [10, 1],
+      [5, 1],
+    ],
+  },
+  RP: {
+    weak: 'water',
+    strong: 'acetonitrile',
+    phase: 'c18',
+    ladder: [
+      [9, 1],
+      [4, 1],
+      [7, 3],
+      [3, 2],
+      [1, 1],
+      [2, 3],
+    ],
+  },
 };
 
 export const fractionOf = ([weak, strong]: readonly [number, number]) => strong / (weak + strong);
@@ -56,7 +113,8 @@ export const fractionOf = ([weak, strong]: readonly [number, number]) => strong 
 export function closestStep(system: DemoSystem, x30: number): number {
   let best = 0;
   system.ladder.forEach((step, index) => {
-    if (Math.abs(Math.log(fractionOf(step) / x30)) < Math.abs(Math.log(fractionOf(system.ladder[best]) / x30))) best = index;
+    if (Math.abs(Math.log(fractionOf(step) / x30)) < Math.abs(Math.log(fractionOf(system.ladder[best]) / x30)))
+      best = index;
   });
   return best;
 }

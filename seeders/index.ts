@@ -18,10 +18,10 @@ export async function seedDemoOnce(): Promise<boolean> {
     await seedDemoUsers(env().RFOLIO_DEMO_PASSWORD, transaction);
     await seedDemoRecords(await seedDemoPeople(env().RFOLIO_DEMO_PASSWORD, transaction), transaction);
     await seedDemoStructureDuplicate(transaction);
-    await sequelize.query(
-      `INSERT INTO app_meta (key, value) VALUES (:key, :value::jsonb)`,
-      { replacements: { key: MARKER, value: JSON.stringify({ at: new Date().toISOString() }) }, transaction },
-    );
+    await sequelize.query(`INSERT INTO app_meta (key, value) VALUES (:key, :value::jsonb)`, {
+      replacements: { key: MARKER, value: JSON.stringify({ at: new Date().toISOString() }) },
+      transaction,
+    });
   });
   // Planner statistics for the freshly loaded tables now, rather than when autovacuum's analyze gets round to them.
   await sequelize.query('ANALYZE');

@@ -23,7 +23,9 @@ function announce(mailCatcherPort: number | null) {
     for (const a of demoAccounts()) console.log(`  ${a.role.padEnd(8)} ${a.email}  password: ${a.password}`);
   }
   if (mailCatcherPort !== null) {
-    console.log(`Mail catcher (not in production): smtp://127.0.0.1:${mailCatcherPort}, read it as an admin at ${url}/admin/mailbox`);
+    console.log(
+      `Mail catcher (not in production): smtp://127.0.0.1:${mailCatcherPort}, read it as an admin at ${url}/admin/mailbox`,
+    );
   }
   console.log('Stop with Ctrl+C.\n');
 }
@@ -31,13 +33,19 @@ function announce(mailCatcherPort: number | null) {
 /** One app process: search indexes, (outside production) the mail catcher, the HTTP server. */
 async function serve(options: { announce: boolean }) {
   const [{ createApp }, { createHttpServer }, { usesMailCatcher }, { searchIndexes }] = await Promise.all([
-    import('./http/app'), import('./http/http-server'), import('./mail/send'), import('./features/search/process-indexes'),
+    import('./http/app'),
+    import('./http/http-server'),
+    import('./mail/send'),
+    import('./features/search/process-indexes'),
   ]);
   // The catcher's packages are development dependencies: imported only where the catcher runs (never in production).
   const startMailCatcher = async (port: number) => (await import('./mail/catcher')).startMailCatcher(port);
-  await searchIndexes().catch((error) => logger.warn({ err: error }, 'search indexes not built at start; the first search retries'));
+  await searchIndexes().catch((error) =>
+    logger.warn({ err: error }, 'search indexes not built at start; the first search retries'),
+  );
   const mailCatcherPort = usesMailCatcher() ? await startMailCatcher(config.MAIL_CATCHER_PORT) : null;
-  if (options.announce && !usesMailCatcher() && !config.SMTP_HOST) logger.warn('SMTP_HOST is not set: invitations and password resets cannot be e-mailed.');
+  if (options.announce && !usesMailCatcher() && !config.SMTP_HOST)
+    logger.warn('SMTP_HOST is not set: invitations and password resets cannot be e-mailed.');
 
   const { app, close } = createApp();
   // Work on background jobs (imports) here too, so an import a stopped process left is resumed by this one.
@@ -98,11 +106,18 @@ async function supervise(count: number) {
     if (closing) return;
     closing = true;
     logger.info({ signal }, 'stopping the app processes');
-    const workers = Object.values(cluster.workers ?? {}).filter((worker): worker is Worker => worker !== undefined && !worker.isDead());
-    await Promise.all(workers.map((worker) => new Promise((resolve) => {
-      worker.once('exit', resolve);
-      worker.process.kill('SIGTERM');
-    })));
+    const workers = Object.values(cluster.workers ?? {}).filter(
+      (worker): worker is Worker => worker !== undefined && !worker.isDead(),
+    );
+    await Promise.all(
+      workers.map(
+        (worker) =>
+          new Promise((resolve) => {
+            worker.once('exit', resolve);
+            worker.process.kill('SIGTERM');
+          }),
+      ),
+    );
     await sequelize.close().catch(() => undefined);
     process.exit(exitCode);
   };

@@ -4,7 +4,11 @@ import { ValidationError } from '../http/errors';
 import { User } from '../db/models';
 
 /** Refuses a new password built on the person's own name or e-mail (NIST SP 800-63B context words). */
-export function assertPasswordFits(password: string, person: { email: string; name?: string }, field = 'body.password') {
+export function assertPasswordFits(
+  password: string,
+  person: { email: string; name?: string },
+  field = 'body.password',
+) {
   const problem = passwordProblem(password, person);
   if (problem) throw new ValidationError(`${field}: ${problem}`, [{ path: field, message: problem }]);
 }

@@ -26,7 +26,11 @@ export function rememberDevice(res: Response, email: string): void {
 export function isKnownDevice(req: Request, email: string): boolean {
   const header = req.headers.cookie ?? '';
   const prefix = `${KNOWN_DEVICE_COOKIE}=`;
-  const sent = header.split(';').map((part) => part.trim()).find((part) => part.startsWith(prefix))?.slice(prefix.length);
+  const sent = header
+    .split(';')
+    .map((part) => part.trim())
+    .find((part) => part.startsWith(prefix))
+    ?.slice(prefix.length);
   if (!sent || !email) return false;
   const expected = Buffer.from(tokenFor(email));
   const given = Buffer.from(sent);

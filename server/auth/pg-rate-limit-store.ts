@@ -38,9 +38,12 @@ export class PgRateLimitStore implements Store {
   }
 
   async decrement(key: string): Promise<void> {
-    await sequelize.query('UPDATE rate_limit_hits SET hits = GREATEST(hits - 1, 0) WHERE key = :key AND reset_at > now()', {
-      replacements: { key: this.prefix + key },
-    });
+    await sequelize.query(
+      'UPDATE rate_limit_hits SET hits = GREATEST(hits - 1, 0) WHERE key = :key AND reset_at > now()',
+      {
+        replacements: { key: this.prefix + key },
+      },
+    );
   }
 
   async resetKey(key: string): Promise<void> {

@@ -17,7 +17,10 @@ type StoreMethods = Pick<Store, 'get' | 'set' | 'destroy'>;
  * query while the cache is fresh. Entries are kept as JSON (express-session mutates what `get` returns) and
  * never outlive the session's own expiry.
  */
-export function cacheSessionReads<S extends StoreMethods>(store: S, currentStamp: () => Promise<string> = dataStamp): S {
+export function cacheSessionReads<S extends StoreMethods>(
+  store: S,
+  currentStamp: () => Promise<string> = dataStamp,
+): S {
   const entries = new Map<string, { json: string; until: number; stamp: string }>();
   const get = store.get.bind(store);
   const set = store.set.bind(store);
@@ -26,7 +29,11 @@ export function cacheSessionReads<S extends StoreMethods>(store: S, currentStamp
   const remember = (sid: string, session: SessionData, stamp: string) => {
     const expires = session.cookie?.expires ? new Date(session.cookie.expires).getTime() : Infinity;
     entries.delete(sid);
-    entries.set(sid, { json: JSON.stringify(session), until: Math.min(Date.now() + SESSION_CACHE_TTL_MS, expires), stamp });
+    entries.set(sid, {
+      json: JSON.stringify(session),
+      until: Math.min(Date.now() + SESSION_CACHE_TTL_MS, expires),
+      stamp,
+    });
     if (entries.size > MAX_ENTRIES) entries.delete(entries.keys().next().value as string);
   };
 
@@ -34,7 +41,8 @@ export function cacheSessionReads<S extends StoreMethods>(store: S, currentStamp
     currentStamp().then(
       (stamp) => {
         const hit = entries.get(sid);
-        if (hit && hit.until > Date.now() && hit.stamp === stamp) return callback(null, JSON.parse(hit.json) as SessionData);
+        if (hit && hit.until > Date.now() && hit.stamp === stamp)
+          return callback(null, JSON.parse(hit.json) as SessionData);
         entries.delete(sid);
         get(sid, (err: unknown, session?: SessionData | null) => {
           if (!err && session) remember(sid, session, stamp);

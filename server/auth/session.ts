@@ -17,7 +17,15 @@ export function sessionMiddleware() {
   const pool = new pg.Pool({ connectionString: env().DATABASE_URL, max: 5, connectionTimeoutMillis: 3_000 });
   // An idle connection dropped (e.g. the database restarted): the pool replaces it; say so rather than stay silent.
   pool.on('error', (err) => logger.warn({ err }, 'session store connection failed'));
-  const store = cacheSessionReads(new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true }));
+  const store = cacheSessionReads(
+    new PgStore({
+      pool,
+      tableName: 'sessions',
+      createTableIfMissing: false,
+      pruneSessionInterval: 15 * 60,
+      disableTouch: true,
+    }),
+  );
   const production = env().NODE_ENV === 'production';
   return {
     pool,

@@ -71,7 +71,12 @@ export class PgAttemptStore implements AttemptStore {
 
   async claim(key: string, rule: WaitRule): Promise<Claim> {
     if (Math.random() < 0.01) await sequelize.query('DELETE FROM rate_limit_hits WHERE reset_at < now()');
-    const replacements = { key: this.prefix + key, windowSecs: rule.windowMs / 1000, free: rule.free, maxSecs: rule.maxWaitMs / 1000 };
+    const replacements = {
+      key: this.prefix + key,
+      windowSecs: rule.windowMs / 1000,
+      free: rule.free,
+      maxSecs: rule.maxWaitMs / 1000,
+    };
     const owed = `CASE WHEN rate_limit_hits.hits < :free THEN 0
       ELSE LEAST(power(2, rate_limit_hits.hits - :free), :maxSecs) END`;
     const claimed = await sequelize.query<{ hits: number }>(
@@ -94,9 +99,12 @@ export class PgAttemptStore implements AttemptStore {
   }
 
   async giveBack(key: string): Promise<void> {
-    await sequelize.query('UPDATE rate_limit_hits SET hits = GREATEST(hits - 1, 0) WHERE key = :key AND reset_at > now()', {
-      replacements: { key: this.prefix + key },
-    });
+    await sequelize.query(
+      'UPDATE rate_limit_hits SET hits = GREATEST(hits - 1, 0) WHERE key = :key AND reset_at > now()',
+      {
+        replacements: { key: this.prefix + key },
+      },
+    );
   }
 
   async clear(key: string): Promise<void> {

@@ -37,11 +37,17 @@ export function forgetSessionUser(id?: number) {
 }
 
 async function read(id: number): Promise<SessionUserRow | null> {
-  const row = await User.findByPk(id, { attributes: ['id', 'email', 'name', 'role', 'status', 'sessionsValidAfter'], raw: true });
+  const row = await User.findByPk(id, {
+    attributes: ['id', 'email', 'name', 'role', 'status', 'sessionsValidAfter'],
+    raw: true,
+  });
   return row ? { ...row, sessionsValidAfter: new Date(row.sessionsValidAfter) } : null;
 }
 
-/** The user row behind a session (of request `req`): from the cache while fresh at the request's data stamp, otherwise one query shared by concurrent requests. */
+/**
+ * The user row behind a session (of request `req`): from the cache while fresh at the request's data stamp, otherwise
+ * one query shared by concurrent requests.
+ */
 export async function sessionUserRow(id: number, req?: object): Promise<SessionUserRow | null> {
   const stamp = await (req ? requestStamp(req) : dataStamp());
   const cached = entries.get(id);
@@ -64,7 +70,15 @@ function forgetNowAndAfterCommit(id: number | undefined, transaction: Transactio
   transaction?.afterCommit(() => forgetSessionUser(id));
 }
 
-User.addHook('afterSave', 'session-user-cache', (user: User, options: { transaction?: Transaction | null }) => forgetNowAndAfterCommit(user.id, options.transaction));
-User.addHook('afterDestroy', 'session-user-cache', (user: User, options: { transaction?: Transaction | null }) => forgetNowAndAfterCommit(user.id, options.transaction));
-User.addHook('afterBulkUpdate', 'session-user-cache', (options: { transaction?: Transaction | null }) => forgetNowAndAfterCommit(undefined, options.transaction));
-User.addHook('afterBulkDestroy', 'session-user-cache', (options: { transaction?: Transaction | null }) => forgetNowAndAfterCommit(undefined, options.transaction));
+User.addHook('afterSave', 'session-user-cache', (user: User, options: { transaction?: Transaction | null }) =>
+  forgetNowAndAfterCommit(user.id, options.transaction),
+);
+User.addHook('afterDestroy', 'session-user-cache', (user: User, options: { transaction?: Transaction | null }) =>
+  forgetNowAndAfterCommit(user.id, options.transaction),
+);
+User.addHook('afterBulkUpdate', 'session-user-cache', (options: { transaction?: Transaction | null }) =>
+  forgetNowAndAfterCommit(undefined, options.transaction),
+);
+User.addHook('afterBulkDestroy', 'session-user-cache', (options: { transaction?: Transaction | null }) =>
+  forgetNowAndAfterCommit(undefined, options.transaction),
+);

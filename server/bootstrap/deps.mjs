@@ -44,10 +44,10 @@ export function ensureChromium(isRoot) {
   const exe = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
   if (existsSync(exe)) return exe;
   if (!isRoot) {
-    console.error('Browser tests need Debian\'s chromium: sudo apt-get install -y chromium (or set CHROMIUM_PATH).');
+    console.error("Browser tests need Debian's chromium: sudo apt-get install -y chromium (or set CHROMIUM_PATH).");
     process.exit(1);
   }
-  console.log('Installing Debian\'s chromium for the browser tests (apt-get)…');
+  console.log("Installing Debian's chromium for the browser tests (apt-get)…");
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
   sh('apt-get', ['update'], { env });
   sh('apt-get', ['install', '-y', '--no-install-recommends', 'chromium'], { env });

@@ -17,7 +17,12 @@ export function isRunning(bin: string, paths: ClusterPaths): boolean;
  * `startedByUs` says whether to stop it later (also true when a crashed earlier start left it running: taken back).
  * A cluster created earlier with trust gets a password and scram-sha-256 on first use.
  */
-export function startCluster(bin: string, paths: ClusterPaths, port: number, options?: { fast?: boolean; log?: (line: string) => void }): { startedByUs: boolean };
+export function startCluster(
+  bin: string,
+  paths: ClusterPaths,
+  port: number,
+  options?: { fast?: boolean; log?: (line: string) => void },
+): { startedByUs: boolean };
 export function stopCluster(bin: string, paths: ClusterPaths): void;
 export function ensureDatabase(bin: string, port: number, db: string, options?: { recreate?: boolean }): boolean;
 /** The URL of a database in the project's cluster on this port, with the cluster's generated password. */

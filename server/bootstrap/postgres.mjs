@@ -2,7 +2,17 @@
 // Used by start.mjs and test.mjs before any npm package is known to be installed.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { createHash, randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readdirSync, chownSync, chmodSync, readFileSync, writeFileSync, renameSync, rmSync } from 'node:fs';
+import {
+  existsSync,
+  mkdirSync,
+  readdirSync,
+  chownSync,
+  chmodSync,
+  readFileSync,
+  writeFileSync,
+  renameSync,
+  rmSync,
+} from 'node:fs';
 import { join, resolve } from 'node:path';
 
 export const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
@@ -25,13 +35,13 @@ export function ensurePostgresInstalled(log = console.log) {
   if (bin) return bin;
   if (!isRoot) {
     console.error(
-      'Rfolio needs PostgreSQL server binaries (initdb, pg_ctl). Install Debian\'s package first:\n' +
+      "Rfolio needs PostgreSQL server binaries (initdb, pg_ctl). Install Debian's package first:\n" +
         '  sudo apt-get update && sudo apt-get install -y postgresql\n' +
         'or set RFOLIO_PG_BIN to the folder holding pg_ctl.',
     );
     process.exit(1);
   }
-  log('PostgreSQL server not found: installing Debian\'s postgresql package (apt-get)…');
+  log("PostgreSQL server not found: installing Debian's postgresql package (apt-get)…");
   run('apt-get', ['update'], { env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
   run('apt-get', ['install', '-y', '--no-install-recommends', 'postgresql'], {
     env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
@@ -156,9 +166,25 @@ export function startCluster(bin, paths, port, { fast = false, log = console.log
     const password = randomBytes(24).toString('base64url');
     const pending = join(paths.base, 'rfolio.password.new');
     writeOwnerOnly(pending, `${password}\n`);
-    pgExec(bin, 'initdb', ['-D', paths.data, '-U', 'rfolio', `--pwfile=${pending}`, '--auth-host=scram-sha-256', '--auth-local=scram-sha-256', '-E', 'UTF8', '--no-locale'], {
-      stdio: 'ignore',
-    });
+    pgExec(
+      bin,
+      'initdb',
+      [
+        '-D',
+        paths.data,
+        '-U',
+        'rfolio',
+        `--pwfile=${pending}`,
+        '--auth-host=scram-sha-256',
+        '--auth-local=scram-sha-256',
+        '-E',
+        'UTF8',
+        '--no-locale',
+      ],
+      {
+        stdio: 'ignore',
+      },
+    );
     renameSync(pending, passwordFile(paths));
   }
   let startedByUs = false;
@@ -191,14 +217,21 @@ export function startCluster(bin, paths, port, { fast = false, log = console.log
 function requirePassword(bin, paths, port, log) {
   log(`PostgreSQL in ${paths.data} accepted anyone (trust): setting a generated password and requiring it.`);
   const password = randomBytes(24).toString('base64url');
-  execFileSync(join(bin, 'psql'), ['-h', '127.0.0.1', '-p', String(port), '-U', 'rfolio', '-d', 'postgres', '-v', 'ON_ERROR_STOP=1', '-qtA'], {
-    input: `SET password_encryption = 'scram-sha-256';\nALTER ROLE rfolio PASSWORD '${password}';\n`,
-    stdio: ['pipe', 'ignore', 'inherit'],
-  });
+  execFileSync(
+    join(bin, 'psql'),
+    ['-h', '127.0.0.1', '-p', String(port), '-U', 'rfolio', '-d', 'postgres', '-v', 'ON_ERROR_STOP=1', '-qtA'],
+    {
+      input: `SET password_encryption = 'scram-sha-256';\nALTER ROLE rfolio PASSWORD '${password}';\n`,
+      stdio: ['pipe', 'ignore', 'inherit'],
+    },
+  );
   writeOwnerOnly(passwordFile(paths), `${password}\n`);
   const hba = join(paths.data, 'pg_hba.conf');
   const lines = readFileSync(hba, 'utf8').split('\n');
-  writeFileSync(hba, lines.map((line) => (/^\s*#/.test(line) ? line : line.replace(/\btrust\s*$/, 'scram-sha-256'))).join('\n'));
+  writeFileSync(
+    hba,
+    lines.map((line) => (/^\s*#/.test(line) ? line : line.replace(/\btrust\s*$/, 'scram-sha-256'))).join('\n'),
+  );
   pgExec(bin, 'pg_ctl', ['-D', paths.data, 'reload'], { stdio: 'ignore' });
 }
 
@@ -209,10 +242,14 @@ export function stopCluster(bin, paths) {
 }
 
 function psql(bin, port, db, sql) {
-  return execFileSync(join(bin, 'psql'), ['-h', '127.0.0.1', '-p', String(port), '-U', 'rfolio', '-d', db, '-tAc', sql], {
-    encoding: 'utf8',
-    env: { ...process.env, PGPASSWORD: clusterPassword(port) ?? '' },
-  }).trim();
+  return execFileSync(
+    join(bin, 'psql'),
+    ['-h', '127.0.0.1', '-p', String(port), '-U', 'rfolio', '-d', db, '-tAc', sql],
+    {
+      encoding: 'utf8',
+      env: { ...process.env, PGPASSWORD: clusterPassword(port) ?? '' },
+    },
+  ).trim();
 }
 
 export function ensureDatabase(bin, port, db, { recreate = false } = {}) {
@@ -239,7 +276,9 @@ export function dropDatabase(bin, port, db) {
 /** True when another test run's databases exist, so the cluster must stay up for it. */
 export function otherRunsActive(bin, port) {
   try {
-    return psql(bin, port, 'postgres', "SELECT count(*) FROM pg_database WHERE datname LIKE 'rfolio\\_test\\_%'") !== '0';
+    return (
+      psql(bin, port, 'postgres', "SELECT count(*) FROM pg_database WHERE datname LIKE 'rfolio\\_test\\_%'") !== '0'
+    );
   } catch {
     return false;
   }

@@ -33,7 +33,11 @@ export function checkMolecule(mol: Molecule, locate: AtomLocator): void {
   const atoms = heavyAtoms(mol);
   if (atoms.length === 0) throw new StructureError(422, 'structure_empty', 'The structure has no atoms.');
   if (atoms.length > MAX_HEAVY_ATOMS) {
-    throw new StructureError(422, 'structure_too_many_atoms', `The structure has ${atoms.length} heavy atoms; the limit is ${MAX_HEAVY_ATOMS}.`);
+    throw new StructureError(
+      422,
+      'structure_too_many_atoms',
+      `The structure has ${atoms.length} heavy atoms; the limit is ${MAX_HEAVY_ATOMS}.`,
+    );
   }
   atoms.forEach((a, i) => {
     const { where, details } = locate.describe(i);
@@ -43,15 +47,29 @@ export function checkMolecule(mol: Molecule, locate: AtomLocator): void {
     }
     const charged = mol.getAtomCharge(a) !== 0;
     if (mol.getFreeValence(a) < 0) {
-      fail('valence', `${where} (${label}) has ${mol.getOccupiedValence(a)} bonds; ${charged ? 'with its charge ' : ''}${label} allows ${mol.getMaxValence(a)}.`, details);
+      fail(
+        'valence',
+        `${where} (${label}) has ${mol.getOccupiedValence(a)} bonds; ${charged ? 'with its charge ' : ''}${label} ` +
+          `allows ${mol.getMaxValence(a)}.`,
+        details,
+      );
     }
     if (!charged && mol.getAtomAbnormalValence(a) !== -1) {
-      fail('valence', `${where} (${label}) is written with valence ${mol.getAtomAbnormalValence(a)}, which uncharged ${label} does not have.`, details);
+      fail(
+        'valence',
+        `${where} (${label}) is written with valence ${mol.getAtomAbnormalValence(a)}, which uncharged ${label} does not have.`,
+        details,
+      );
     }
     const problem = valenceProblem(mol, a);
     if (problem) fail('valence', `${where} (${label}) ${problem}.`, { ...details, token: label });
     if (mol.getAtomRadical(a) !== 0 && locate.writtenAromatic?.(i)) {
-      fail('aromaticity', `${where} (${label}) sits in an aromatic ring that cannot be given alternating double bonds; write ring N–H as [nH] or give a Kekulé structure.`, details);
+      fail(
+        'aromaticity',
+        `${where} (${label}) sits in an aromatic ring that cannot be given alternating double bonds; ` +
+          `write ring N–H as [nH] or give a Kekulé structure.`,
+        details,
+      );
     }
   });
 }

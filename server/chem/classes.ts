@@ -36,7 +36,11 @@ function fragment(smiles: string): Query {
 let compiled: CompiledClass[] | null = null;
 
 function compile(): CompiledClass[] {
-  compiled ??= compoundClasses.map((entry) => ({ entry, include: entry.include.map(fragment), exclude: (entry.exclude ?? []).map(fragment) }));
+  compiled ??= compoundClasses.map((entry) => ({
+    entry,
+    include: entry.include.map(fragment),
+    exclude: (entry.exclude ?? []).map(fragment),
+  }));
   return compiled;
 }
 
@@ -102,7 +106,10 @@ export function classify(parent: Molecule, input?: ClassifyInput): CompoundClass
   let enteredTarget: Target | undefined;
   return compile()
     .filter((compiledClass) => {
-      const target = compiledClass.entry.key === 'ammonium-salt' ? (enteredTarget ??= asEntered === parent ? parentTarget : new Target(asEntered)) : parentTarget;
+      const target =
+        compiledClass.entry.key === 'ammonium-salt'
+          ? (enteredTarget ??= asEntered === parent ? parentTarget : new Target(asEntered))
+          : parentTarget;
       return belongs(compiledClass, target, neutralAcidPresent);
     })
     .map((compiledClass) => compiledClass.entry.key);

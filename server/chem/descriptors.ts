@@ -44,7 +44,9 @@ function countElements(mol: Molecule): { counts: Map<string, number>; charge: nu
 export function hillFormula(mol: Molecule): string {
   const { counts, charge } = countElements(mol);
   const symbols = [...counts.keys()].sort();
-  const ordered = counts.has('C') ? ['C', ...(counts.has('H') ? ['H'] : []), ...symbols.filter((s) => s !== 'C' && s !== 'H')] : symbols;
+  const ordered = counts.has('C')
+    ? ['C', ...(counts.has('H') ? ['H'] : []), ...symbols.filter((s) => s !== 'C' && s !== 'H')]
+    : symbols;
   const body = ordered.map((symbol) => `${symbol}${counts.get(symbol) === 1 ? '' : counts.get(symbol)}`).join('');
   if (charge === 0) return body;
   return `${body}${Math.abs(charge) === 1 ? '' : Math.abs(charge)}${charge > 0 ? '+' : '-'}`;

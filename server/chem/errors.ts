@@ -51,5 +51,8 @@ export const MAX_HEAVY_ATOMS = 250;
 /** OpenChemLib error text without its internal class prefix. */
 export function cleanMessage(error: unknown): string {
   const text = error instanceof Error ? error.message : String(error);
-  return text.replace(/^Class\$\S+:\s*/, '').replace(/^\w+Parser:\s*/, '').trim();
+  return text
+    .replace(/^Class\$\S+:\s*/, '')
+    .replace(/^\w+Parser:\s*/, '')
+    .trim();
 }

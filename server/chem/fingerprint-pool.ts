@@ -32,7 +32,10 @@ export class FingerprintPool {
   private queue: Chunk[] = [];
   private nextId = 0;
 
-  constructor(private readonly size = 2, private readonly chunkSize = 100) {}
+  constructor(
+    private readonly size = 2,
+    private readonly chunkSize = 100,
+  ) {}
 
   /** Fingerprints (and graphs) for the ID codes, in input order. */
   async run(idcodes: string[], graphs = false): Promise<SearchKeyBatch> {

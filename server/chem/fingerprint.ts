@@ -12,8 +12,11 @@ function pool(): FingerprintPool {
 }
 
 function unpack(batch: SearchKeyBatch, count: number): Int32Array[] {
-  if (batch.failed.length > 0) throw new Error(`Could not decode ID codes at positions ${batch.failed.slice(0, 10).join(', ')}.`);
-  return Array.from({ length: count }, (_, i) => batch.fingerprints.slice(i * FINGERPRINT_WORDS, (i + 1) * FINGERPRINT_WORDS));
+  if (batch.failed.length > 0)
+    throw new Error(`Could not decode ID codes at positions ${batch.failed.slice(0, 10).join(', ')}.`);
+  return Array.from({ length: count }, (_, i) =>
+    batch.fingerprints.slice(i * FINGERPRINT_WORDS, (i + 1) * FINGERPRINT_WORDS),
+  );
 }
 
 /**
@@ -41,7 +44,9 @@ export async function fingerprintIdcodes(idcodes: string[]): Promise<Int32Array[
 }
 
 /** Fingerprints and search graphs of many ID codes in the worker pool (to store or to warm an index). */
-export async function searchKeysForIdcodes(idcodes: string[]): Promise<{ fingerprints: Int32Array[]; graphs: Uint8Array[] }> {
+export async function searchKeysForIdcodes(
+  idcodes: string[],
+): Promise<{ fingerprints: Int32Array[]; graphs: Uint8Array[] }> {
   const batch = await pool().run(idcodes, true);
   return { fingerprints: unpack(batch, idcodes.length), graphs: batch.graphs ?? [] };
 }

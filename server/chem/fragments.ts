@@ -16,7 +16,27 @@ export interface FragmentSummary {
 }
 
 /** Crystallisation and work-up solvents that may be drawn with a compound (common practice). */
-const SOLVENTS = ['O', 'CO', 'CCO', 'CC(C)O', 'CC(C)=O', 'CC#N', 'ClCCl', 'ClC(Cl)Cl', 'CCOC(C)=O', 'CCOCC', 'C1CCOC1', 'C1COCCO1', 'CN(C)C=O', 'CS(C)=O', 'Cc1ccccc1', 'c1ccccc1', 'CCCCCC', 'CCCCCCC', 'COC(C)(C)C'];
+const SOLVENTS = [
+  'O',
+  'CO',
+  'CCO',
+  'CC(C)O',
+  'CC(C)=O',
+  'CC#N',
+  'ClCCl',
+  'ClC(Cl)Cl',
+  'CCOC(C)=O',
+  'CCOCC',
+  'C1CCOC1',
+  'C1COCCO1',
+  'CN(C)C=O',
+  'CS(C)=O',
+  'Cc1ccccc1',
+  'c1ccccc1',
+  'CCCCCC',
+  'CCCCCCC',
+  'COC(C)(C)C',
+];
 
 /**
  * Acids and bases that form salts with a compound, in neutral form (common practice): hydrogen
@@ -24,7 +44,28 @@ const SOLVENTS = ['O', 'CO', 'CCO', 'CC(C)O', 'CC(C)=O', 'CC#N', 'ClCCl', 'ClC(C
  * benzenesulfonic, triflic, camphorsulfonic, oxalic, fumaric/maleic, succinic, tartaric, citric acid.
  * Compared in neutral form without stereo (NOSTEREO ID codes of the neutralised fragment).
  */
-const COUNTER_IONS = ['F', 'Cl', 'Br', 'I', 'OS(=O)(=O)O', 'OP(=O)(O)O', 'O[N+](=O)[O-]', 'OC(=O)C(F)(F)F', 'CC(=O)O', 'OC=O', 'CS(=O)(=O)O', 'Cc1ccc(cc1)S(=O)(=O)O', 'OS(=O)(=O)c1ccccc1', 'OS(=O)(=O)C(F)(F)F', 'CC1(C)C2CCC1(CS(=O)(=O)O)C(=O)C2', 'OC(=O)C(=O)O', 'OC(=O)C=CC(=O)O', 'OC(=O)CCC(=O)O', 'OC(C(O)C(=O)O)C(=O)O', 'OC(=O)CC(O)(CC(=O)O)C(=O)O'];
+const COUNTER_IONS = [
+  'F',
+  'Cl',
+  'Br',
+  'I',
+  'OS(=O)(=O)O',
+  'OP(=O)(O)O',
+  'O[N+](=O)[O-]',
+  'OC(=O)C(F)(F)F',
+  'CC(=O)O',
+  'OC=O',
+  'CS(=O)(=O)O',
+  'Cc1ccc(cc1)S(=O)(=O)O',
+  'OS(=O)(=O)c1ccccc1',
+  'OS(=O)(=O)C(F)(F)F',
+  'CC1(C)C2CCC1(CS(=O)(=O)O)C(=O)C2',
+  'OC(=O)C(=O)O',
+  'OC(=O)C=CC(=O)O',
+  'OC(=O)CCC(=O)O',
+  'OC(C(O)C(=O)O)C(=O)O',
+  'OC(=O)CC(O)(CC(=O)O)C(=O)O',
+];
 
 function stereoFreeKey(mol: Molecule): string {
   return CanonizerUtil.getIDCode(neutralise(mol), CanonizerUtil.NOSTEREO);
@@ -77,7 +118,9 @@ export function splitParent(input: Molecule): { parent: Molecule; fragments: Fra
   const all = input.getFragments().map(describe);
   // A lone fragment is the parent whatever it is, so the (costly, ~2 ms) solvent and counter-ion check is skipped.
   const listed = new Map(all.map((fragment) => [fragment, all.length > 1 ? listedRole(fragment) : null]));
-  const pool = [all.filter((f) => listed.get(f) === null), all.filter((f) => f.hasCarbon), all].find((list) => list.length > 0) ?? all;
+  const pool =
+    [all.filter((f) => listed.get(f) === null), all.filter((f) => f.hasCarbon), all].find((list) => list.length > 0) ??
+    all;
   const parent = pool.reduce(larger);
   const summaries = new Map<string, FragmentSummary>();
   for (const fragment of all) {
@@ -86,10 +129,21 @@ export function splitParent(input: Molecule): { parent: Molecule; fragments: Fra
       existing.count++;
       continue;
     }
-    const role: FragmentRole = fragment.key === parent.key ? 'parent' : (listed.get(fragment) ?? (fragment.netCharge !== 0 ? 'counter-ion' : 'other'));
-    summaries.set(fragment.key, { role, smiles: fragment.mol.toIsomericSmiles(), count: 1, heavyAtoms: fragment.heavyAtoms, charge: fragment.netCharge });
+    const role: FragmentRole =
+      fragment.key === parent.key
+        ? 'parent'
+        : (listed.get(fragment) ?? (fragment.netCharge !== 0 ? 'counter-ion' : 'other'));
+    summaries.set(fragment.key, {
+      role,
+      smiles: fragment.mol.toIsomericSmiles(),
+      count: 1,
+      heavyAtoms: fragment.heavyAtoms,
+      charge: fragment.netCharge,
+    });
   }
   const order: FragmentRole[] = ['parent', 'other', 'counter-ion', 'solvent'];
-  const fragments = [...summaries.values()].sort((a, b) => order.indexOf(a.role) - order.indexOf(b.role) || b.heavyAtoms - a.heavyAtoms);
+  const fragments = [...summaries.values()].sort(
+    (a, b) => order.indexOf(a.role) - order.indexOf(b.role) || b.heavyAtoms - a.heavyAtoms,
+  );
   return { parent: parent.mol, fragments };
 }

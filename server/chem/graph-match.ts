@@ -20,7 +20,15 @@ const ISOTOPE_OR_RADICAL = 4;
 const UNCHARGED = 128;
 
 /** Bit set of target bond codes each query bond code accepts (codes as in fingerprint-worker.mjs). */
-const BOND_ALLOWED = Uint8Array.from([0, (1 << 1) | (1 << 5), (1 << 2) | (1 << 6), 1 << 3, 1 << 4, 1 << 5, (1 << 6) | (1 << 4)]);
+const BOND_ALLOWED = Uint8Array.from([
+  0,
+  (1 << 1) | (1 << 5),
+  (1 << 2) | (1 << 6),
+  1 << 3,
+  1 << 4,
+  1 << 5,
+  (1 << 6) | (1 << 4),
+]);
 
 /** A query compiled for matching: atoms in visiting order, each with the earlier atoms it bonds to. */
 export interface QueryGraph {
@@ -93,8 +101,15 @@ export function compileQuery(graph: Uint8Array): QueryGraph | null {
   backStart[n] = positions.length;
   const pick = (offset: number) => Uint8Array.from(order, (atom) => graph[1 + 6 * atom + offset]);
   return {
-    size: n, atomicNo: pick(0), charge: pick(1), aromatic: pick(2).map((flags) => flags & AROMATIC), degree: pick(3),
-    from: Int16Array.from(from), backStart, backPositions: Uint16Array.from(positions), backCodes: Uint8Array.from(codes),
+    size: n,
+    atomicNo: pick(0),
+    charge: pick(1),
+    aromatic: pick(2).map((flags) => flags & AROMATIC),
+    degree: pick(3),
+    from: Int16Array.from(from),
+    backStart,
+    backPositions: Uint16Array.from(positions),
+    backCodes: Uint8Array.from(codes),
   };
 }
 

@@ -7,10 +7,22 @@ export { analyseStructure, type StructureAnalysis } from './analyse';
 export { classify, type ClassifyInput } from './classes';
 export { computeDescriptors, hillFormula, type CompoundDescriptors } from './descriptors';
 export { idcodeToSvg, toSvg, type DepictOptions } from './depict';
-export { MAX_HEAVY_ATOMS, MAX_STRUCTURE_BYTES, StructureError, type StructureErrorCode, type StructureErrorDetails } from './errors';
 export {
-  closeFingerprintPool, FINGERPRINT_WORDS, fingerprintIdcodes, fingerprintIdcodeSync, fingerprintMolecule, FingerprintPool,
-  searchGraphMolecule, searchKeysForIdcodes,
+  MAX_HEAVY_ATOMS,
+  MAX_STRUCTURE_BYTES,
+  StructureError,
+  type StructureErrorCode,
+  type StructureErrorDetails,
+} from './errors';
+export {
+  closeFingerprintPool,
+  FINGERPRINT_WORDS,
+  fingerprintIdcodes,
+  fingerprintIdcodeSync,
+  fingerprintMolecule,
+  FingerprintPool,
+  searchGraphMolecule,
+  searchKeysForIdcodes,
 } from './fingerprint';
 export { identify, parentOf, type CompoundIdentity, type FragmentRole, type FragmentSummary } from './identity';
 export { parseSdf, parseStructure, type ParsedStructure, type SdfRecord, type StructureFormat } from './parse';

@@ -14,7 +14,11 @@ function invalid(message: string, line: number): StructureError {
 }
 
 function tooMany(atoms: number): StructureError {
-  return new StructureError(422, 'structure_too_many_atoms', `The molfile has ${atoms} atoms; the limit is ${MAX_HEAVY_ATOMS} heavy atoms.`);
+  return new StructureError(
+    422,
+    'structure_too_many_atoms',
+    `The molfile has ${atoms} atoms; the limit is ${MAX_HEAVY_ATOMS} heavy atoms.`,
+  );
 }
 
 /** True when the text looks like an MDL molfile or SDF record (a V2000/V3000 counts line). */
@@ -32,12 +36,16 @@ function checkV2000(lines: string[]): MolfileHeader {
   const counts = lines[3] ?? '';
   const atoms = Number.parseInt(counts.slice(0, 3), 10);
   const bonds = Number.parseInt(counts.slice(3, 6), 10);
-  if (!Number.isFinite(atoms) || !Number.isFinite(bonds)) throw invalid('Line 4 (counts line) does not start with the atom and bond counts.', 4);
+  if (!Number.isFinite(atoms) || !Number.isFinite(bonds))
+    throw invalid('Line 4 (counts line) does not start with the atom and bond counts.', 4);
   if (atoms === 0) throw new StructureError(422, 'structure_empty', 'The molfile has no atoms.', { line: 4 });
   if (atoms > MAX_HEAVY_ATOMS * 3) throw tooMany(atoms);
   for (let i = 0; i < atoms; i++) {
     if (!V2000_ATOM.test(lines[4 + i] ?? '')) {
-      throw invalid(`Line ${5 + i}: expected atom ${i + 1} of ${atoms} (x y z element), found "${(lines[4 + i] ?? '').trim().slice(0, 40)}".`, 5 + i);
+      throw invalid(
+        `Line ${5 + i}: expected atom ${i + 1} of ${atoms} (x y z element), found "${(lines[4 + i] ?? '').trim().slice(0, 40)}".`,
+        5 + i,
+      );
     }
   }
   for (let i = 0; i < bonds; i++) {
@@ -45,7 +53,10 @@ function checkV2000(lines: string[]): MolfileHeader {
     const a = Number.parseInt(line.slice(0, 3), 10);
     const b = Number.parseInt(line.slice(3, 6), 10);
     if (!(a >= 1 && a <= atoms && b >= 1 && b <= atoms)) {
-      throw invalid(`Line ${5 + atoms + i}: expected bond ${i + 1} of ${bonds} between atoms 1–${atoms}, found "${line.trim().slice(0, 40)}".`, 5 + atoms + i);
+      throw invalid(
+        `Line ${5 + atoms + i}: expected bond ${i + 1} of ${bonds} between atoms 1–${atoms}, found "${line.trim().slice(0, 40)}".`,
+        5 + atoms + i,
+      );
     }
   }
   checkEnd(lines, 4 + atoms + bonds);
@@ -64,16 +75,24 @@ function checkV3000(lines: string[]): MolfileHeader {
   const countsIndex = lines.findIndex((line) => line.startsWith('M  V30 COUNTS'));
   if (countsIndex < 0) throw invalid('No "M  V30 COUNTS" line.', 4);
   const [atoms, bonds] = lines[countsIndex].slice(13).trim().split(/\s+/).map(Number);
-  if (!Number.isFinite(atoms) || !Number.isFinite(bonds)) throw invalid(`Line ${countsIndex + 1}: COUNTS needs atom and bond numbers.`, countsIndex + 1);
-  if (atoms === 0) throw new StructureError(422, 'structure_empty', 'The molfile has no atoms.', { line: countsIndex + 1 });
+  if (!Number.isFinite(atoms) || !Number.isFinite(bonds))
+    throw invalid(`Line ${countsIndex + 1}: COUNTS needs atom and bond numbers.`, countsIndex + 1);
+  if (atoms === 0)
+    throw new StructureError(422, 'structure_empty', 'The molfile has no atoms.', { line: countsIndex + 1 });
   if (atoms > MAX_HEAVY_ATOMS * 3) throw tooMany(atoms);
   const atomBlock = blockLength(lines, 'ATOM');
   if (!atomBlock || atomBlock.length !== atoms) {
-    throw invalid(`The ATOM block has ${atomBlock?.length ?? 0} lines but COUNTS announces ${atoms} atoms.`, (atomBlock?.start ?? countsIndex) + 1);
+    throw invalid(
+      `The ATOM block has ${atomBlock?.length ?? 0} lines but COUNTS announces ${atoms} atoms.`,
+      (atomBlock?.start ?? countsIndex) + 1,
+    );
   }
   const bondBlock = blockLength(lines, 'BOND');
   if ((bondBlock?.length ?? 0) !== bonds) {
-    throw invalid(`The BOND block has ${bondBlock?.length ?? 0} lines but COUNTS announces ${bonds} bonds.`, (bondBlock?.start ?? countsIndex) + 1);
+    throw invalid(
+      `The BOND block has ${bondBlock?.length ?? 0} lines but COUNTS announces ${bonds} bonds.`,
+      (bondBlock?.start ?? countsIndex) + 1,
+    );
   }
   const atomIndices = checkV3000Atoms(lines, atomBlock.start, atoms);
   if (bondBlock) checkV3000Bonds(lines, bondBlock.start, bonds, atomIndices);
@@ -87,8 +106,16 @@ function checkV3000Atoms(lines: string[], start: number, atoms: number): Set<num
   for (let i = 1; i <= atoms; i++) {
     const fields = lines[start + i].slice(7).trim().split(/\s+/);
     const [index, x, y, z] = [Number(fields[0]), Number(fields[2]), Number(fields[3]), Number(fields[4])];
-    if (!(Number.isInteger(index) && index >= 1) || !fields[1] || ![x, y, z].every(Number.isFinite) || indices.has(index)) {
-      throw invalid(`Line ${start + i + 1}: expected atom ${i} of ${atoms} (index element x y z), found "${lines[start + i].trim().slice(0, 40)}".`, start + i + 1);
+    if (
+      !(Number.isInteger(index) && index >= 1) ||
+      !fields[1] ||
+      ![x, y, z].every(Number.isFinite) ||
+      indices.has(index)
+    ) {
+      throw invalid(
+        `Line ${start + i + 1}: expected atom ${i} of ${atoms} (index element x y z), found "${lines[start + i].trim().slice(0, 40)}".`,
+        start + i + 1,
+      );
     }
     indices.add(index);
   }
@@ -100,7 +127,11 @@ function checkV3000Bonds(lines: string[], start: number, bonds: number, atomIndi
   for (let i = 1; i <= bonds; i++) {
     const [, type, a, b] = lines[start + i].slice(7).trim().split(/\s+/).map(Number);
     if (!Number.isInteger(type) || !atomIndices.has(a) || !atomIndices.has(b)) {
-      throw invalid(`Line ${start + i + 1}: expected bond ${i} of ${bonds} between atoms of the ATOM block, found "${lines[start + i].trim().slice(0, 40)}".`, start + i + 1);
+      throw invalid(
+        `Line ${start + i + 1}: expected bond ${i} of ${bonds} between atoms of the ATOM block, found ` +
+          `"${lines[start + i].trim().slice(0, 40)}".`,
+        start + i + 1,
+      );
     }
   }
 }
@@ -124,7 +155,8 @@ function joinV3000Continuations(lines: string[]): string[] {
  */
 export function checkMolfile(text: string): MolfileHeader {
   const lines = text.split(/\r?\n/);
-  if (/V3000\s*$/.test(lines[3] ?? '') || lines.some((line) => line.startsWith('M  V30 '))) return checkV3000(joinV3000Continuations(lines));
+  if (/V3000\s*$/.test(lines[3] ?? '') || lines.some((line) => line.startsWith('M  V30 ')))
+    return checkV3000(joinV3000Continuations(lines));
   if (/V2000\s*$/.test(lines[3] ?? '')) return checkV2000(lines);
   throw invalid('Line 4 must be the counts line ending in V2000 or V3000 (are the three header lines missing?).', 4);
 }

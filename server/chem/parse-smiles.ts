@@ -10,7 +10,10 @@ function smilesLocator(tokens: SmilesAtomToken[]): AtomLocator {
     describe: (i) => {
       const token = heavy[i];
       return token
-        ? { where: `Atom ${i + 1} at position ${token.position}`, details: { atom: i + 1, position: token.position, token: token.symbol } }
+        ? {
+            where: `Atom ${i + 1} at position ${token.position}`,
+            details: { atom: i + 1, position: token.position, token: token.symbol },
+          }
         : { where: `Atom ${i + 1}`, details: { atom: i + 1 } };
     },
     writtenAromatic: (i) => heavy[i]?.aromatic ?? false,
@@ -19,11 +22,19 @@ function smilesLocator(tokens: SmilesAtomToken[]): AtomLocator {
 
 /** Parses one SMILES string with OpenChemLib after the syntax scan; throws StructureError. */
 function readSmiles(smiles: string): { molecule: Molecule; tokens: SmilesAtomToken[] } {
-  if (/^InChI=/i.test(smiles)) throw new StructureError(400, 'smiles_syntax', 'InChI is not accepted; paste SMILES or a molfile.', { position: 1 });
+  if (/^InChI=/i.test(smiles))
+    throw new StructureError(400, 'smiles_syntax', 'InChI is not accepted; paste SMILES or a molfile.', {
+      position: 1,
+    });
   const tokens = scanSmiles(smiles);
   const wildcard = tokens.find((token) => token.symbol === '*');
   if (wildcard) {
-    throw new StructureError(422, 'pseudo_atom', `Wildcard atom "*" at position ${wildcard.position}; a compound needs real elements.`, { position: wildcard.position, token: '*' });
+    throw new StructureError(
+      422,
+      'pseudo_atom',
+      `Wildcard atom "*" at position ${wildcard.position}; a compound needs real elements.`,
+      { position: wildcard.position, token: '*' },
+    );
   }
   try {
     return { molecule: Molecule.fromSmiles(smiles), tokens };
@@ -32,7 +43,12 @@ function readSmiles(smiles: string): { molecule: Molecule; tokens: SmilesAtomTok
     const at = /position:?\s*(\d+)/i.exec(message);
     const position = at ? Number(at[1]) + 1 : undefined;
     const reason = message.replace(/[.;]?\s*position:?\s*\d+\s*$/i, '');
-    throw new StructureError(400, 'smiles_syntax', `SMILES not understood: ${reason}${position ? ` (at position ${position})` : ''}.`, { position });
+    throw new StructureError(
+      400,
+      'smiles_syntax',
+      `SMILES not understood: ${reason}${position ? ` (at position ${position})` : ''}.`,
+      { position },
+    );
   }
 }
 
@@ -53,7 +69,12 @@ function isStructure(text: string): boolean {
 export function parseSmilesLine(text: string): ParsedStructure {
   const lines = text.split('\n').filter((line) => line.trim() !== '');
   if (lines.length > 1) {
-    throw new StructureError(422, 'structure_several', `The text has ${lines.length} lines of SMILES; one structure was expected.`, { line: 2 });
+    throw new StructureError(
+      422,
+      'structure_several',
+      `The text has ${lines.length} lines of SMILES; one structure was expected.`,
+      { line: 2 },
+    );
   }
   const line = lines[0].trim();
   const space = line.search(/\s/);
@@ -63,7 +84,13 @@ export function parseSmilesLine(text: string): ParsedStructure {
   if (rest) {
     const firstWord = rest.split(/\s+/)[0];
     if (isStructure(firstWord)) {
-      throw new StructureError(400, 'smiles_syntax', `Text after the space at position ${space + 1} ("${firstWord}") is itself a structure; join fragments with "." or remove the space.`, { position: space + 1 });
+      throw new StructureError(
+        400,
+        'smiles_syntax',
+        `Text after the space at position ${space + 1} ("${firstWord}") is itself a structure; join ` +
+          `fragments with "." or remove the space.`,
+        { position: space + 1 },
+      );
     }
   }
   checkMolecule(molecule, smilesLocator(tokens));

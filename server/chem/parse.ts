@@ -11,7 +11,11 @@ export type { ParsedStructure, SdfRecord, StructureFormat } from './structure-ty
 function checkSize(text: string): void {
   const bytes = Buffer.byteLength(text, 'utf8');
   if (bytes > MAX_STRUCTURE_BYTES) {
-    throw new StructureError(413, 'structure_too_large', `The structure text is ${bytes} bytes; the limit is ${MAX_STRUCTURE_BYTES} bytes.`);
+    throw new StructureError(
+      413,
+      'structure_too_large',
+      `The structure text is ${bytes} bytes; the limit is ${MAX_STRUCTURE_BYTES} bytes.`,
+    );
   }
 }
 
@@ -24,7 +28,10 @@ function molfileLocator(molfile: string): AtomLocator {
     for (let i = 0; i < atoms; i++) if ((lines[4 + i] ?? '').slice(31, 34).trim() !== 'H') heavyLines.push(5 + i);
   }
   return {
-    describe: (i) => (heavyLines[i] ? { where: `Atom on line ${heavyLines[i]}`, details: { line: heavyLines[i], atom: i + 1 } } : { where: `Heavy atom ${i + 1}`, details: { atom: i + 1 } }),
+    describe: (i) =>
+      heavyLines[i]
+        ? { where: `Atom on line ${heavyLines[i]}`, details: { line: heavyLines[i], atom: i + 1 } }
+        : { where: `Heavy atom ${i + 1}`, details: { atom: i + 1 } },
   };
 }
 
@@ -52,14 +59,21 @@ function parseMolfileText(molfile: string, fields: Record<string, string>, forma
 export function parseStructure(text: string): ParsedStructure {
   checkSize(text);
   const normalised = text.replace(/^\uFEFF/, '').replace(/\r\n?/g, '\n');
-  if (normalised.trim() === '') throw new StructureError(400, 'structure_empty', 'No structure given: the text is empty.');
+  if (normalised.trim() === '')
+    throw new StructureError(400, 'structure_empty', 'No structure given: the text is empty.');
   if (!looksLikeMolfile(normalised)) return parseSmilesLine(normalised);
   const records = splitSdf(restoreHeader(normalised));
   if (records.length > 1) {
-    throw new StructureError(422, 'sdf_several_records', `The text holds ${records.length} SDF records; one structure was expected (import several through an SDF file).`, { record: 2, line: records[1].line });
+    throw new StructureError(
+      422,
+      'sdf_several_records',
+      `The text holds ${records.length} SDF records; one structure was expected (import several through an SDF file).`,
+      { record: 2, line: records[1].line },
+    );
   }
   const [record] = records;
-  const format: StructureFormat = normalised.includes('$$$$') || Object.keys(record.fields).length > 0 ? 'sdf' : 'molfile';
+  const format: StructureFormat =
+    normalised.includes('$$$$') || Object.keys(record.fields).length > 0 ? 'sdf' : 'molfile';
   return parseMolfileText(record.molfile, record.fields, format);
 }
 

@@ -13,24 +13,73 @@ import { Molecule } from 'openchemlib';
  * (2,6-lutidine) is shielded from the silanols.
  */
 export const polarGroupKeys = [
-  'ketone', 'aldehyde', 'ester', 'carboxylic-acid', 'amide-carbonyl', 'aryl-ether', 'alkyl-ether', 'aromatic-o',
-  'phenol-oh', 'alcohol-oh', 'oxime-oh', 'nitro', 'nitrile', 'pyridine-n', 'pyridine-n-shielded', 'aromatic-n-substituted',
-  'pyrrole-nh', 'aniline-nh2', 'aniline-nh', 'aniline-n', 'amine-nh2', 'amine-nh', 'amine-n', 'amide-nh2', 'amide-nh',
-  'amide-n', 'imine', 'sulfonyl', 'sulfinyl', 'sulfonamide-nh', 'sulfide', 'thiophene-s', 'thiol', 'other-polar',
-  'fluorine', 'chlorine', 'bromine', 'iodine', 'alkene-carbon', 'aromatic-carbon', 'aliphatic-carbon',
-  'intramolecular-h-bond', 'polar-total', 'no-polar-group',
+  'ketone',
+  'aldehyde',
+  'ester',
+  'carboxylic-acid',
+  'amide-carbonyl',
+  'aryl-ether',
+  'alkyl-ether',
+  'aromatic-o',
+  'phenol-oh',
+  'alcohol-oh',
+  'oxime-oh',
+  'nitro',
+  'nitrile',
+  'pyridine-n',
+  'pyridine-n-shielded',
+  'aromatic-n-substituted',
+  'pyrrole-nh',
+  'aniline-nh2',
+  'aniline-nh',
+  'aniline-n',
+  'amine-nh2',
+  'amine-nh',
+  'amine-n',
+  'amide-nh2',
+  'amide-nh',
+  'amide-n',
+  'imine',
+  'sulfonyl',
+  'sulfinyl',
+  'sulfonamide-nh',
+  'sulfide',
+  'thiophene-s',
+  'thiol',
+  'other-polar',
+  'fluorine',
+  'chlorine',
+  'bromine',
+  'iodine',
+  'alkene-carbon',
+  'aromatic-carbon',
+  'aliphatic-carbon',
+  'intramolecular-h-bond',
+  'polar-total',
+  'no-polar-group',
 ] as const;
 
 export type PolarGroupKey = (typeof polarGroupKeys)[number];
 
-const notPolar = new Set<PolarGroupKey>(['fluorine', 'chlorine', 'bromine', 'iodine', 'alkene-carbon', 'aromatic-carbon', 'aliphatic-carbon', 'intramolecular-h-bond']);
+const notPolar = new Set<PolarGroupKey>([
+  'fluorine',
+  'chlorine',
+  'bromine',
+  'iodine',
+  'alkene-carbon',
+  'aromatic-carbon',
+  'aliphatic-carbon',
+  'intramolecular-h-bond',
+]);
 
-const neighboursOf = (mol: Molecule, atom: number) => Array.from({ length: mol.getConnAtoms(atom) }, (_, i) => mol.getConnAtom(atom, i));
+const neighboursOf = (mol: Molecule, atom: number) =>
+  Array.from({ length: mol.getConnAtoms(atom) }, (_, i) => mol.getConnAtom(atom, i));
 
 /** The atom carries an exocyclic or ring C=O / C=S double bond to oxygen (a carbonyl carbon). */
 function isCarbonylCarbon(mol: Molecule, atom: number): boolean {
   if (mol.getAtomicNo(atom) !== 6) return false;
-  for (let i = 0; i < mol.getConnAtoms(atom); i++) if (mol.getConnBondOrder(atom, i) === 2 && mol.getAtomicNo(mol.getConnAtom(atom, i)) === 8) return true;
+  for (let i = 0; i < mol.getConnAtoms(atom); i++)
+    if (mol.getConnBondOrder(atom, i) === 2 && mol.getAtomicNo(mol.getConnAtom(atom, i)) === 8) return true;
   return false;
 }
 
@@ -71,9 +120,15 @@ function nitrogenGroup(mol: Molecule, atom: number): PolarGroupKey {
   if (isNitroNitrogen(mol, atom)) return 'nitro';
   const hydrogens = mol.getAllHydrogens(atom);
   const neighbours = neighboursOf(mol, atom);
-  const byHydrogens = (two: PolarGroupKey, one: PolarGroupKey, none: PolarGroupKey) => (hydrogens >= 2 ? two : hydrogens === 1 ? one : none);
+  const byHydrogens = (two: PolarGroupKey, one: PolarGroupKey, none: PolarGroupKey) =>
+    hydrogens >= 2 ? two : hydrogens === 1 ? one : none;
   if (neighbours.some((other) => isCarbonylCarbon(mol, other))) return byHydrogens('amide-nh2', 'amide-nh', 'amide-n');
-  if (neighbours.some((other) => mol.getAtomicNo(other) === 16 && neighboursOf(mol, other).filter((o) => mol.getAtomicNo(o) === 8).length >= 2)) {
+  if (
+    neighbours.some(
+      (other) =>
+        mol.getAtomicNo(other) === 16 && neighboursOf(mol, other).filter((o) => mol.getAtomicNo(o) === 8).length >= 2,
+    )
+  ) {
     return hydrogens > 0 ? 'sulfonamide-nh' : 'amide-n';
   }
   if (mol.isAromaticAtom(atom)) {
@@ -82,7 +137,8 @@ function nitrogenGroup(mol: Molecule, atom: number): PolarGroupKey {
   }
   if (mol.getAtomPi(atom) === 2) return 'nitrile';
   if (mol.getAtomPi(atom) === 1) return 'imine';
-  if (neighbours.some((other) => mol.isAromaticAtom(other))) return byHydrogens('aniline-nh2', 'aniline-nh', 'aniline-n');
+  if (neighbours.some((other) => mol.isAromaticAtom(other)))
+    return byHydrogens('aniline-nh2', 'aniline-nh', 'aniline-n');
   return byHydrogens('amine-nh2', 'amine-nh', 'amine-n');
 }
 
@@ -136,10 +192,12 @@ export function polarGroupCounts(input: Molecule): number[] {
       if (mol.isAromaticAtom(atom)) add('aromatic-carbon');
       else {
         add('aliphatic-carbon');
-        if (mol.getAtomPi(atom) > 0 && neighboursOf(mol, atom).every((other) => mol.getAtomicNo(other) === 6)) add('alkene-carbon');
+        if (mol.getAtomPi(atom) > 0 && neighboursOf(mol, atom).every((other) => mol.getAtomicNo(other) === 6))
+          add('alkene-carbon');
       }
     } else if (element !== 1) add('other-polar');
-    if ((element === 8 || element === 7) && mol.getAllHydrogens(atom) > 0 && closesHydrogenBondRing(mol, atom)) add('intramolecular-h-bond');
+    if ((element === 8 || element === 7) && mol.getAllHydrogens(atom) > 0 && closesHydrogenBondRing(mol, atom))
+      add('intramolecular-h-bond');
   }
   const polar = [...counts].filter(([key]) => !notPolar.has(key)).reduce((sum, [, count]) => sum + count, 0);
   counts.set('polar-total', polar);

@@ -16,7 +16,13 @@ function readFields(lines: string[]): Record<string, string> {
   let value: string[] = [];
   const flush = () => {
     // defineProperty, so a data item called "__proto__" is kept like any other.
-    if (name !== null) Object.defineProperty(fields, name, { value: value.join('\n').trim(), enumerable: true, writable: true, configurable: true });
+    if (name !== null)
+      Object.defineProperty(fields, name, {
+        value: value.join('\n').trim(),
+        enumerable: true,
+        writable: true,
+        configurable: true,
+      });
     name = null;
     value = [];
   };
@@ -49,7 +55,12 @@ export function splitSdf(text: string): SdfRecordText[] {
     const endIndex = chunk.findIndex((line) => line.startsWith('M  END'));
     const molfileLines = endIndex >= 0 ? chunk.slice(0, endIndex + 1) : chunk;
     const fieldLines = endIndex >= 0 ? chunk.slice(endIndex + 1) : [];
-    records.push({ index: records.length + 1, line: start + 1, molfile: `${molfileLines.join('\n')}\n`, fields: readFields(fieldLines) });
+    records.push({
+      index: records.length + 1,
+      line: start + 1,
+      molfile: `${molfileLines.join('\n')}\n`,
+      fields: readFields(fieldLines),
+    });
   };
   lines.forEach((line, i) => {
     if (line.startsWith('$$$$')) {
@@ -60,4 +71,3 @@ export function splitSdf(text: string): SdfRecordText[] {
   push(lines.length);
   return records;
 }
-

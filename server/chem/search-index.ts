@@ -46,7 +46,10 @@ export class StructureSearchIndex {
   upsert(entry: SearchEntry): void {
     this.fingerprints.upsert(entry.id, entry.fingerprint);
     this.substructures.upsert(entry.id, entry.idcode, entry.graph);
-    this.entries.set(entry.id, { idcode: entry.idcode, graph: entry.graph && entry.graph[0] > 0 ? entry.graph : undefined });
+    this.entries.set(entry.id, {
+      idcode: entry.idcode,
+      graph: entry.graph && entry.graph[0] > 0 ? entry.graph : undefined,
+    });
   }
 
   /** Adds many compounds (the rebuild at start). */
@@ -74,7 +77,10 @@ export class StructureSearchIndex {
    * graph are known — always for a Molecule. Pass the stored fingerprint as `fingerprint` to skip computing it (~9 ms).
    */
   similar(query: Molecule | SimilarityQuery, options: { limit?: number; threshold?: number } = {}): SimilarityHit[] {
-    const read: SimilarityQuery = 'fingerprint' in query ? query : { fingerprint: fingerprintOf(query), idcode: query.getIDCode(), graph: searchGraphOf(query) };
+    const read: SimilarityQuery =
+      'fingerprint' in query
+        ? query
+        : { fingerprint: fingerprintOf(query), idcode: query.getIDCode(), graph: searchGraphOf(query) };
     const threshold = options.threshold ?? 0;
     const hits = this.fingerprints.topK(read.fingerprint, options.limit ?? 50, threshold);
     if (!read.graph || read.idcode === undefined) return hits;

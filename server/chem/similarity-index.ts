@@ -15,7 +15,8 @@ export function popcount32(x: number): number {
 }
 
 function toWords(fingerprint: ArrayLike<number>): Int32Array {
-  if (fingerprint.length !== WORDS) throw new RangeError(`A fingerprint has ${WORDS} words, got ${fingerprint.length}.`);
+  if (fingerprint.length !== WORDS)
+    throw new RangeError(`A fingerprint has ${WORDS} words, got ${fingerprint.length}.`);
   return Int32Array.from(fingerprint, (word) => word | 0);
 }
 

@@ -42,7 +42,8 @@ export function scanSmiles(smiles: string): SmilesAtomToken[] {
     const position = i + 1;
     if (ch === '[') {
       const end = smiles.indexOf(']', i);
-      if (end < 0) throw syntaxError(`Bracket atom opened at position ${position} is never closed with "]".`, position, '[');
+      if (end < 0)
+        throw syntaxError(`Bracket atom opened at position ${position} is never closed with "]".`, position, '[');
       const { symbol, aromatic } = bracketAtom(smiles.slice(i + 1, end));
       const hydrogen = symbol === 'H';
       atoms.push({ position, symbol, aromatic, hydrogen });
@@ -53,12 +54,14 @@ export function scanSmiles(smiles: string): SmilesAtomToken[] {
       branchStack.push(position);
       i++;
     } else if (ch === ')') {
-      if (branchStack.length === 0) throw syntaxError(`Closing ")" at position ${position} has no opening "(".`, position, ')');
+      if (branchStack.length === 0)
+        throw syntaxError(`Closing ")" at position ${position} has no opening "(".`, position, ')');
       branchStack.pop();
       i++;
     } else if (/[0-9%]/.test(ch)) {
       const label = ch === '%' ? smiles.slice(i, i + 3) : ch;
-      if (ch === '%' && !/^%\d\d$/.test(label)) throw syntaxError(`Ring bond "%" at position ${position} needs two digits.`, position, '%');
+      if (ch === '%' && !/^%\d\d$/.test(label))
+        throw syntaxError(`Ring bond "%" at position ${position} needs two digits.`, position, '%');
       if (openRings.has(label)) openRings.delete(label);
       else openRings.set(label, position);
       i += label.length;
@@ -73,15 +76,30 @@ export function scanSmiles(smiles: string): SmilesAtomToken[] {
       i += symbol.length;
     }
     if (heavy > MAX_HEAVY_ATOMS) {
-      throw new StructureError(422, 'structure_too_many_atoms', `More than ${MAX_HEAVY_ATOMS} heavy atoms; the limit is ${MAX_HEAVY_ATOMS}.`, { position });
+      throw new StructureError(
+        422,
+        'structure_too_many_atoms',
+        `More than ${MAX_HEAVY_ATOMS} heavy atoms; the limit is ${MAX_HEAVY_ATOMS}.`,
+        { position },
+      );
     }
   }
   if (branchStack.length > 0) {
     const position = branchStack[branchStack.length - 1];
-    throw new StructureError(400, 'smiles_unclosed_branch', `Branch "(" opened at position ${position} is never closed with ")".`, { position, token: '(' });
+    throw new StructureError(
+      400,
+      'smiles_unclosed_branch',
+      `Branch "(" opened at position ${position} is never closed with ")".`,
+      { position, token: '(' },
+    );
   }
   for (const [label, position] of openRings) {
-    throw new StructureError(400, 'smiles_unclosed_ring', `Ring bond ${label} opened at position ${position} is never closed.`, { position, token: label });
+    throw new StructureError(
+      400,
+      'smiles_unclosed_ring',
+      `Ring bond ${label} opened at position ${position} is never closed.`,
+      { position, token: label },
+    );
   }
   return atoms;
 }

@@ -24,7 +24,8 @@ export interface SubstructureResult {
 function hasQueryFeatures(fragment: Molecule): boolean {
   if (fragment.getAllAtoms() !== fragment.getAtoms()) return true;
   for (let a = 0; a < fragment.getAllAtoms(); a++) {
-    if (fragment.getAtomList(a) !== null || Object.values(fragment.getAtomQueryFeaturesObject(a)).some(Boolean)) return true;
+    if (fragment.getAtomList(a) !== null || Object.values(fragment.getAtomQueryFeaturesObject(a)).some(Boolean))
+      return true;
   }
   for (let b = 0; b < fragment.getAllBonds(); b++) if (fragment.getBondQueryFeatures(b) !== 0) return true;
   return false;
@@ -56,7 +57,10 @@ export class SubstructureIndex {
   private cache = new Map<number, Molecule>();
   private searcher = new SSSearcher();
 
-  constructor(private readonly fingerprints: FingerprintIndex, private readonly cacheSize = 5000) {}
+  constructor(
+    private readonly fingerprints: FingerprintIndex,
+    private readonly cacheSize = 5000,
+  ) {}
 
   /** Registers an entry (its fingerprint lives in the FingerprintIndex). Without graph, SSSearcher decides. */
   upsert(id: number, idcode: string, graph?: Uint8Array): void {

@@ -10,8 +10,22 @@ import { Molecule } from 'openchemlib';
  * Chem. 56 (1984) 769 — from memory). Elements not listed (metals, noble gases) are left to OpenChemLib.
  */
 const NORMAL_VALENCES: Record<string, readonly number[]> = {
-  H: [1], B: [3], C: [4], N: [3, 5], O: [2], F: [1], Si: [4], P: [3, 5], S: [2, 4, 6], Cl: [1, 3, 5, 7],
-  Ge: [4], As: [3, 5], Se: [2, 4, 6], Br: [1, 3, 5, 7], Te: [2, 4, 6], I: [1, 3, 5, 7],
+  H: [1],
+  B: [3],
+  C: [4],
+  N: [3, 5],
+  O: [2],
+  F: [1],
+  Si: [4],
+  P: [3, 5],
+  S: [2, 4, 6],
+  Cl: [1, 3, 5, 7],
+  Ge: [4],
+  As: [3, 5],
+  Se: [2, 4, 6],
+  Br: [1, 3, 5, 7],
+  Te: [2, 4, 6],
+  I: [1, 3, 5, 7],
 };
 
 const HALOGENS = new Set(['Cl', 'Br', 'I']);
@@ -19,7 +33,11 @@ const HALOGENS = new Set(['Cl', 'Br', 'I']);
 const HALOGEN_PARTNERS = new Set(['O', 'N', 'F', 'Cl', 'Br', 'I']);
 
 const words = ['no', 'one', 'two', 'three', 'four', 'five', 'six', 'seven'];
-const list = (values: readonly number[]) => values.map((v) => words[v] ?? String(v)).join(', ').replace(/, (\w+)$/, ' or $1');
+const list = (values: readonly number[]) =>
+  values
+    .map((v) => words[v] ?? String(v))
+    .join(', ')
+    .replace(/, (\w+)$/, ' or $1');
 
 /**
  * Why uncharged atom `a` has a valence its element cannot have, or null. Call after
@@ -39,12 +57,15 @@ export function valenceProblem(mol: Molecule, a: number): string | null {
     const other = mol.getAtomLabel(mol.getConnAtom(a, i));
     if (other === 'C') {
       carbons++;
-      if (mol.getConnBondOrder(a, i) > 1) return `is double-bonded to carbon; a halogen binds carbon by one single bond`;
+      if (mol.getConnBondOrder(a, i) > 1)
+        return `is double-bonded to carbon; a halogen binds carbon by one single bond`;
     } else if (!HALOGEN_PARTNERS.has(other)) {
       return `has ${valence} bonds, one of them to ${other}; beyond its first bond, ${label} binds only O, N or halogens`;
     }
   }
-  if (mol.getImplicitHydrogens(a) > 0) return `has ${valence} bonds with hydrogen on it; uncharged ${label} with more than one bond carries no H`;
-  if (carbons > 1) return `is bonded to ${carbons} carbons; uncharged ${label} binds at most one (write halonium ions with their charge, e.g. [I+])`;
+  if (mol.getImplicitHydrogens(a) > 0)
+    return `has ${valence} bonds with hydrogen on it; uncharged ${label} with more than one bond carries no H`;
+  if (carbons > 1)
+    return `is bonded to ${carbons} carbons; uncharged ${label} binds at most one (write halonium ions with their charge, e.g. [I+])`;
   return null;
 }

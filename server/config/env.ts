@@ -43,13 +43,25 @@ const envSchema = z
       ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'required in production (≥ 32 characters)' });
     }
     if (env.NODE_ENV === 'production' && env.RFOLIO_SEED_DEMO === '1') {
-      ctx.addIssue({ code: 'custom', path: ['RFOLIO_SEED_DEMO'], message: 'refused in production: the demo accounts have a published password' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['RFOLIO_SEED_DEMO'],
+        message: 'refused in production: the demo accounts have a published password',
+      });
     }
     if ((env.RFOLIO_WORKERS ?? 1) > 1 && env.NODE_ENV !== 'production') {
-      ctx.addIssue({ code: 'custom', path: ['RFOLIO_WORKERS'], message: 'above 1 only in production: elsewhere the local mail catcher keeps its messages in one process' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['RFOLIO_WORKERS'],
+        message: 'above 1 only in production: elsewhere the local mail catcher keeps its messages in one process',
+      });
     }
     if ((env.RFOLIO_WORKERS ?? 1) > 1 && env.SIGNIN_THROTTLE_STORE === 'memory') {
-      ctx.addIssue({ code: 'custom', path: ['SIGNIN_THROTTLE_STORE'], message: 'memory counts per process; use postgres with RFOLIO_WORKERS above 1' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['SIGNIN_THROTTLE_STORE'],
+        message: 'memory counts per process; use postgres with RFOLIO_WORKERS above 1',
+      });
     }
   });
 
@@ -89,7 +101,10 @@ export function trustProxySetting(value: string | undefined): boolean | number |
   const text = value?.trim() ?? '';
   if (text === '' || text === '0' || text.toLowerCase() === 'false') return false;
   if (/^\d+$/.test(text)) return Number(text);
-  return text.split(',').map((part) => part.trim()).filter(Boolean);
+  return text
+    .split(',')
+    .map((part) => part.trim())
+    .filter(Boolean);
 }
 
 let cached: Env | undefined;

@@ -17,7 +17,13 @@ export interface StructureAnalysis extends CompoundDescriptors {
 /** A title line worth keeping as a name: letters, no program stamp, not too long. */
 function plausibleName(text: string | undefined): string | null {
   const name = text?.trim();
-  if (!name || name.length > 120 || !/\p{L}{2}/u.test(name) || /^-?\s*(OEChem|RDKit|ChemDraw|Mrv|JME|CDK|OpenBabel|Actelion)/i.test(name)) return null;
+  if (
+    !name ||
+    name.length > 120 ||
+    !/\p{L}{2}/u.test(name) ||
+    /^-?\s*(OEChem|RDKit|ChemDraw|Mrv|JME|CDK|OpenBabel|Actelion)/i.test(name)
+  )
+    return null;
   return name;
 }
 

@@ -17,7 +17,11 @@ function announce(id: number, transaction?: Transaction) {
 }
 
 /** Keeps a name on a compound: the first name becomes its name, later different ones its synonyms. */
-async function attachName(compound: Compound, name: string | null | undefined, transaction?: Transaction): Promise<void> {
+async function attachName(
+  compound: Compound,
+  name: string | null | undefined,
+  transaction?: Transaction,
+): Promise<void> {
   const clean = name?.trim();
   if (!clean) return;
   const known = [compound.name, ...compound.synonyms].filter(Boolean).map((value) => (value as string).toLowerCase());
@@ -27,12 +31,34 @@ async function attachName(compound: Compound, name: string | null | undefined, t
   announce(compound.id, transaction);
 }
 
-function rowOf(text: string, analysis: StructureAnalysis, name: string | null, userId: number | null, fingerprint: Buffer | null) {
+function rowOf(
+  text: string,
+  analysis: StructureAnalysis,
+  name: string | null,
+  userId: number | null,
+  fingerprint: Buffer | null,
+) {
   return {
-    idcode: analysis.idcode, name, synonyms: [], inputStructure: text, canonicalSmiles: analysis.canonicalSmiles, molfile: analysis.molfile,
-    formula: analysis.formula, mw: analysis.mw, exactMass: analysis.exactMass, clogp: analysis.clogp, tpsa: analysis.tpsa, hbd: analysis.hbd,
-    hba: analysis.hba, rotatableBonds: analysis.rotatableBonds, aromaticRings: analysis.aromaticRings, stereocentres: analysis.stereocentres,
-    charge: analysis.charge, classes: analysis.classes, fingerprint, createdBy: userId,
+    idcode: analysis.idcode,
+    name,
+    synonyms: [],
+    inputStructure: text,
+    canonicalSmiles: analysis.canonicalSmiles,
+    molfile: analysis.molfile,
+    formula: analysis.formula,
+    mw: analysis.mw,
+    exactMass: analysis.exactMass,
+    clogp: analysis.clogp,
+    tpsa: analysis.tpsa,
+    hbd: analysis.hbd,
+    hba: analysis.hba,
+    rotatableBonds: analysis.rotatableBonds,
+    aromaticRings: analysis.aromaticRings,
+    stereocentres: analysis.stereocentres,
+    charge: analysis.charge,
+    classes: analysis.classes,
+    fingerprint,
+    createdBy: userId,
   };
 }
 
@@ -62,10 +88,16 @@ export async function findOrCreateCompounds(
   if (fresh.length > 0) {
     const missing = fresh.filter((idcode) => !options.fingerprints?.has(idcode));
     const computed = new Map((await fingerprintBytes(missing)).map((bytes, index) => [missing[index], bytes]));
-    const fingerprints = fresh.map((idcode) => (options.fingerprints?.get(idcode) ?? computed.get(idcode) ?? null));
+    const fingerprints = fresh.map((idcode) => options.fingerprints?.get(idcode) ?? computed.get(idcode) ?? null);
     const rows = fresh.map((idcode, index) => {
       const at = analyses.findIndex((analysis) => analysis.idcode === idcode);
-      return rowOf(requests[at].structure, analyses[at], requests[at].name?.trim() || analyses[at].name, userId, fingerprints[index]);
+      return rowOf(
+        requests[at].structure,
+        analyses[at],
+        requests[at].name?.trim() || analyses[at].name,
+        userId,
+        fingerprints[index],
+      );
     });
     await Compound.bulkCreate(rows, { transaction, ignoreDuplicates: true });
     for (const compound of await Compound.findAll({ where: { idcode: fresh }, transaction })) {
@@ -83,7 +115,10 @@ export async function findOrCreateCompounds(
 }
 
 /** One structure's compound (see findOrCreateCompounds). */
-export async function findOrCreateCompound(structure: string, options: { name?: string | null; userId: number | null; transaction?: Transaction }) {
+export async function findOrCreateCompound(
+  structure: string,
+  options: { name?: string | null; userId: number | null; transaction?: Transaction },
+) {
   const [compound] = await findOrCreateCompounds([{ structure, name: options.name }], options);
   return compound;
 }
@@ -94,9 +129,13 @@ export async function resolveCompound(
   userId: number,
   transaction?: Transaction,
 ): Promise<Compound> {
-  if (input.structure !== undefined) return findOrCreateCompound(input.structure, { name: input.name, userId, transaction });
+  if (input.structure !== undefined)
+    return findOrCreateCompound(input.structure, { name: input.name, userId, transaction });
   const compound = await Compound.findByPk(input.compoundId, { transaction });
-  if (!compound) throw new UnprocessableError(`No compound with id ${input.compoundId}.`, [{ path: 'body.compoundId', message: 'Unknown compound.' }]);
+  if (!compound)
+    throw new UnprocessableError(`No compound with id ${input.compoundId}.`, [
+      { path: 'body.compoundId', message: 'Unknown compound.' },
+    ]);
   await attachName(compound, input.name, transaction);
   return compound;
 }

@@ -25,7 +25,9 @@ const round = (value: number, places: number) => Math.round(value * 10 ** places
 
 function normalisedMixture(components: Eluent['components']) {
   const total = components.reduce((sum, part) => sum + part.parts, 0);
-  return components.map((part) => [part.solvent, round(part.parts / total, 4)] as const).sort(([a], [b]) => a.localeCompare(b));
+  return components
+    .map((part) => [part.solvent, round(part.parts / total, 4)] as const)
+    .sort(([a], [b]) => a.localeCompare(b));
 }
 
 /**
@@ -44,11 +46,19 @@ export function recordContentHash(content: RecordContent): string {
     mixture: normalisedMixture(content.eluent.components),
     additives: content.eluent.additives.map((item) => [item.additive, round(item.percent, 3)]).sort(),
     steps: content.eluent.steps.map((step) => [normalisedMixture(step.components), step.columnVolumes]),
-    spots: content.spots.map((spot) => [spot.role, round(spot.rf, 3), spot.lane, text(spot.label)]).sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
-    visualisation: content.visualisation.map((item) => [item.method, text(item.note)]).sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
+    spots: content.spots
+      .map((spot) => [spot.role, round(spot.rf, 3), spot.lane, text(spot.label)])
+      .sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
+    visualisation: content.visualisation
+      .map((item) => [item.method, text(item.note)])
+      .sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b))),
     outcome: content.outcome,
     outcomeReason: text(content.outcomeReason),
-    column: content.column ? Object.entries(content.column).filter(([, value]) => value !== null).sort() : null,
+    column: content.column
+      ? Object.entries(content.column)
+          .filter(([, value]) => value !== null)
+          .sort()
+      : null,
     notebookRef: text(content.notebookRef),
     notes: text(content.notes),
   };

@@ -36,7 +36,9 @@ export function recordFilterSql(query: Omit<RecordListQueryParsed, 'page' | 'pag
     replacements.solvents = query.solvent;
   }
   if (query.stain?.length) {
-    conditions.push('EXISTS (SELECT 1 FROM record_visualisations v WHERE v.record_id = r.id AND v.method IN (:stains))');
+    conditions.push(
+      'EXISTS (SELECT 1 FROM record_visualisations v WHERE v.record_id = r.id AND v.method IN (:stains))',
+    );
     replacements.stains = query.stain;
   }
   if (query.outcome?.length) {
@@ -48,7 +50,9 @@ export function recordFilterSql(query: Omit<RecordListQueryParsed, 'page' | 'pag
     replacements.techniques = query.technique;
   }
   if (query.author) {
-    conditions.push('(r.author_id = :author OR EXISTS (SELECT 1 FROM record_contributors rc WHERE rc.record_id = r.id AND rc.user_id = :author))');
+    conditions.push(
+      '(r.author_id = :author OR EXISTS (SELECT 1 FROM record_contributors rc WHERE rc.record_id = r.id AND rc.user_id = :author))',
+    );
     replacements.author = query.author;
   }
   if (query.demo !== undefined) {

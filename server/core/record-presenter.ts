@@ -1,5 +1,13 @@
 import type { InferAttributes } from 'sequelize';
-import type { Compound, ConditionRecord, RecordContributor, RecordPhoto, RecordSpot, RecordVisualisation, User } from '../db/models';
+import type {
+  Compound,
+  ConditionRecord,
+  RecordContributor,
+  RecordPhoto,
+  RecordSpot,
+  RecordVisualisation,
+  User,
+} from '../db/models';
 import type { RecordDto, RecordListItem, PhotoDto } from '../../shared/schemas/record';
 import { stationaryPhaseByKey } from '../../shared/catalogue/stationary-phases';
 import { stainByKey } from '../../shared/catalogue/stains';
@@ -55,7 +63,8 @@ export function presentPhoto(photo: PhotoRow, uploaderName = photo.uploader?.nam
 
 /** One row of the records table. */
 export function presentRecordListItem(record: LoadedRecord, photoCount: number): RecordListItem {
-  const byPosition = <T extends { position: number; id: number }>(rows: T[]) => [...rows].sort((a, b) => a.position - b.position || a.id - b.id);
+  const byPosition = <T extends { position: number; id: number }>(rows: T[]) =>
+    [...rows].sort((a, b) => a.position - b.position || a.id - b.id);
   return {
     id: record.id,
     status: record.status,
@@ -73,9 +82,21 @@ export function presentRecordListItem(record: LoadedRecord, photoCount: number):
     stationaryPhaseLabel: phaseLabel(record.stationaryPhase, record.stationaryPhaseOther),
     eluent: record.eluent,
     eluentSummary: eluentSummary(record.eluent, record.stationaryPhase),
-    spots: byPosition(record.spots).map(({ id, role, rf, lane, spotDistanceMm, frontDistanceMm, label }) => ({ id, role, rf, lane, spotDistanceMm, frontDistanceMm, label })),
+    spots: byPosition(record.spots).map(({ id, role, rf, lane, spotDistanceMm, frontDistanceMm, label }) => ({
+      id,
+      role,
+      rf,
+      lane,
+      spotDistanceMm,
+      frontDistanceMm,
+      label,
+    })),
     targetRf: record.targetRf,
-    visualisations: byPosition(record.visualisations).map(({ method, note }) => ({ method, note, label: visualisationLabel(method, note) })),
+    visualisations: byPosition(record.visualisations).map(({ method, note }) => ({
+      method,
+      note,
+      label: visualisationLabel(method, note),
+    })),
     outcome: record.outcome,
     yieldPercent: record.yieldPercent,
     notebookRef: record.notebookRef,
@@ -100,7 +121,10 @@ export function presentRecord(record: FullRecord, canEdit: boolean): RecordDto {
     column: columnOf(record) as RecordDto['column'],
     notes: record.notes,
     photos: photos.map((photo) => presentPhoto(photo)),
-    contributors: contributors.filter((person, index) => contributors.findIndex((other) => other.id === person.id && other.role === person.role) === index),
+    contributors: contributors.filter(
+      (person, index) =>
+        contributors.findIndex((other) => other.id === person.id && other.role === person.role) === index,
+    ),
     mergedIntoId: record.mergedIntoId,
     retiredReason: record.retiredReason,
     retiredAt: iso(record.retiredAt),

@@ -65,10 +65,17 @@ export async function listRecordIds(query: RecordListQueryParsed): Promise<{ ids
   const from = 'FROM condition_records r JOIN compounds c ON c.id = r.compound_id JOIN users u ON u.id = r.author_id';
   const direction = query.order === 'asc' ? 'ASC' : 'DESC';
   const rows = await sequelize.query<{ id: number; total: string }>(
-    `SELECT r.id, count(*) OVER () AS total ${from} WHERE ${where} ORDER BY ${sortSql[query.sort]} ${direction} NULLS LAST, r.id ${direction} LIMIT :limit OFFSET :offset`,
-    { replacements: { ...replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize }, type: QueryTypes.SELECT },
+    `SELECT r.id, count(*) OVER () AS total ${from} WHERE ${where} ORDER BY ${sortSql[query.sort]} ` +
+      `${direction} NULLS LAST, r.id ${direction} LIMIT :limit OFFSET :offset`,
+    {
+      replacements: { ...replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize },
+      type: QueryTypes.SELECT,
+    },
   );
   if (rows.length > 0) return { ids: rows.map((row) => row.id), total: Number(rows[0].total) };
-  const [{ total }] = await sequelize.query<{ total: string }>(`SELECT count(*) AS total ${from} WHERE ${where}`, { replacements, type: QueryTypes.SELECT });
+  const [{ total }] = await sequelize.query<{ total: string }>(`SELECT count(*) AS total ${from} WHERE ${where}`, {
+    replacements,
+    type: QueryTypes.SELECT,
+  });
   return { ids: [], total: Number(total) };
 }

@@ -1,5 +1,12 @@
 import type { Transaction } from 'sequelize';
-import { ConditionRecord, RecordContributor, RecordPhoto, RecordRevision, RecordSpot, RecordVisualisation } from '../db/models';
+import {
+  ConditionRecord,
+  RecordContributor,
+  RecordPhoto,
+  RecordRevision,
+  RecordSpot,
+  RecordVisualisation,
+} from '../db/models';
 import type { FieldChange, RevisionAction } from '../../shared/schemas/record-history';
 
 /** The fields a contributor edits, as one plain object: what revisions snapshot and compare. */
@@ -9,7 +16,14 @@ export interface RecordState {
   stationaryPhase: string;
   stationaryPhaseOther: string | null;
   eluent: unknown;
-  spots: { role: string; rf: number; lane: string | null; spotDistanceMm: number | null; frontDistanceMm: number | null; label: string | null }[];
+  spots: {
+    role: string;
+    rf: number;
+    lane: string | null;
+    spotDistanceMm: number | null;
+    frontDistanceMm: number | null;
+    label: string | null;
+  }[];
   visualisations: { method: string; note: string | null }[];
   outcome: string;
   outcomeReason: string | null;
@@ -21,16 +35,37 @@ export interface RecordState {
   photoIds: number[];
 }
 
-export const columnFields = ['diameterMm', 'cartridgeSize', 'silicaG', 'sampleMg', 'loadMethod', 'fractionMl', 'fractionsPooled', 'yieldPercent', 'purityNote'] as const;
+export const columnFields = [
+  'diameterMm',
+  'cartridgeSize',
+  'silicaG',
+  'sampleMg',
+  'loadMethod',
+  'fractionMl',
+  'fractionsPooled',
+  'yieldPercent',
+  'purityNote',
+] as const;
 const columnAttribute = {
-  diameterMm: 'columnDiameterMm', cartridgeSize: 'cartridgeSize', silicaG: 'silicaG', sampleMg: 'sampleMg', loadMethod: 'loadMethod',
-  fractionMl: 'fractionMl', fractionsPooled: 'fractionsPooled', yieldPercent: 'yieldPercent', purityNote: 'purityNote',
+  diameterMm: 'columnDiameterMm',
+  cartridgeSize: 'cartridgeSize',
+  silicaG: 'silicaG',
+  sampleMg: 'sampleMg',
+  loadMethod: 'loadMethod',
+  fractionMl: 'fractionMl',
+  fractionsPooled: 'fractionsPooled',
+  yieldPercent: 'yieldPercent',
+  purityNote: 'purityNote',
 } as const;
 export { columnAttribute };
 
 /** The column details of a record row, or null when none was recorded. */
-export function columnOf(record: Pick<ConditionRecord, (typeof columnAttribute)[keyof typeof columnAttribute]>): Record<(typeof columnFields)[number], unknown> | null {
-  const column = Object.fromEntries(columnFields.map((field) => [field, record[columnAttribute[field]] ?? null])) as Record<(typeof columnFields)[number], unknown>;
+export function columnOf(
+  record: Pick<ConditionRecord, (typeof columnAttribute)[keyof typeof columnAttribute]>,
+): Record<(typeof columnFields)[number], unknown> | null {
+  const column = Object.fromEntries(
+    columnFields.map((field) => [field, record[columnAttribute[field]] ?? null]),
+  ) as Record<(typeof columnFields)[number], unknown>;
   return Object.values(column).every((value) => value === null) ? null : column;
 }
 
@@ -53,7 +88,14 @@ export function recordState(
     stationaryPhase: record.stationaryPhase,
     stationaryPhaseOther: record.stationaryPhaseOther,
     eluent: record.eluent,
-    spots: spots.map(({ role, rf, lane, spotDistanceMm, frontDistanceMm, label }) => ({ role, rf, lane, spotDistanceMm, frontDistanceMm, label })),
+    spots: spots.map(({ role, rf, lane, spotDistanceMm, frontDistanceMm, label }) => ({
+      role,
+      rf,
+      lane,
+      spotDistanceMm,
+      frontDistanceMm,
+      label,
+    })),
     visualisations: visualisations.map(({ method, note }) => ({ method, note })),
     outcome: record.outcome,
     outcomeReason: record.outcomeReason,
@@ -70,10 +112,34 @@ export function recordState(
 export async function loadRecordState(recordId: number, transaction?: Transaction): Promise<RecordState> {
   const record = await ConditionRecord.findByPk(recordId, { transaction, rejectOnEmpty: true });
   // One after another: a transaction is one connection, which runs one query at a time (pg 9 refuses overlapping ones).
-  const spots = await RecordSpot.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
-  const visualisations = await RecordVisualisation.findAll({ where: { recordId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
-  const photos = await RecordPhoto.findAll({ where: { recordId, removedAt: null }, order: [['id', 'ASC']], transaction, attributes: ['id'] });
-  return recordState(record, spots, visualisations, photos.map((photo) => photo.id));
+  const spots = await RecordSpot.findAll({
+    where: { recordId },
+    order: [
+      ['position', 'ASC'],
+      ['id', 'ASC'],
+    ],
+    transaction,
+  });
+  const visualisations = await RecordVisualisation.findAll({
+    where: { recordId },
+    order: [
+      ['position', 'ASC'],
+      ['id', 'ASC'],
+    ],
+    transaction,
+  });
+  const photos = await RecordPhoto.findAll({
+    where: { recordId, removedAt: null },
+    order: [['id', 'ASC']],
+    transaction,
+    attributes: ['id'],
+  });
+  return recordState(
+    record,
+    spots,
+    visualisations,
+    photos.map((photo) => photo.id),
+  );
 }
 
 const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
@@ -108,12 +174,30 @@ export async function addRevision(
   at?: Date,
 ): Promise<RecordRevision> {
   const snapshot = await loadRecordState(recordId, transaction);
-  const record = await ConditionRecord.findByPk(recordId, { transaction, rejectOnEmpty: true, lock: transaction.LOCK.UPDATE });
+  const record = await ConditionRecord.findByPk(recordId, {
+    transaction,
+    rejectOnEmpty: true,
+    lock: transaction.LOCK.UPDATE,
+  });
   const first = action === 'create' || action === 'import';
   const number = first ? 1 : record.revision + 1;
   if (!first) await record.update({ revision: number }, { transaction });
   if (authorId !== null && authorId !== record.authorId) {
-    await RecordContributor.findOrCreate({ where: { recordId, userId: authorId, role: 'editor', viaRecordId: null }, transaction });
+    await RecordContributor.findOrCreate({
+      where: { recordId, userId: authorId, role: 'editor', viaRecordId: null },
+      transaction,
+    });
   }
-  return RecordRevision.create({ recordId, number, authorId, action, changes, snapshot: snapshot as unknown as Record<string, unknown>, ...(at ? { at } : {}) }, { transaction });
+  return RecordRevision.create(
+    {
+      recordId,
+      number,
+      authorId,
+      action,
+      changes,
+      snapshot: snapshot as unknown as Record<string, unknown>,
+      ...(at ? { at } : {}),
+    },
+    { transaction },
+  );
 }

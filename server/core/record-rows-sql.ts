@@ -9,7 +9,8 @@ import { Compound, ConditionRecord, RecordSpot, RecordVisualisation } from '../d
 type AnyModel = ModelStatic<Model>;
 
 const columnOf = (model: AnyModel, attribute: string) => model.getAttributes()[attribute].field ?? attribute;
-const attributesOf = (model: AnyModel, exclude: readonly string[] = []) => Object.keys(model.getAttributes()).filter((name) => !exclude.includes(name));
+const attributesOf = (model: AnyModel, exclude: readonly string[] = []) =>
+  Object.keys(model.getAttributes()).filter((name) => !exclude.includes(name));
 
 /** `alias."column" AS "prefix.attribute"` for every attribute of the model. */
 export function selectColumns(model: AnyModel, alias: string, prefix = '', exclude: readonly string[] = []): string {
@@ -20,8 +21,13 @@ export function selectColumns(model: AnyModel, alias: string, prefix = '', exclu
 
 /** A JSON array of the model's rows for one record, ordered like the editor shows them (only JSON-safe column types). */
 function childArray(model: AnyModel, table: string): string {
-  const pairs = attributesOf(model).map((name) => `'${name}', x."${columnOf(model, name)}"`).join(', ');
-  return `coalesce((SELECT json_agg(json_build_object(${pairs}) ORDER BY x.position, x.id) FROM ${table} x WHERE x.record_id = r.id), '[]'::json)`;
+  const pairs = attributesOf(model)
+    .map((name) => `'${name}', x."${columnOf(model, name)}"`)
+    .join(', ');
+  return (
+    `coalesce((SELECT json_agg(json_build_object(${pairs}) ORDER BY x.position, x.id) FROM ${table} ` +
+    `x WHERE x.record_id = r.id), '[]'::json)`
+  );
 }
 
 /**

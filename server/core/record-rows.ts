@@ -72,7 +72,10 @@ export async function insertRecord(content: RecordContent, options: NewRecordOpt
   const record = await ConditionRecord.create(recordAttributes(content, options), { transaction });
   await writeSpots(record.id, content.spots, transaction);
   await writeVisualisations(record.id, content.visualisation, transaction);
-  await RecordContributor.create({ recordId: record.id, userId: authorId, role: 'author', viaRecordId: null }, { transaction });
+  await RecordContributor.create(
+    { recordId: record.id, userId: authorId, role: 'author', viaRecordId: null },
+    { transaction },
+  );
   await addRevision(record.id, authorId, options.action ?? 'create', [], transaction, options.createdAt);
   return record;
 }
@@ -82,18 +85,50 @@ export async function insertRecord(content: RecordContent, options: NewRecordOpt
  * would (row, spots, visualisations, author credit, revision 1 with its snapshot) but in six statements
  * instead of about ten per record. Imports commit their batches through it.
  */
-export async function insertRecords(contents: readonly RecordContent[], options: NewRecordOptions): Promise<ConditionRecord[]> {
+export async function insertRecords(
+  contents: readonly RecordContent[],
+  options: NewRecordOptions,
+): Promise<ConditionRecord[]> {
   if (contents.length === 0) return [];
   const { transaction, authorId } = options;
-  const records = await ConditionRecord.bulkCreate(contents.map((content) => recordAttributes(content, options)), { transaction, returning: true });
-  const children = <T>(make: (record: ConditionRecord, content: RecordContent) => T[]) => records.flatMap((record, index) => make(record, contents[index]));
-  await RecordSpot.bulkCreate(children((record, content) => content.spots.map((spot, position) => ({ ...spot, recordId: record.id, originRecordId: record.id, position }))), { transaction });
-  await RecordVisualisation.bulkCreate(children((record, content) => content.visualisation.map((item, position) => ({ ...item, recordId: record.id, originRecordId: record.id, position }))), { transaction });
-  await RecordContributor.bulkCreate(records.map((record) => ({ recordId: record.id, userId: authorId, role: 'author' as const, viaRecordId: null })), { transaction });
+  const records = await ConditionRecord.bulkCreate(
+    contents.map((content) => recordAttributes(content, options)),
+    { transaction, returning: true },
+  );
+  const children = <T>(make: (record: ConditionRecord, content: RecordContent) => T[]) =>
+    records.flatMap((record, index) => make(record, contents[index]));
+  await RecordSpot.bulkCreate(
+    children((record, content) =>
+      content.spots.map((spot, position) => ({ ...spot, recordId: record.id, originRecordId: record.id, position })),
+    ),
+    { transaction },
+  );
+  await RecordVisualisation.bulkCreate(
+    children((record, content) =>
+      content.visualisation.map((item, position) => ({
+        ...item,
+        recordId: record.id,
+        originRecordId: record.id,
+        position,
+      })),
+    ),
+    { transaction },
+  );
+  await RecordContributor.bulkCreate(
+    records.map((record) => ({ recordId: record.id, userId: authorId, role: 'author' as const, viaRecordId: null })),
+    { transaction },
+  );
   await RecordRevision.bulkCreate(
     records.map((record, index) => ({
-      recordId: record.id, number: 1, authorId, action: options.action ?? 'create', changes: [],
-      snapshot: recordState(record, contents[index].spots, contents[index].visualisation, []) as unknown as Record<string, unknown>,
+      recordId: record.id,
+      number: 1,
+      authorId,
+      action: options.action ?? 'create',
+      changes: [],
+      snapshot: recordState(record, contents[index].spots, contents[index].visualisation, []) as unknown as Record<
+        string,
+        unknown
+      >,
     })),
     { transaction },
   );

@@ -17,25 +17,36 @@ import { sequelize } from './sequelize';
  * before that moment is always covered. Callers share queries: one in flight that began late enough, or the
  * last one answered, serves them all; otherwise they wait for the next.
  */
-interface Stamps { data: string; content: string }
-interface Reading { startedAt: number; promise: Promise<Stamps> }
+interface Stamps {
+  data: string;
+  content: string;
+}
+interface Reading {
+  startedAt: number;
+  promise: Promise<Stamps>;
+}
 
 let inFlight: Reading | null = null;
 let queued: Promise<Stamps> | null = null;
 let latest: { startedAt: number; stamps: Stamps } | null = null;
 
-const STAMPS_SQL = `SELECT pg_current_snapshot()::text AS data, 'content:' || (SELECT version FROM data_versions WHERE name = 'content') AS content`;
+const STAMPS_SQL =
+  `SELECT pg_current_snapshot()::text AS data, 'content:' || (SELECT version FROM ` +
+  `data_versions WHERE name = 'content') AS content`;
 
 function start(): Reading {
   const startedAt = performance.now();
-  const promise = sequelize.query<Stamps>(STAMPS_SQL, { type: QueryTypes.SELECT }).then(([row]) => {
-    // Without a content version (its row gone) the snapshot serves: never a stamp that stays put through writes.
-    const stamps = { data: row.data, content: row.content ?? row.data };
-    if (!latest || latest.startedAt < startedAt) latest = { startedAt, stamps };
-    return stamps;
-  }).finally(() => {
-    if (inFlight?.promise === promise) inFlight = null;
-  });
+  const promise = sequelize
+    .query<Stamps>(STAMPS_SQL, { type: QueryTypes.SELECT })
+    .then(([row]) => {
+      // Without a content version (its row gone) the snapshot serves: never a stamp that stays put through writes.
+      const stamps = { data: row.data, content: row.content ?? row.data };
+      if (!latest || latest.startedAt < startedAt) latest = { startedAt, stamps };
+      return stamps;
+    })
+    .finally(() => {
+      if (inFlight?.promise === promise) inFlight = null;
+    });
   inFlight = { startedAt, promise };
   return inFlight;
 }
@@ -45,13 +56,15 @@ function stamps(since: number): Promise<Stamps> {
   if (latest && latest.startedAt >= since) return Promise.resolve(latest.stamps);
   if (!inFlight) return start().promise;
   if (inFlight.startedAt >= since) return inFlight.promise;
-  queued ??= inFlight.promise.then(
-    () => undefined,
-    () => undefined,
-  ).then(() => {
-    queued = null;
-    return (inFlight ?? start()).promise;
-  });
+  queued ??= inFlight.promise
+    .then(
+      () => undefined,
+      () => undefined,
+    )
+    .then(() => {
+      queued = null;
+      return (inFlight ?? start()).promise;
+    });
   return queued;
 }
 

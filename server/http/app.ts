@@ -57,7 +57,14 @@ export function createApp(): AppHandle {
         }),
         res: (res: { statusCode?: number }) => ({ statusCode: res.statusCode }),
       },
-      customLogLevel: (_req, res, err) => (res.statusCode === 503 ? 'warn' : err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+      customLogLevel: (_req, res, err) =>
+        res.statusCode === 503
+          ? 'warn'
+          : err || res.statusCode >= 500
+            ? 'error'
+            : res.statusCode >= 400
+              ? 'info'
+              : 'debug',
     }),
   );
   app.use('/api', express.json({ limit: '1mb' }));
@@ -76,7 +83,9 @@ export function createApp(): AppHandle {
   app.use(errorHandler);
   const close = async () => {
     // The catcher (development dependencies) is loaded only where it can run: never in production.
-    const stopCatcher = usesMailCatcher() ? import('../mail/catcher').then((catcher) => catcher.stopMailCatcher()) : undefined;
+    const stopCatcher = usesMailCatcher()
+      ? import('../mail/catcher').then((catcher) => catcher.stopMailCatcher())
+      : undefined;
     await Promise.all([sessions.pool.end(), stopCatcher, stopSearchIndexes(), stopJobs()]);
   };
   return { app, close };

@@ -17,7 +17,12 @@ export class StampedCache<V extends NonNullable<unknown>> {
     const { maxBytes, sizeOf } = options;
     this.entries = new LRUCache<string, { stamp: string; value: V }>({
       max: options.max,
-      ...(maxBytes && sizeOf ? { maxSize: maxBytes, sizeCalculation: (entry: { stamp: string; value: V }) => Math.max(1, sizeOf(entry.value)) } : {}),
+      ...(maxBytes && sizeOf
+        ? {
+            maxSize: maxBytes,
+            sizeCalculation: (entry: { stamp: string; value: V }) => Math.max(1, sizeOf(entry.value)),
+          }
+        : {}),
     });
   }
 
@@ -62,4 +67,8 @@ export function sendJsonBody(res: Response, body: JsonBody): void {
 }
 
 /** Serialised answers of every hot read, bounded by bytes (64 MB per process). */
-export const responseCache = new StampedCache<JsonBody>({ max: 20_000, maxBytes: 64 * 1024 * 1024, sizeOf: (body) => body.bytes.length + 100 });
+export const responseCache = new StampedCache<JsonBody>({
+  max: 20_000,
+  maxBytes: 64 * 1024 * 1024,
+  sizeOf: (body) => body.bytes.length + 100,
+});

@@ -14,7 +14,10 @@ export async function withLease<T>(key: number, work: () => Promise<T>): Promise
   client.on('error', () => undefined);
   await client.connect();
   try {
-    const { rows } = await client.query<{ held: boolean }>('SELECT pg_try_advisory_lock($1, $2) AS held', [LEASE_SPACE, key]);
+    const { rows } = await client.query<{ held: boolean }>('SELECT pg_try_advisory_lock($1, $2) AS held', [
+      LEASE_SPACE,
+      key,
+    ]);
     if (!rows[0]?.held) return null;
     return { value: await work() };
   } finally {

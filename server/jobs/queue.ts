@@ -29,15 +29,23 @@ export function defineJob<T extends object>(definition: JobDefinition<T>): void 
 
 async function start(): Promise<PgBoss> {
   const created = new PgBoss({
-    connectionString: env().DATABASE_URL, schema: 'rfolio_jobs', max: 4, application_name: 'rfolio-jobs',
-    maintenanceIntervalSeconds: 10, monitorStateIntervalSeconds: 60, archiveCompletedAfterSeconds: 3_600, deleteAfterDays: 7,
+    connectionString: env().DATABASE_URL,
+    schema: 'rfolio_jobs',
+    max: 4,
+    application_name: 'rfolio-jobs',
+    maintenanceIntervalSeconds: 10,
+    monitorStateIntervalSeconds: 60,
+    archiveCompletedAfterSeconds: 3_600,
+    deleteAfterDays: 7,
   });
   created.on('error', (error) => logger.warn({ err: error }, 'job queue error (it keeps polling)'));
   await created.start();
   for (const definition of definitions.values()) {
     const { name, expireInSeconds, retryDelay, retryLimit } = definition;
     await created.createQueue(name, { name, expireInSeconds, retryDelay, retryLimit, retentionDays: 7 });
-    await created.work<object>(name, { pollingIntervalSeconds: 1, batchSize: 1 }, async ([job]) => definition.handler(job.data));
+    await created.work<object>(name, { pollingIntervalSeconds: 1, batchSize: 1 }, async ([job]) =>
+      definition.handler(job.data),
+    );
   }
   boss = created;
   return created;

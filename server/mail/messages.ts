@@ -16,7 +16,13 @@ const roleWords: Record<Role, string> = {
 
 const when = (d: Date) => d.toISOString().replace('T', ' ').slice(0, 16) + ' UTC';
 
-export function invitationMail(input: { to: string; token: string; role: Role; inviterName: string | null; expiresAt: Date }): OutgoingMail {
+export function invitationMail(input: {
+  to: string;
+  token: string;
+  role: Role;
+  inviterName: string | null;
+  expiresAt: Date;
+}): OutgoingMail {
   const link = appLink(`/invitations/${input.token}`);
   const who = input.inviterName ? `${input.inviterName} has invited you` : 'You have been invited';
   return {
@@ -52,7 +58,12 @@ export function passwordResetMail(input: { to: string; token: string; expiresAt:
   };
 }
 
-export function signInGuessedMail(input: { to: string; failures: number; at: Date; waitSeconds: number }): OutgoingMail {
+export function signInGuessedMail(input: {
+  to: string;
+  failures: number;
+  at: Date;
+  waitSeconds: number;
+}): OutgoingMail {
   return {
     to: input.to,
     subject: 'Failed sign-ins to your Rfolio account',

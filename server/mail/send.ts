@@ -27,7 +27,10 @@ async function transport(): Promise<Transporter> {
   }
   const port = mailCatcherPort() ?? (await (await import('./catcher')).startMailCatcher(env().MAIL_CATCHER_PORT));
   if (catcherTransport?.port !== port) {
-    catcherTransport = { port, transport: nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true }) };
+    catcherTransport = {
+      port,
+      transport: nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true }),
+    };
   }
   return catcherTransport.transport;
 }

@@ -11,7 +11,9 @@ const accepted: Record<string, PhotoContentType> = { jpeg: 'image/jpeg', png: 'i
  * Decodes a photo's header with sharp: the content decides the type, never the file name or declared type. Answers
  * the type and the size as displayed (EXIF orientation applied); 415 for anything but a JPEG, PNG or WebP image.
  */
-export async function sniffPhoto(bytes: Buffer): Promise<{ contentType: PhotoContentType; width: number; height: number }> {
+export async function sniffPhoto(
+  bytes: Buffer,
+): Promise<{ contentType: PhotoContentType; width: number; height: number }> {
   let metadata: Metadata;
   try {
     metadata = await sharp(bytes).metadata();
@@ -20,8 +22,14 @@ export async function sniffPhoto(bytes: Buffer): Promise<{ contentType: PhotoCon
   }
   const contentType = metadata.format ? accepted[metadata.format] : undefined;
   if (!contentType || !metadata.width || !metadata.height) {
-    throw new UnsupportedMediaTypeError(`The file is ${metadata.format ?? 'of an unknown type'}; plate photos must be JPEG, PNG or WebP.`);
+    throw new UnsupportedMediaTypeError(
+      `The file is ${metadata.format ?? 'of an unknown type'}; plate photos must be JPEG, PNG or WebP.`,
+    );
   }
   const turned = (metadata.orientation ?? 1) >= 5;
-  return { contentType, width: turned ? metadata.height : metadata.width, height: turned ? metadata.width : metadata.height };
+  return {
+    contentType,
+    width: turned ? metadata.height : metadata.width,
+    height: turned ? metadata.width : metadata.height,
+  };
 }

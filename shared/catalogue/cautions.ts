@@ -12,27 +12,61 @@ export interface Caution {
 export const deferToSafetyOffice =
   'Follow the safety data sheets, your local rules and your institution’s safety office; they take precedence over this note.';
 
-const caution = (key: string, title: string, body: string): Caution => ({ key, title, text: `${body} ${deferToSafetyOffice}` });
+const caution = (key: string, title: string, body: string): Caution => ({
+  key,
+  title,
+  text: `${body} ${deferToSafetyOffice}`,
+});
 
 /** The usual cautions of the trade (common practice), each deferring to local safety sources. */
 export const cautions = {
-  flammableSolvent: caution('flammable-solvent', 'Flammable solvents',
-    'Keep eluents away from hot plates, heat guns and sparks; work in a fume hood and keep volumes on the bench small.'),
-  peroxideFormer: caution('peroxide-former', 'Peroxide-forming solvents',
-    'Date containers on opening, test for peroxides before use and never distil or evaporate to dryness without testing.'),
-  toxicSolvent: caution('toxic-solvent', 'Toxic or suspected carcinogenic solvents',
-    'Handle only in a fume hood with suitable gloves; choose a greener alternative where one works.'),
-  pressurisedGlass: caution('pressurised-glass', 'Pressurised glass columns',
-    'Use columns rated for pressure, check the glass for cracks and stars, keep pressure low (a few tenths of a bar), use a safety screen and never clamp the outlet shut under pressure.'),
-  silicaDust: caution('silica-dust', 'Silica dust',
-    'Fine silica harms the lungs: weigh and pour it in a fume hood, avoid raising dust and dispose of used silica as solvent-contaminated waste.'),
-  uvLamp: caution('uv-lamp', 'UV lamps',
-    'Never look into a UV lamp; use the shield and UV-blocking glasses and keep skin exposure short.'),
-  stainsAndHeat: caution('stains-and-heat', 'Stains and heat guns',
-    'Many stains are corrosive or oxidising (acid, permanganate, molybdates); dip in a fume hood, wear gloves and eye protection, and keep the heat gun away from solvent vapour.'),
+  flammableSolvent: caution(
+    'flammable-solvent',
+    'Flammable solvents',
+    'Keep eluents away from hot plates, heat guns and sparks; work in a fume hood and keep volumes on the bench small.',
+  ),
+  peroxideFormer: caution(
+    'peroxide-former',
+    'Peroxide-forming solvents',
+    'Date containers on opening, test for peroxides before use and never distil or evaporate to dryness without testing.',
+  ),
+  toxicSolvent: caution(
+    'toxic-solvent',
+    'Toxic or suspected carcinogenic solvents',
+    'Handle only in a fume hood with suitable gloves; choose a greener alternative where one works.',
+  ),
+  pressurisedGlass: caution(
+    'pressurised-glass',
+    'Pressurised glass columns',
+    'Use columns rated for pressure, check the glass for cracks and stars, keep pressure low (a few ' +
+      'tenths of a bar), use a safety screen and never clamp the outlet shut under pressure.',
+  ),
+  silicaDust: caution(
+    'silica-dust',
+    'Silica dust',
+    'Fine silica harms the lungs: weigh and pour it in a fume hood, avoid raising dust and dispose of ' +
+      'used silica as solvent-contaminated waste.',
+  ),
+  uvLamp: caution(
+    'uv-lamp',
+    'UV lamps',
+    'Never look into a UV lamp; use the shield and UV-blocking glasses and keep skin exposure short.',
+  ),
+  stainsAndHeat: caution(
+    'stains-and-heat',
+    'Stains and heat guns',
+    'Many stains are corrosive or oxidising (acid, permanganate, molybdates); dip in a fume hood, wear ' +
+      'gloves and eye protection, and keep the heat gun away from solvent vapour.',
+  ),
 } as const;
 
-const toxicHazards: readonly SolventHazard[] = ['toxic', 'carcinogen', 'carcinogen-suspect', 'reproductive-toxicant-suspect', 'neurotoxic'];
+const toxicHazards: readonly SolventHazard[] = [
+  'toxic',
+  'carcinogen',
+  'carcinogen-suspect',
+  'reproductive-toxicant-suspect',
+  'neurotoxic',
+];
 const flammableHazards: readonly SolventHazard[] = ['extremely-flammable', 'highly-flammable', 'flammable'];
 
 export interface CautionContext {

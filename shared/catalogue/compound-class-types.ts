@@ -1,16 +1,51 @@
 /** Stable keys of the compound classes (other features, e.g. stain suggestions, rely on them). */
 export const compoundClassKeys = [
-  'carboxylic-acid', 'ester', 'lactone', 'amide', 'lactam', 'carbamate', 'urea',
-  'primary-amine', 'secondary-amine', 'tertiary-amine', 'aniline', 'pyridine', 'indole', 'imidazole',
-  'heteroaromatic', 'aromatic', 'alcohol', 'phenol', 'diol', 'ether', 'acetal', 'aldehyde', 'ketone',
-  'alkene', 'alkyne', 'nitrile', 'nitro', 'aryl-halide', 'alkyl-halide', 'sulfonamide', 'sulfone',
-  'sulfide', 'thiol', 'boronic', 'silyl-ether', 'epoxide', 'ammonium-salt', 'amino-acid',
-  'phosphine-oxide', 'conjugated',
+  'carboxylic-acid',
+  'ester',
+  'lactone',
+  'amide',
+  'lactam',
+  'carbamate',
+  'urea',
+  'primary-amine',
+  'secondary-amine',
+  'tertiary-amine',
+  'aniline',
+  'pyridine',
+  'indole',
+  'imidazole',
+  'heteroaromatic',
+  'aromatic',
+  'alcohol',
+  'phenol',
+  'diol',
+  'ether',
+  'acetal',
+  'aldehyde',
+  'ketone',
+  'alkene',
+  'alkyne',
+  'nitrile',
+  'nitro',
+  'aryl-halide',
+  'alkyl-halide',
+  'sulfonamide',
+  'sulfone',
+  'sulfide',
+  'thiol',
+  'boronic',
+  'silyl-ether',
+  'epoxide',
+  'ammonium-salt',
+  'amino-acid',
+  'phosphine-oxide',
+  'conjugated',
 ] as const;
 
 export type CompoundClassKey = (typeof compoundClassKeys)[number];
 
-export type CompoundClassGroup = 'acid-base' | 'carbonyl' | 'nitrogen' | 'oxygen' | 'aromatic' | 'unsaturation' | 'halogen' | 'other-elements';
+export type CompoundClassGroup =
+  'acid-base' | 'carbonyl' | 'nitrogen' | 'oxygen' | 'aromatic' | 'unsaturation' | 'halogen' | 'other-elements';
 
 /**
  * A compound class defined as substructures. A structure belongs to the class when one of the

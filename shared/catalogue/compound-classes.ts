@@ -4,10 +4,19 @@ import { otherElementClasses } from './compound-classes-other-elements';
 
 import type { CompoundClass, CompoundClassKey } from './compound-class-types';
 
-export { compoundClassKeys, type CompoundClass, type CompoundClassGroup, type CompoundClassKey } from './compound-class-types';
+export {
+  compoundClassKeys,
+  type CompoundClass,
+  type CompoundClassGroup,
+  type CompoundClassKey,
+} from './compound-class-types';
 
 /** All compound classes, in catalogue order. Sources: IUPAC functional-class names; definitions common practice. */
-export const compoundClasses: readonly CompoundClass[] = [...carbonylAndOxygenClasses, ...nitrogenAndAromaticClasses, ...otherElementClasses];
+export const compoundClasses: readonly CompoundClass[] = [
+  ...carbonylAndOxygenClasses,
+  ...nitrogenAndAromaticClasses,
+  ...otherElementClasses,
+];
 
 const byKey = new Map(compoundClasses.map((entry) => [entry.key, entry]));
 

@@ -5,9 +5,7 @@ import { stains, type Stain } from './stains';
 import { stationaryPhases, type StationaryPhase } from './stationary-phases';
 import type { Solvent } from './types';
 
-export type Resolution<T> =
-  | { ok: true; value: T }
-  | { ok: false; input: string; suggestion: string | null };
+export type Resolution<T> = { ok: true; value: T } | { ok: false; input: string; suggestion: string | null };
 
 /**
  * The form in which names are compared: lower case, accents and subscripts folded,

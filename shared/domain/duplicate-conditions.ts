@@ -10,7 +10,11 @@ export interface ComparableConditions {
   technique: string;
   stationaryPhase: string;
   stationaryPhaseOther: string | null;
-  eluent: { components: readonly Part[]; additives: readonly { additive: string; percent: number }[]; mode: 'isocratic' | 'gradient' };
+  eluent: {
+    components: readonly Part[];
+    additives: readonly { additive: string; percent: number }[];
+    mode: 'isocratic' | 'gradient';
+  };
   targetRf: number | null;
   notebookRef: string | null;
 }
@@ -64,7 +68,14 @@ export function compareMixtures(a: readonly Part[], b: readonly Part[], phaseKey
   const fa = fractions(a);
   const fb = fractions(b);
   const sameSolvents = fa.size === fb.size && [...fa.keys()].every((solvent) => fb.has(solvent));
-  if (!sameSolvents) return { sameSolvents, basis: 'every-component', compared: [], maxRelative: Number.POSITIVE_INFINITY, within: false };
+  if (!sameSolvents)
+    return {
+      sameSolvents,
+      basis: 'every-component',
+      compared: [],
+      maxRelative: Number.POSITIVE_INFINITY,
+      within: false,
+    };
   const strong = fa.size === 2 ? strongSolventOf(a, phaseKey) : null;
   const basis = strong ? 'strong-solvent' : 'every-component';
   const solvents = strong ? [strong] : [...fa.keys()].sort();
@@ -74,11 +85,20 @@ export function compareMixtures(a: readonly Part[], b: readonly Part[], phaseKey
     return { solvent, a: x, b: y, relative: relativeDifference(x, y) };
   });
   const maxRelative = Math.max(0, ...compared.map((item) => item.relative));
-  return { sameSolvents, basis, compared, maxRelative, within: maxRelative <= duplicateTolerances.ratioRelative + 1e-9 };
+  return {
+    sameSolvents,
+    basis,
+    compared,
+    maxRelative,
+    within: maxRelative <= duplicateTolerances.ratioRelative + 1e-9,
+  };
 }
 
 const additiveSet = (eluent: ComparableConditions['eluent']) =>
-  eluent.additives.map((item) => `${item.additive}@${item.percent}`).sort().join(',');
+  eluent.additives
+    .map((item) => `${item.additive}@${item.percent}`)
+    .sort()
+    .join(',');
 
 const norm = (text: string | null) => (text ? text.trim().replace(/\s+/g, ' ').toLowerCase() : null);
 
@@ -101,9 +121,17 @@ export interface ConditionComparison {
  * 0.5 for meeting every rule, + 0.3 × (1 − the larger of ΔRf/0.05 and Δratio/0.05) for closeness,
  * + 0.1 for the same additives, + 0.05 for the same technique, + 0.05 for the same notebook reference.
  */
-export function conditionScore(rfDifference: number, maxRelative: number, same: { additives: boolean; technique: boolean; notebookRef: boolean }): number {
-  const spread = Math.min(1, Math.max(rfDifference / duplicateTolerances.rf, maxRelative / duplicateTolerances.ratioRelative));
-  const score = 0.5 + 0.3 * (1 - spread) + (same.additives ? 0.1 : 0) + (same.technique ? 0.05 : 0) + (same.notebookRef ? 0.05 : 0);
+export function conditionScore(
+  rfDifference: number,
+  maxRelative: number,
+  same: { additives: boolean; technique: boolean; notebookRef: boolean },
+): number {
+  const spread = Math.min(
+    1,
+    Math.max(rfDifference / duplicateTolerances.rf, maxRelative / duplicateTolerances.ratioRelative),
+  );
+  const score =
+    0.5 + 0.3 * (1 - spread) + (same.additives ? 0.1 : 0) + (same.technique ? 0.05 : 0) + (same.notebookRef ? 0.05 : 0);
   return Math.round(score * 100) / 100;
 }
 
@@ -113,7 +141,8 @@ export function conditionScore(rfDifference: number, maxRelative: number, same: 
  * 0.05. Differences in technique, additives or notebook reference lower the score but do not rule it out.
  */
 export function compareConditions(a: ComparableConditions, b: ComparableConditions): ConditionComparison {
-  const samePhase = a.stationaryPhase === b.stationaryPhase && norm(a.stationaryPhaseOther) === norm(b.stationaryPhaseOther);
+  const samePhase =
+    a.stationaryPhase === b.stationaryPhase && norm(a.stationaryPhaseOther) === norm(b.stationaryPhaseOther);
   const sameMode = a.eluent.mode === b.eluent.mode;
   const mixture = compareMixtures(a.eluent.components, b.eluent.components, a.stationaryPhase);
   const rfDifference = a.targetRf !== null && b.targetRf !== null ? Math.abs(a.targetRf - b.targetRf) : null;

@@ -4,9 +4,7 @@ export type NameToken = Extract<Token, { kind: 'name' }>;
 
 /** A number as written: percentages or ratios (one per gradient step, "0→30%" has two) or a bare number. */
 export type Value =
-  | { type: 'percent'; steps: number[] }
-  | { type: 'ratio'; steps: number[][] }
-  | { type: 'number'; value: number };
+  { type: 'percent'; steps: number[] } | { type: 'ratio'; steps: number[][] } | { type: 'number'; value: number };
 
 export type Atom =
   | { kind: 'name'; name: NameToken }
@@ -14,7 +12,8 @@ export type Atom =
   | { kind: 'cv'; value: number }
   | { kind: 'segment' | 'in' | 'plus' | 'open' | 'close' | 'sep' | 'gradient' };
 
-type Single = { type: 'percent'; value: number } | { type: 'ratio'; values: number[] } | { type: 'number'; value: number };
+type Single =
+  { type: 'percent'; value: number } | { type: 'ratio'; values: number[] } | { type: 'number'; value: number };
 type Raw = Atom | { kind: 'link'; dash: boolean } | { kind: 'single'; single: Single };
 
 type NumberToken = Extract<Token, { kind: 'number' }>;
@@ -27,21 +26,29 @@ function groupNumbers(tokens: readonly Token[]): Raw[] {
   for (let index = 0; index < tokens.length; index += 1) {
     const token = tokens[index];
     if (token.kind === 'name') raw.push({ kind: 'name', name: token });
-    else if (token.kind === 'arrow' || token.kind === 'then' || token.kind === 'to') raw.push({ kind: 'link', dash: false });
+    else if (token.kind === 'arrow' || token.kind === 'then' || token.kind === 'to')
+      raw.push({ kind: 'link', dash: false });
     else if (token.kind === 'dash') raw.push({ kind: 'link', dash: true });
     else if (passThrough.has(token.kind)) raw.push({ kind: token.kind } as Atom);
     else if (!isNumber(token)) {
       if (token.kind !== 'cv' && token.kind !== 'unknown') raw.push({ kind: 'sep' });
     } else {
       const values = [token.value];
-      while ((tokens[index + 1]?.kind === 'colon' || tokens[index + 1]?.kind === 'slash') && isNumber(tokens[index + 2])) {
+      while (
+        (tokens[index + 1]?.kind === 'colon' || tokens[index + 1]?.kind === 'slash') &&
+        isNumber(tokens[index + 2])
+      ) {
         values.push((tokens[index + 2] as NumberToken).value);
         index += 2;
       }
       const next = tokens[index + 1]?.kind;
       if (values.length > 1) raw.push({ kind: 'single', single: { type: 'ratio', values } });
       else if (next === 'percent' || next === 'cv') {
-        raw.push(next === 'cv' ? { kind: 'cv', value: token.value } : { kind: 'single', single: { type: 'percent', value: token.value } });
+        raw.push(
+          next === 'cv'
+            ? { kind: 'cv', value: token.value }
+            : { kind: 'single', single: { type: 'percent', value: token.value } },
+        );
         index += 1;
       } else raw.push({ kind: 'single', single: { type: 'number', value: token.value } });
     }
@@ -58,7 +65,8 @@ function chainValue(chain: Single[]): Value | { error: string } {
   if (chain.length === 1 && chain[0].type === 'number') return chain[0];
   const ratios = chain.filter((single) => single.type === 'ratio');
   if (ratios.length > 0) {
-    if (new Set(ratios.map((single) => single.values.length)).size > 1) return { error: 'Every ratio of a gradient needs the same number of parts.' };
+    if (new Set(ratios.map((single) => single.values.length)).size > 1)
+      return { error: 'Every ratio of a gradient needs the same number of parts.' };
     return { type: 'ratio', steps: ratios.map((single) => single.values) };
   }
   const numbers = chain.flatMap((single) => (single.type === 'ratio' ? [] : [single.value]));

@@ -6,7 +6,23 @@ export type Token =
   | { kind: 'name'; role: 'solvent' | 'additive'; key: string; text: string }
   | { kind: 'number'; value: number; text: string }
   | { kind: 'unknown'; text: string }
-  | { kind: 'percent' | 'colon' | 'slash' | 'dash' | 'arrow' | 'then' | 'to' | 'comma' | 'plus' | 'open' | 'close' | 'in' | 'cv' | 'gradient' };
+  | {
+      kind:
+        | 'percent'
+        | 'colon'
+        | 'slash'
+        | 'dash'
+        | 'arrow'
+        | 'then'
+        | 'to'
+        | 'comma'
+        | 'plus'
+        | 'open'
+        | 'close'
+        | 'in'
+        | 'cv'
+        | 'gradient';
+    };
 
 interface TrieNode {
   children: Map<string, TrieNode>;
@@ -43,15 +59,63 @@ function matchName(text: string, start: number): { key: string; end: number } | 
 }
 
 const keywords: Record<string, Token['kind'] | 'ignore'> = {
-  in: 'in', to: 'to', then: 'then', followed: 'then',
-  with: 'plus', plus: 'plus', containing: 'plus', contains: 'plus', and: 'plus', w: 'plus', add: 'plus', added: 'plus',
-  cv: 'cv', cvs: 'cv', column: 'cv', volume: 'cv', volumes: 'cv',
-  gradient: 'gradient', grad: 'gradient',
+  in: 'in',
+  to: 'to',
+  then: 'then',
+  followed: 'then',
+  with: 'plus',
+  plus: 'plus',
+  containing: 'plus',
+  contains: 'plus',
+  and: 'plus',
+  w: 'plus',
+  add: 'plus',
+  added: 'plus',
+  cv: 'cv',
+  cvs: 'cv',
+  column: 'cv',
+  volume: 'cv',
+  volumes: 'cv',
+  gradient: 'gradient',
+  grad: 'gradient',
 };
 const ignoredWords = new Set([
-  'v', 'vol', 'pure', 'neat', 'only', 'isocratic', 'iso', 'from', 'eluent', 'eluant', 'eluting', 'elution', 'solvent',
-  'solvents', 'system', 'mixture', 'mix', 'ratio', 'of', 'by', 'approx', 'ca', 'ml', 'parts', 'part', 'over', 'linear',
-  'step', 'steps', 'flash', 'tlc', 'bp', 'conc', 'abs', 'dry', 'anhydrous',
+  'v',
+  'vol',
+  'pure',
+  'neat',
+  'only',
+  'isocratic',
+  'iso',
+  'from',
+  'eluent',
+  'eluant',
+  'eluting',
+  'elution',
+  'solvent',
+  'solvents',
+  'system',
+  'mixture',
+  'mix',
+  'ratio',
+  'of',
+  'by',
+  'approx',
+  'ca',
+  'ml',
+  'parts',
+  'part',
+  'over',
+  'linear',
+  'step',
+  'steps',
+  'flash',
+  'tlc',
+  'bp',
+  'conc',
+  'abs',
+  'dry',
+  'anhydrous',
 ]);
 
 const symbols: [RegExp, Token['kind'] | 'ignore'][] = [
@@ -83,10 +147,18 @@ export function tokenise(notation: string): Token[] | { unexpected: string } {
   let index = 0;
   while (index < text.length) {
     const char = text[index];
-    if (/\s/.test(char)) { index += 1; continue; }
+    if (/\s/.test(char)) {
+      index += 1;
+      continue;
+    }
     const name = /\p{L}/u.test(text[index - 1] ?? '') ? null : matchName(text, index);
     if (name && !(/\d/.test(char) && /\d/.test(text[index - 1] ?? ''))) {
-      tokens.push({ kind: 'name', role: solventByKey(name.key) ? 'solvent' : 'additive', key: name.key, text: text.slice(index, name.end) });
+      tokens.push({
+        kind: 'name',
+        role: solventByKey(name.key) ? 'solvent' : 'additive',
+        key: name.key,
+        text: text.slice(index, name.end),
+      });
       index = name.end;
       continue;
     }

@@ -24,11 +24,19 @@ function takeAnnotations(slots: Slot[]): Map<string, number> {
       const atom = inner[at].atom;
       const next = inner[at + 1]?.atom;
       if (atom.kind === 'sep') continue;
-      if (atom.kind !== 'value' || atom.value.type !== 'percent' || atom.value.steps.length !== 1 || next?.kind !== 'name') return;
+      if (
+        atom.kind !== 'value' ||
+        atom.value.type !== 'percent' ||
+        atom.value.steps.length !== 1 ||
+        next?.kind !== 'name'
+      )
+        return;
       pairs.push([next.name.key, atom.value.steps[0]]);
       at += 1;
     }
-    const namedBefore = new Set(slots.slice(0, index).flatMap((other) => (other.atom.kind === 'name' ? [other.atom.name.key] : [])));
+    const namedBefore = new Set(
+      slots.slice(0, index).flatMap((other) => (other.atom.kind === 'name' ? [other.atom.name.key] : [])),
+    );
     if (pairs.length === 0 || !pairs.every(([key]) => namedBefore.has(key))) return;
     inner.forEach((other) => (other.used = true));
     for (const [key, percent] of pairs) shares.set(key, percent);
@@ -39,12 +47,17 @@ function takeAnnotations(slots: Slot[]): Map<string, number> {
 function checkAnnotations(shares: Map<string, number>, names: Slot[], steps: number[][]): void {
   if (shares.size === 0) return;
   if (steps.length > 1) throw new NotationError('Write the percentage of each gradient step beside that step.');
-  const solventTotal = steps[0].reduce((sum, parts, index) => sum + (nameOf(names[index]).role === 'solvent' ? parts : 0), 0);
+  const solventTotal = steps[0].reduce(
+    (sum, parts, index) => sum + (nameOf(names[index]).role === 'solvent' ? parts : 0),
+    0,
+  );
   for (const [key, stated] of shares) {
     const index = names.findIndex((slot) => nameOf(slot).key === key);
     const share = (100 * steps[0][index]) / solventTotal;
     if (Math.abs(share - stated) > 1) {
-      throw new NotationError(`The ratio gives ${Math.round(share * 10) / 10}% ${label(nameOf(names[index]))}, but ${stated}% is written.`);
+      throw new NotationError(
+        `The ratio gives ${Math.round(share * 10) / 10}% ${label(nameOf(names[index]))}, but ${stated}% is written.`,
+      );
     }
   }
 }
@@ -75,28 +88,39 @@ export function readSegment(atoms: readonly Atom[]): SegmentReading {
 
   const unpriced = names.find((slot) => nameOf(slot).role === 'additive');
   const hasParts = slots.some((slot) => slot.atom.kind === 'value' && slot.atom.value.type !== 'percent');
-  if (unpriced && !hasParts) throw new NotationError(`Give the amount of ${label(nameOf(unpriced))}, e.g. "+ 1% ${label(nameOf(unpriced))}".`);
+  if (unpriced && !hasParts)
+    throw new NotationError(`Give the amount of ${label(nameOf(unpriced))}, e.g. "+ 1% ${label(nameOf(unpriced))}".`);
 
   let steps = partsFromNumbers(slots, names) ?? partsFromPercents(slots, names);
   if (!steps) {
-    if (names.length > 1) throw new NotationError(`Give the ratio of ${names.map((slot) => label(nameOf(slot))).join(' and ')}, e.g. "${names.map((slot) => label(nameOf(slot))).join('/')} 1:4".`);
+    if (names.length > 1)
+      throw new NotationError(
+        `Give the ratio of ${names.map((slot) => label(nameOf(slot))).join(' and ')}, e.g. ` +
+          `"${names.map((slot) => label(nameOf(slot))).join('/')} 1:4".`,
+      );
     steps = [[1]];
   }
   checkAnnotations(shares, names, steps);
   const leftover = slots.find((slot) => !slot.used && slot.atom.kind === 'value');
-  if (leftover) throw new NotationError(`Cannot tell what ${describe(leftover)} refers to; write a ratio (a:b) or a percentage next to a solvent.`);
+  if (leftover)
+    throw new NotationError(
+      `Cannot tell what ${describe(leftover)} refers to; write a ratio (a:b) or a percentage next to a solvent.`,
+    );
 
   const columnVolumes = columnVolumesOf(slots);
   const inline = new Map<string, number>();
   const compositions: Composition[] = steps.map((step, stepIndex) => {
     const total = step.reduce((sum, parts) => sum + parts, 0);
-    if (!(total > 0) || step.some((parts) => !(parts >= 0))) throw new NotationError('Parts and percentages must be zero or more, and not all zero.');
+    if (!(total > 0) || step.some((parts) => !(parts >= 0)))
+      throw new NotationError('Parts and percentages must be zero or more, and not all zero.');
     names.forEach((slot, index) => {
       const name = nameOf(slot);
       if (name.role !== 'additive') return;
       const percent = (100 * step[index]) / total;
       if (inline.has(name.key) && Math.abs((inline.get(name.key) as number) - percent) > 1e-9) {
-        throw new NotationError(`Write the amount of ${label(name)} once, e.g. "+ 1% ${label(name)}", not as part of a changing ratio.`);
+        throw new NotationError(
+          `Write the amount of ${label(name)} once, e.g. "+ 1% ${label(name)}", not as part of a changing ratio.`,
+        );
       }
       inline.set(name.key, percent);
     });
@@ -108,7 +132,8 @@ export function readSegment(atoms: readonly Atom[]): SegmentReading {
     return { components, columnVolumes: stepIndex === steps.length - 1 ? columnVolumes : null };
   });
   for (const [additive, percent] of inline) {
-    if (!(percent > 0 && percent <= 20)) throw new NotationError(`${additive} at ${Math.round(percent * 100) / 100}% is outside 0–20% v/v.`);
+    if (!(percent > 0 && percent <= 20))
+      throw new NotationError(`${additive} at ${Math.round(percent * 100) / 100}% is outside 0–20% v/v.`);
     additives.push({ additive, percent });
   }
   return { steps: compositions, additives };

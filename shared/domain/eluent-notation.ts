@@ -44,24 +44,34 @@ export function parseEluent(notation: string): EluentParse {
   if (unknown) {
     const suggestion = eluentNameIndex.suggest(unknown.text);
     const hint = suggestion ? ` Did you mean "${suggestion}"?` : '';
-    return { ok: false, error: { message: `Unknown solvent or additive "${unknown.text}".${hint}`, unknownWord: unknown.text, ...(suggestion ? { suggestion } : {}) } };
+    return {
+      ok: false,
+      error: {
+        message: `Unknown solvent or additive "${unknown.text}".${hint}`,
+        unknownWord: unknown.text,
+        ...(suggestion ? { suggestion } : {}),
+      },
+    };
   }
   const atoms = toAtoms(tokens);
   if ('error' in atoms) return fail(atoms.error);
   const segments = splitSegments(atoms);
-  if (segments.some((segment) => segment.length === 0)) return fail('An arrow must stand between two compositions, e.g. "hexanes → EtOAc/hexanes 1:1".');
+  if (segments.some((segment) => segment.length === 0))
+    return fail('An arrow must stand between two compositions, e.g. "hexanes → EtOAc/hexanes 1:1".');
   try {
     const readings = segments.map(readSegment);
     const steps = readings.flatMap((reading) => reading.steps);
     const additives = new Map<string, number>();
     for (const { additive, percent } of readings.flatMap((reading) => reading.additives)) {
-      if (additives.has(additive) && additives.get(additive) !== percent) throw new NotationError(`${additiveByKey(additive)?.label} is given two different amounts.`);
+      if (additives.has(additive) && additives.get(additive) !== percent)
+        throw new NotationError(`${additiveByKey(additive)?.label} is given two different amounts.`);
       additives.set(additive, percent);
     }
     if (steps.length === 1 && atoms.some((atom) => atom.kind === 'gradient')) {
       throw new NotationError('A gradient needs a start and an end, e.g. "EtOAc in hexanes 0→30%".');
     }
-    if (steps.some((step) => step.components.length > 4)) throw new NotationError('An eluent holds at most four solvents.');
+    if (steps.some((step) => step.components.length > 4))
+      throw new NotationError('An eluent holds at most four solvents.');
     if (additives.size > 4) throw new NotationError('An eluent holds at most four additives.');
     const gradient = steps.length > 1;
     return {
@@ -104,9 +114,14 @@ export function formatEluent(eluent: Eluent): string {
   const body =
     eluent.mode === 'gradient'
       ? eluent.steps
-          .map((step) => `${formatComposition(step.components)}${step.columnVolumes === null ? '' : `, ${formatNumber(step.columnVolumes)} CV`}`)
+          .map(
+            (step) =>
+              `${formatComposition(step.components)}${step.columnVolumes === null ? '' : `, ${formatNumber(step.columnVolumes)} CV`}`,
+          )
           .join(' → ')
       : formatComposition(eluent.components);
-  const extras = eluent.additives.map((item) => ` + ${formatNumber(item.percent)}% ${additiveByKey(item.additive)?.label ?? item.additive}`);
+  const extras = eluent.additives.map(
+    (item) => ` + ${formatNumber(item.percent)}% ${additiveByKey(item.additive)?.label ?? item.additive}`,
+  );
   return body + extras.join('');
 }

@@ -2,7 +2,12 @@ import { requireSolvent } from '../catalogue/solvents';
 import type { Adsorbent, SourcedValue } from '../catalogue/types';
 import { mixtureFractions, type MixturePart } from './mixture-fractions';
 
-export { mixtureFractions, moleFractionFromVolume, volumeFractionFromMole, type MixturePart } from './mixture-fractions';
+export {
+  mixtureFractions,
+  moleFractionFromVolume,
+  volumeFractionFromMole,
+  type MixturePart,
+} from './mixture-fractions';
 
 /**
  * Adsorbent activity α in Snyder's equation (L. R. Snyder, Principles of Adsorption Chromatography, 1968). From
@@ -10,8 +15,16 @@ export { mixtureFractions, moleFractionFromVolume, volumeFractionFromMole, type 
  * no published value has been checked.
  */
 export const defaultActivity: Record<Adsorbent, SourcedValue> = {
-  silica: { value: 0.6, provenance: 'from-memory', source: 'Snyder 1968, from memory: α ≈ 0.6–0.7 for silica; 0.6 used' },
-  alumina: { value: 0.6, provenance: 'from-memory', source: 'Snyder 1968, from memory: α about 0.6 for standard-activity alumina' },
+  silica: {
+    value: 0.6,
+    provenance: 'from-memory',
+    source: 'Snyder 1968, from memory: α ≈ 0.6–0.7 for silica; 0.6 used',
+  },
+  alumina: {
+    value: 0.6,
+    provenance: 'from-memory',
+    source: 'Snyder 1968, from memory: α about 0.6 for standard-activity alumina',
+  },
 };
 
 const ethylAcetateArea = 5.2;
@@ -39,7 +52,13 @@ export function adsorbedArea(solventKey: string): SourcedValue {
  * ε°_AB = ε°_A + log10(N_B·10^(α·n_b·(ε°_B − ε°_A)) + 1 − N_B) / (α·n_b),
  * with N_B the mole fraction of the strong solvent B, n_b its adsorbed area and α the adsorbent activity.
  */
-export function snyderBinaryStrength(epsilonA: number, epsilonB: number, moleFractionB: number, areaB: number, activity: number): number {
+export function snyderBinaryStrength(
+  epsilonA: number,
+  epsilonB: number,
+  moleFractionB: number,
+  areaB: number,
+  activity: number,
+): number {
   const scale = activity * areaB;
   return epsilonA + Math.log10(moleFractionB * 10 ** (scale * (epsilonB - epsilonA)) + 1 - moleFractionB) / scale;
 }
@@ -65,7 +84,8 @@ export type MixtureStrength =
   | { ok: false; adsorbent: Adsorbent; missing: string[]; message: string };
 
 export const strengthEquation =
-  'Snyder 1968 (equation from memory): ε° = ε°_A + log10(Σ N_i·10^(α·n_b·(ε°_i − ε°_A))) / (α·n_b), A the weakest solvent, n_b the strongest solvent’s adsorbed area; for two solvents this is Snyder’s binary equation';
+  'Snyder 1968 (equation from memory): ε° = ε°_A + log10(Σ N_i·10^(α·n_b·(ε°_i − ε°_A))) / (α·n_b), ' +
+  'A the weakest solvent, n_b the strongest solvent’s adsorbed area; for two solvents this is Snyder’s binary equation';
 
 /**
  * Solvent strength ε° of an eluent on silica or alumina. Two solvents: Snyder's binary equation exactly.
@@ -74,9 +94,15 @@ export const strengthEquation =
  * ε°, and is this project's documented generalisation, not a published multi-solvent equation.
  * Volume parts become mole fractions through density and molar mass.
  */
-export function mixtureStrength(mixture: readonly MixturePart[], adsorbent: Adsorbent, activity = defaultActivity[adsorbent]): MixtureStrength {
+export function mixtureStrength(
+  mixture: readonly MixturePart[],
+  adsorbent: Adsorbent,
+  activity = defaultActivity[adsorbent],
+): MixtureStrength {
   const present = mixtureFractions(mixture).filter((part) => part.moleFraction > 0);
-  const missing = present.filter((part) => !requireSolvent(part.solvent).strength[adsorbent]).map((part) => part.solvent);
+  const missing = present
+    .filter((part) => !requireSolvent(part.solvent).strength[adsorbent])
+    .map((part) => part.solvent);
   if (missing.length > 0) {
     const names = missing.map((key) => requireSolvent(key).name).join(', ');
     return { ok: false, adsorbent, missing, message: `No ε° on ${adsorbent} is known for ${names}.` };
@@ -90,12 +116,27 @@ export function mixtureStrength(mixture: readonly MixturePart[], adsorbent: Adso
   const strongest = components.reduce((best, part) => (part.epsilon.value > best.epsilon.value ? part : best));
   const area = { ...adsorbedArea(strongest.solvent), solvent: strongest.solvent };
   const scale = activity.value * area.value;
-  const sum = components.reduce((total, part) => total + part.moleFraction * 10 ** (scale * (part.epsilon.value - weakest)), 0);
-  return { ok: true, epsilon: weakest + Math.log10(sum) / scale, adsorbent, activity, area, components, equation: strengthEquation };
+  const sum = components.reduce(
+    (total, part) => total + part.moleFraction * 10 ** (scale * (part.epsilon.value - weakest)),
+    0,
+  );
+  return {
+    ok: true,
+    epsilon: weakest + Math.log10(sum) / scale,
+    adsorbent,
+    activity,
+    area,
+    components,
+    equation: strengthEquation,
+  };
 }
 
 /** The mixture holding volume fraction φ of the strong blend and 1 − φ of the weak blend (each taken by its own parts). */
-export function blendAt(weak: readonly MixturePart[], strong: readonly MixturePart[], strongFraction: number): MixturePart[] {
+export function blendAt(
+  weak: readonly MixturePart[],
+  strong: readonly MixturePart[],
+  strongFraction: number,
+): MixturePart[] {
   const merged = new Map<string, number>();
   const add = (blend: readonly MixturePart[], share: number) => {
     const total = blend.reduce((sum, part) => sum + part.parts, 0);
@@ -140,10 +181,28 @@ export function strongFractionForStrength(
   }
   const range: [number, number] = [low.epsilon, high.epsilon];
   if (high.epsilon <= low.epsilon) {
-    return { ok: false, missing: [], message: 'The strong side of the pair is not stronger than the weak side on this adsorbent.' };
+    return {
+      ok: false,
+      missing: [],
+      message: 'The strong side of the pair is not stronger than the weak side on this adsorbent.',
+    };
   }
-  if (targetEpsilon <= low.epsilon) return { ok: true, strongVolumeFraction: 0, epsilon: low.epsilon, reach: targetEpsilon < low.epsilon - 1e-9 ? 'below-range' : 'within', range };
-  if (targetEpsilon >= high.epsilon) return { ok: true, strongVolumeFraction: 1, epsilon: high.epsilon, reach: targetEpsilon > high.epsilon + 1e-9 ? 'above-range' : 'within', range };
+  if (targetEpsilon <= low.epsilon)
+    return {
+      ok: true,
+      strongVolumeFraction: 0,
+      epsilon: low.epsilon,
+      reach: targetEpsilon < low.epsilon - 1e-9 ? 'below-range' : 'within',
+      range,
+    };
+  if (targetEpsilon >= high.epsilon)
+    return {
+      ok: true,
+      strongVolumeFraction: 1,
+      epsilon: high.epsilon,
+      reach: targetEpsilon > high.epsilon + 1e-9 ? 'above-range' : 'within',
+      range,
+    };
   let lower = 0;
   let upper = 1;
   for (let step = 0; step < 60; step += 1) {
@@ -154,10 +213,26 @@ export function strongFractionForStrength(
   }
   const fraction = (lower + upper) / 2;
   const reached = strengthAt(fraction);
-  return { ok: true, strongVolumeFraction: fraction, epsilon: reached.ok ? reached.epsilon : targetEpsilon, reach: 'within', range };
+  return {
+    ok: true,
+    strongVolumeFraction: fraction,
+    epsilon: reached.ok ? reached.epsilon : targetEpsilon,
+    reach: 'within',
+    range,
+  };
 }
 
 /** Volume fraction of solvent B in an A/B pair giving a target ε° (see strongFractionForStrength). */
-export function volumeFractionForStrength(weakKey: string, strongKey: string, targetEpsilon: number, adsorbent: Adsorbent): StrengthSolution {
-  return strongFractionForStrength([{ solvent: weakKey, parts: 1 }], [{ solvent: strongKey, parts: 1 }], targetEpsilon, adsorbent);
+export function volumeFractionForStrength(
+  weakKey: string,
+  strongKey: string,
+  targetEpsilon: number,
+  adsorbent: Adsorbent,
+): StrengthSolution {
+  return strongFractionForStrength(
+    [{ solvent: weakKey, parts: 1 }],
+    [{ solvent: strongKey, parts: 1 }],
+    targetEpsilon,
+    adsorbent,
+  );
 }

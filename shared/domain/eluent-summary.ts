@@ -61,10 +61,15 @@ export function formatMixture(components: readonly Part[]): string {
 
 /** Notation of a whole eluent: mixture (or gradient steps with CV), then additives in % v/v. */
 export function formatEluent(eluent: SummarisedEluent): string {
-  const body = eluent.mode === 'gradient' && eluent.steps.length > 0
-    ? `gradient ${eluent.steps.map((step) => `${formatMixture(step.components)}${step.columnVolumes ? ` (${formatParts(step.columnVolumes)} CV)` : ''}`).join(' → ')}`
-    : formatMixture(eluent.components);
-  const extras = eluent.additives.map((item) => `+ ${formatParts(item.percent)}% ${additiveByKey(item.additive)?.label ?? item.additive}`);
+  const stepWords = (step: (typeof eluent.steps)[number]) =>
+    `${formatMixture(step.components)}${step.columnVolumes ? ` (${formatParts(step.columnVolumes)} CV)` : ''}`;
+  const body =
+    eluent.mode === 'gradient' && eluent.steps.length > 0
+      ? `gradient ${eluent.steps.map(stepWords).join(' → ')}`
+      : formatMixture(eluent.components);
+  const extras = eluent.additives.map(
+    (item) => `+ ${formatParts(item.percent)}% ${additiveByKey(item.additive)?.label ?? item.additive}`,
+  );
   return [body, ...extras].join(' ');
 }
 

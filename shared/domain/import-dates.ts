@@ -9,7 +9,11 @@
 export type DateOrder = 'dmy' | 'mdy';
 
 /** The column's verdict: an order, none needed (no ambiguous cell), undecided (ask), or contradictory (ask). */
-export type DateColumnOrder = { order: DateOrder | null; needsChoice: boolean; evidence: { dmy: number; mdy: number; ambiguous: number } };
+export type DateColumnOrder = {
+  order: DateOrder | null;
+  needsChoice: boolean;
+  evidence: { dmy: number; mdy: number; ambiguous: number };
+};
 
 const months = ['jan', 'feb', 'mar', 'apr', 'may', 'jun', 'jul', 'aug', 'sep', 'oct', 'nov', 'dec'];
 
@@ -80,12 +84,21 @@ export function readDate(cell: string, order: DateOrder | null, now = new Date()
     const [a, b] = [Number(match[1]), Number(match[2])];
     const kind = classifyDate(text);
     const use = kind === 'dmy' || kind === 'mdy' ? kind : kind === 'unambiguous' ? 'dmy' : order;
-    if (!use) return { ok: false, reason: `"${text}" could be day/month or month/day, and the column does not say which; choose the order.` };
+    if (!use)
+      return {
+        ok: false,
+        reason: `"${text}" could be day/month or month/day, and the column does not say which; choose the order.`,
+      };
     parts = use === 'dmy' ? [fullYear(match[3], now), b, a] : [fullYear(match[3], now), a, b];
   }
-  if (!parts) return { ok: false, reason: `"${text}" is not a date this import reads (e.g. 2021-03-04, 04/03/2021, 4 Mar 2021).` };
+  if (!parts)
+    return {
+      ok: false,
+      reason: `"${text}" is not a date this import reads (e.g. 2021-03-04, 04/03/2021, 4 Mar 2021).`,
+    };
   const date = valid(...parts);
   if (!date) return { ok: false, reason: `"${text}" is not a calendar date.` };
-  if (parts[0] < 1950 || date > now.toISOString().slice(0, 10)) return { ok: false, reason: `"${text}" is outside 1950 to today.` };
+  if (parts[0] < 1950 || date > now.toISOString().slice(0, 10))
+    return { ok: false, reason: `"${text}" is outside 1950 to today.` };
   return { ok: true, date };
 }

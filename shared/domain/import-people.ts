@@ -6,7 +6,10 @@ export interface Member {
 }
 
 const fold = (text: string) => text.normalize('NFKD').replace(/\p{M}/gu, '').toLowerCase();
-const words = (text: string) => fold(text).split(/[^a-z0-9]+/).filter(Boolean);
+const words = (text: string) =>
+  fold(text)
+    .split(/[^a-z0-9]+/)
+    .filter(Boolean);
 
 /** "Ada M. Lovelace" → "aml"; also "al" (first and last only), the forms initials are usually written in. */
 function initialsOf(name: string): string[] {

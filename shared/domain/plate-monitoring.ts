@@ -44,20 +44,44 @@ export function readMonitoringPlate(lanes: MonitorLane[], targetRf?: number | nu
   const remains = smRf !== null && mixture ? mixtureRfs.some((rf) => near(rf, smRf)) : null;
   const newSpots = mixtureRfs.filter((rf) => smRf === null || !near(rf, smRf));
   const coResolves = co ? co.rfs.length >= 2 && co.rfs.some((a) => co.rfs.some((b) => !near(a, b))) : null;
-  const target = targetRf ?? (newSpots.length ? newSpots.reduce((best, rf) => (Math.abs(rf - 0.3) < Math.abs(best - 0.3) ? rf : best)) : null);
+  const target =
+    targetRf ??
+    (newSpots.length ? newSpots.reduce((best, rf) => (Math.abs(rf - 0.3) < Math.abs(best - 0.3) ? rf : best)) : null);
   const others = target === null ? [] : mixtureRfs.filter((rf) => !near(rf, target, 1e-9));
-  const nearest = others.length && target !== null ? others.reduce((best, rf) => (Math.abs(rf - target) < Math.abs(best - target) ? rf : best)) : null;
+  const nearest =
+    others.length && target !== null
+      ? others.reduce((best, rf) => (Math.abs(rf - target) < Math.abs(best - target) ? rf : best))
+      : null;
   const deltaRf = target !== null && nearest !== null ? Math.abs(target - nearest) : null;
-  const deltaCv = target !== null && nearest !== null && target > 0 && nearest > 0 ? deltaColumnVolumes(target, nearest) : null;
+  const deltaCv =
+    target !== null && nearest !== null && target > 0 && nearest > 0 ? deltaColumnVolumes(target, nearest) : null;
   const sentences: string[] = [];
   if (remains === true) sentences.push(`Starting material remains in the mixture (spot at Rf ${fmt(smRf!)}).`);
   if (remains === false) sentences.push(`No starting material is seen in the mixture (nothing at Rf ${fmt(smRf!)}).`);
-  if (mixture) sentences.push(newSpots.length ? `New spot${newSpots.length > 1 ? 's' : ''} at Rf ${newSpots.map(fmt).join(', ')}.` : 'No new spot in the mixture.');
-  if (coResolves === true) sentences.push('The co-spot lane resolves into two spots: the product runs apart from the starting material.');
-  if (coResolves === false) sentences.push('The co-spot lane shows one spot: product and starting material may co-elute in this eluent.');
-  if (deltaRf !== null && deltaCv !== null) sentences.push(`Target Rf ${fmt(target!)}, nearest spot Rf ${fmt(nearest!)}: ΔRf ${deltaRf.toFixed(2)}, ΔCV ${deltaCv.toFixed(1)}.`);
+  if (mixture)
+    sentences.push(
+      newSpots.length
+        ? `New spot${newSpots.length > 1 ? 's' : ''} at Rf ${newSpots.map(fmt).join(', ')}.`
+        : 'No new spot in the mixture.',
+    );
+  if (coResolves === true)
+    sentences.push('The co-spot lane resolves into two spots: the product runs apart from the starting material.');
+  if (coResolves === false)
+    sentences.push('The co-spot lane shows one spot: product and starting material may co-elute in this eluent.');
+  if (deltaRf !== null && deltaCv !== null)
+    sentences.push(
+      `Target Rf ${fmt(target!)}, nearest spot Rf ${fmt(nearest!)}: ΔRf ${deltaRf.toFixed(2)}, ΔCV ${deltaCv.toFixed(1)}.`,
+    );
   return {
-    startingMaterialRf: smRf, startingMaterialRemains: remains, newSpots, coSpotResolves: coResolves, targetRf: target, nearestRf: nearest,
-    deltaRf, deltaCv, columnPlan: target !== null && target > 0 ? { rfTarget: target, rfImpurity: nearest } : null, sentences,
+    startingMaterialRf: smRf,
+    startingMaterialRemains: remains,
+    newSpots,
+    coSpotResolves: coResolves,
+    targetRf: target,
+    nearestRf: nearest,
+    deltaRf,
+    deltaCv,
+    columnPlan: target !== null && target > 0 ? { rfTarget: target, rfImpurity: nearest } : null,
+    sentences,
   };
 }

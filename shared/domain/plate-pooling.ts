@@ -33,14 +33,19 @@ const span = ([a, b]: [number, number]) => (a === b ? String(a) : `${a}–${b}`)
  * apart (common practice of flash chromatography: pool the clean fractions, set mixed ones aside or re-purify).
  */
 export function proposePooling(lanes: FractionLane[], targetRf: number, tolerance = POOL_SAME_RF): PoolingReadout {
-  const fractions = [...lanes].sort((a, b) => a.fraction - b.fraction).map((lane) => {
-    const hasTarget = lane.rfs.some((rf) => Math.abs(rf - targetRf) <= tolerance);
-    const hasOther = lane.rfs.some((rf) => Math.abs(rf - targetRf) > tolerance);
-    const state: FractionState = hasTarget ? (hasOther ? 'mixed' : 'target') : hasOther ? 'other' : 'empty';
-    return { fraction: lane.fraction, state };
-  });
+  const fractions = [...lanes]
+    .sort((a, b) => a.fraction - b.fraction)
+    .map((lane) => {
+      const hasTarget = lane.rfs.some((rf) => Math.abs(rf - targetRf) <= tolerance);
+      const hasOther = lane.rfs.some((rf) => Math.abs(rf - targetRf) > tolerance);
+      const state: FractionState = hasTarget ? (hasOther ? 'mixed' : 'target') : hasOther ? 'other' : 'empty';
+      return { fraction: lane.fraction, state };
+    });
   const pure = runs(fractions.filter((f) => f.state === 'target').map((f) => f.fraction));
   const mixed = runs(fractions.filter((f) => f.state === 'mixed').map((f) => f.fraction));
-  const parts = [...(pure.length ? [`combine ${pure.map(span).join(', ')}`] : ['no fraction holds the target alone']), ...(mixed.length ? [`${mixed.map(span).join(', ')} mixed`] : [])];
+  const parts = [
+    ...(pure.length ? [`combine ${pure.map(span).join(', ')}`] : ['no fraction holds the target alone']),
+    ...(mixed.length ? [`${mixed.map(span).join(', ')} mixed`] : []),
+  ];
   return { fractions, pure, mixed, summary: parts.join('; ') };
 }

@@ -2,7 +2,8 @@
 export type PlatePoint = [number, number];
 
 function signedDistance([x, y]: PlatePoint, [a, b]: PlatePoint[]): number {
-  const dx = b[0] - a[0], dy = b[1] - a[1];
+  const dx = b[0] - a[0],
+    dy = b[1] - a[1];
   const length = Math.hypot(dx, dy) || 1;
   return ((x - a[0]) * dy - (y - a[1]) * dx) / length;
 }

@@ -31,10 +31,32 @@ function resolveStain(text: string): { ok: true; value: { key: string } } | { ok
 /** Words that say how or how strongly a stain showed, kept as the item's note. */
 const QUALIFIER = new RegExp(
   [
-    String.raw`after\s+heat(?:ing)?`, String.raw`with\s+heat(?:ing)?`, String.raw`heat\s*gun`, String.raw`hot\s*plate`,
-    String.raw`heat(?:ed|ing)?`, String.raw`char(?:red|ring)?`, String.raw`\d{2,3}\s*°?\s*C\b`, String.raw`\d{2,3}\s*deg(?:rees)?\s*C?\b`,
+    String.raw`after\s+heat(?:ing)?`,
+    String.raw`with\s+heat(?:ing)?`,
+    String.raw`heat\s*gun`,
+    String.raw`hot\s*plate`,
+    String.raw`heat(?:ed|ing)?`,
+    String.raw`char(?:red|ring)?`,
+    String.raw`\d{2,3}\s*°?\s*C\b`,
+    String.raw`\d{2,3}\s*deg(?:rees)?\s*C?\b`,
     String.raw`(?:very\s+)?(?:weak(?:ly)?|faint(?:ly)?|strong(?:ly)?|intense|visible|barely(?:\s+visible)?|bright|dark|pale)`,
-    'dip(?:ped)?', 'spray(?:ed)?', 'stain(?:ed)?', 'developed', 'vis(?:ualised|ualized)?', 'only', 'lamp', 'light', 'nm', 'reagent', 'solution', 'chamber', 'tank', 'vapou?r', 'Δ', 'then', 'on\\s+plate',
+    'dip(?:ped)?',
+    'spray(?:ed)?',
+    'stain(?:ed)?',
+    'developed',
+    'vis(?:ualised|ualized)?',
+    'only',
+    'lamp',
+    'light',
+    'nm',
+    'reagent',
+    'solution',
+    'chamber',
+    'tank',
+    'vapou?r',
+    'Δ',
+    'then',
+    'on\\s+plate',
   ]
     .map((word) => `(?:${word})`)
     .join('|'),
@@ -61,7 +83,10 @@ function splitList(text: string): string[] {
     current += char;
   }
   parts.push(current);
-  return parts.flatMap((part) => part.split(/\s+(?:and|then|&)\s+/i)).map((part) => part.trim()).filter(Boolean);
+  return parts
+    .flatMap((part) => part.split(/\s+(?:and|then|&)\s+/i))
+    .map((part) => part.trim())
+    .filter(Boolean);
 }
 
 /** The catalogue stain named by the longest leading run of words, and the rest of the text. */
@@ -71,16 +96,24 @@ function leadingStain(text: string): { key: string; rest: string } | null {
   const words = text.split(/\s+/);
   for (let count = Math.min(words.length, 5); count >= 1; count--) {
     for (let start = 0; start + count <= words.length; start++) {
-      const candidate = words.slice(start, start + count).join(' ').replace(/^[([]|[)\],.:]$/g, '');
+      const candidate = words
+        .slice(start, start + count)
+        .join(' ')
+        .replace(/^[([]|[)\],.:]$/g, '');
       const found = candidate ? resolveStain(candidate) : null;
-      if (found?.ok) return { key: found.value.key, rest: [...words.slice(0, start), ...words.slice(start + count)].join(' ') };
+      if (found?.ok)
+        return { key: found.value.key, rest: [...words.slice(0, start), ...words.slice(start + count)].join(' ') };
     }
   }
   return null;
 }
 
 function cleanNote(text: string): string | null {
-  const note = text.replace(/[()[\]]/g, ' ').replace(/\s*[,;]\s*/g, ', ').replace(/\s+/g, ' ').replace(/^[\s,]+|[\s,]+$/g, '');
+  const note = text
+    .replace(/[()[\]]/g, ' ')
+    .replace(/\s*[,;]\s*/g, ', ')
+    .replace(/\s+/g, ' ')
+    .replace(/^[\s,]+|[\s,]+$/g, '');
   return note ? note.slice(0, 200) : null;
 }
 
@@ -109,20 +142,27 @@ export function readStains(cell: string): StainsRead {
       continue;
     }
     const bracketed = [...part.matchAll(/\(([^)]*)\)/g)].map((match) => match[1]);
-    const outside = part.replace(/\([^)]*\)/g, ' ').replace(/\s+/g, ' ').trim();
+    const outside = part
+      .replace(/\([^)]*\)/g, ' ')
+      .replace(/\s+/g, ' ')
+      .trim();
     const found = leadingStain(outside) ?? leadingStain(part.replace(/[()]/g, ' ').replace(/\s+/g, ' ').trim());
     if (!found) {
       unrecognised.push(part);
       continue;
     }
-    const leftover = found.rest.replace(QUALIFIER, ' ').replace(/[\s,.:-]+/g, ' ').trim();
+    const leftover = found.rest
+      .replace(QUALIFIER, ' ')
+      .replace(/[\s,.:-]+/g, ' ')
+      .trim();
     if (leftover && !/^\d{3}$/.test(leftover)) unrecognised.push(part);
     items.push({ method: found.key, note: cleanNote([found.rest, ...bracketed].filter(Boolean).join(', ')) });
   }
   return { items, unrecognised };
 }
 
-export type PlateFamily = 'silica' | 'alumina-neutral' | 'alumina-basic' | 'alumina-acidic' | 'c18' | 'amine' | 'diol' | 'cyano' | 'paper';
+export type PlateFamily =
+  'silica' | 'alumina-neutral' | 'alumina-basic' | 'alumina-acidic' | 'c18' | 'amine' | 'diol' | 'cyano' | 'paper';
 
 export interface PlateRead {
   /** Catalogue key, or null when no phase was recognised. */
@@ -148,14 +188,102 @@ const familyPatterns: [PlateFamily, RegExp][] = [
 /** Qualifiers of plates and column media (brands, grades, indicator, backing, form): kept, never a warning. */
 const PLATE_QUALIFIER = new RegExp(
   [
-    String.raw`f\s*254s?`, String.raw`f\s*366`, 'uv\\s*254', 'gel', 'g', '60', '40', '100', 'h', 'hptlc', 'tlc', 'ptlc', 'plates?', 'sheets?',
-    'precoated', 'pre-coated', 'glass', 'aluminium', 'aluminum', 'alu', 'plastic', 'backed', 'backing', 'on', 'with', 'indicator',
-    'fluorescent', 'flash', 'column', 'grade', 'mesh', 'µm', 'um', 'micron', 'nm', 'merck', 'macherey[\\s-]?nagel', 'mn', 'sigma',
-    'aldrich', 'sigma-aldrich', 'fluka', 'silicycle', 'analtech', 'whatman', 'sorbent', 'biotage', 'teledyne', 'isco', 'redisep',
-    'fisher', 'vwr', 'supelco', 'alugram', 'polygram', 'silg', 'sil', 'type', 'kg', 'prep', 'preparative', 'analytical', 'normal',
-    'phase', 'neutral', 'basic', 'acidic', 'activity', 'brockmann', 'i{1,3}', 'iv', 'v', 'bonded', 'silica', 'sio2', 'si', 'kieselgel',
-    'alumina', 'al2o3', 'aluminium oxide', 'oxide', '\\d+(?:[-–]\\d+)?', 'a', 'of', 'and', '&', 'x', 'cm', 'mm', 'å', 'angstrom',
-    'pore', 'size', 'coated', 'tlc-plate', 'kg60',
+    String.raw`f\s*254s?`,
+    String.raw`f\s*366`,
+    'uv\\s*254',
+    'gel',
+    'g',
+    '60',
+    '40',
+    '100',
+    'h',
+    'hptlc',
+    'tlc',
+    'ptlc',
+    'plates?',
+    'sheets?',
+    'precoated',
+    'pre-coated',
+    'glass',
+    'aluminium',
+    'aluminum',
+    'alu',
+    'plastic',
+    'backed',
+    'backing',
+    'on',
+    'with',
+    'indicator',
+    'fluorescent',
+    'flash',
+    'column',
+    'grade',
+    'mesh',
+    'µm',
+    'um',
+    'micron',
+    'nm',
+    'merck',
+    'macherey[\\s-]?nagel',
+    'mn',
+    'sigma',
+    'aldrich',
+    'sigma-aldrich',
+    'fluka',
+    'silicycle',
+    'analtech',
+    'whatman',
+    'sorbent',
+    'biotage',
+    'teledyne',
+    'isco',
+    'redisep',
+    'fisher',
+    'vwr',
+    'supelco',
+    'alugram',
+    'polygram',
+    'silg',
+    'sil',
+    'type',
+    'kg',
+    'prep',
+    'preparative',
+    'analytical',
+    'normal',
+    'phase',
+    'neutral',
+    'basic',
+    'acidic',
+    'activity',
+    'brockmann',
+    'i{1,3}',
+    'iv',
+    'v',
+    'bonded',
+    'silica',
+    'sio2',
+    'si',
+    'kieselgel',
+    'alumina',
+    'al2o3',
+    'aluminium oxide',
+    'oxide',
+    '\\d+(?:[-–]\\d+)?',
+    'a',
+    'of',
+    'and',
+    '&',
+    'x',
+    'cm',
+    'mm',
+    'å',
+    'angstrom',
+    'pore',
+    'size',
+    'coated',
+    'tlc-plate',
+    'kg60',
   ].join('|'),
   'i',
 );
@@ -164,8 +292,15 @@ const qualifierWord = new RegExp(`^(?:${PLATE_QUALIFIER.source})$`, 'i');
 /** TLC-plate key for a family on a TLC or preparative TLC row (only silica has a separate plate entry). */
 const tlcKey: Partial<Record<PlateFamily, string>> = { silica: 'silica-tlc-f254' };
 const familyKey: Record<PlateFamily, string> = {
-  silica: 'silica-gel', 'alumina-neutral': 'alumina-neutral', 'alumina-basic': 'alumina-basic', 'alumina-acidic': 'alumina-acidic',
-  c18: 'c18', amine: 'amine-silica', diol: 'diol-silica', cyano: 'cyano-silica', paper: 'paper',
+  silica: 'silica-gel',
+  'alumina-neutral': 'alumina-neutral',
+  'alumina-basic': 'alumina-basic',
+  'alumina-acidic': 'alumina-acidic',
+  c18: 'c18',
+  amine: 'amine-silica',
+  diol: 'diol-silica',
+  cyano: 'cyano-silica',
+  paper: 'paper',
 };
 
 const exactNames = new Map(stationaryPhases.map((phase) => [phase.name.toLowerCase(), phase.key]));
@@ -181,13 +316,22 @@ export function readPlate(cell: string, technique: 'tlc' | 'flash' | 'prep_tlc')
   if (exact) return { key: exact, qualifiers: [], unrecognised: [] };
   const isPlate = technique !== 'flash';
   const family = familyPatterns.find(([, pattern]) => pattern.test(text))?.[0] ?? null;
-  const words = text.replace(/[()[\],;:/+]/g, ' ').split(/\s+/).filter(Boolean);
-  const known = (word: string) => qualifierWord.test(word.replace(/[.-]+$/, '')) || familyPatterns.some(([, pattern]) => pattern.test(word));
+  const words = text
+    .replace(/[()[\],;:/+]/g, ' ')
+    .split(/\s+/)
+    .filter(Boolean);
+  const known = (word: string) =>
+    qualifierWord.test(word.replace(/[.-]+$/, '')) || familyPatterns.some(([, pattern]) => pattern.test(word));
   const unrecognised = words.filter((word) => !known(word) && !word.split(/[-–]/).filter(Boolean).every(known));
   const qualifiers = words.filter((word) => !unrecognised.includes(word));
   if (!family) {
     const found = resolvePhase(text);
-    if (found.ok) return { key: isPlate && found.value.key === 'silica-gel' ? 'silica-tlc-f254' : found.value.key, qualifiers: [], unrecognised: [] };
+    if (found.ok)
+      return {
+        key: isPlate && found.value.key === 'silica-gel' ? 'silica-tlc-f254' : found.value.key,
+        qualifiers: [],
+        unrecognised: [],
+      };
     return { key: null, qualifiers: [], unrecognised: text ? [text] : [] };
   }
   const key = (isPlate ? tlcKey[family] : undefined) ?? familyKey[family];

@@ -51,7 +51,11 @@ export function deltaColumnVolumes(rfA: number, rfB: number): number {
 
 export type RfFromDistances =
   | { ok: true; rf: number }
-  | { ok: false; code: 'front-not-positive' | 'spot-negative' | 'spot-beyond-front' | 'rf-out-of-range'; message: string };
+  | {
+      ok: false;
+      code: 'front-not-positive' | 'spot-negative' | 'spot-beyond-front' | 'rf-out-of-range';
+      message: string;
+    };
 
 /**
  * Rf from distances measured on the plate, both in mm from the origin:
@@ -59,13 +63,25 @@ export type RfFromDistances =
  */
 export function rfFromDistances(spotMm: number, frontMm: number): RfFromDistances {
   if (!Number.isFinite(frontMm) || frontMm <= 0) {
-    return { ok: false, code: 'front-not-positive', message: 'The solvent front must be a positive distance from the origin.' };
+    return {
+      ok: false,
+      code: 'front-not-positive',
+      message: 'The solvent front must be a positive distance from the origin.',
+    };
   }
   if (!Number.isFinite(spotMm) || spotMm < 0) {
-    return { ok: false, code: 'spot-negative', message: 'The spot distance must be zero or more millimetres from the origin.' };
+    return {
+      ok: false,
+      code: 'spot-negative',
+      message: 'The spot distance must be zero or more millimetres from the origin.',
+    };
   }
   if (spotMm > frontMm) {
-    return { ok: false, code: 'spot-beyond-front', message: `The spot (${spotMm} mm) lies beyond the solvent front (${frontMm} mm).` };
+    return {
+      ok: false,
+      code: 'spot-beyond-front',
+      message: `The spot (${spotMm} mm) lies beyond the solvent front (${frontMm} mm).`,
+    };
   }
   const rf = spotMm / frontMm;
   const problem = rfProblem(rf);

@@ -29,7 +29,12 @@ function toBasis(fit: Pick<PairFit, 'weak' | 'strong' | 'basis'>, volumeFraction
  * Soczewiński fit for one compound in one solvent pair from ratios as a chemist writes them
  * (parts by volume), converted to mole fractions through density and molar mass unless basis is 'volume'.
  */
-export function fitPair(weak: string, strong: string, measurements: readonly PairMeasurement[], basis: FractionBasis = 'mole'): PairFit {
+export function fitPair(
+  weak: string,
+  strong: string,
+  measurements: readonly PairMeasurement[],
+  basis: FractionBasis = 'mole',
+): PairFit {
   requireSolvent(weak);
   requireSolvent(strong);
   const usable = measurements.filter((point) => point.strongParts > 0 && point.weakParts >= 0);
@@ -59,7 +64,8 @@ export interface PairRatio {
 /** The weak : strong ratio that the fit says gives a target Rf. */
 export function ratioForRf(fit: PairFit, targetRf: number): PairRatio {
   const solution = fractionForRf(fit, targetRf);
-  const strongVolumeFraction = fit.basis === 'mole' ? volumeFractionFromMole(fit.weak, fit.strong, solution.fraction) : solution.fraction;
+  const strongVolumeFraction =
+    fit.basis === 'mole' ? volumeFractionFromMole(fit.weak, fit.strong, solution.fraction) : solution.fraction;
   const parts = partsForVolumeFraction(strongVolumeFraction);
   return {
     strongVolumeFraction,

@@ -91,5 +91,10 @@ export function fractionForRf(fit: SoczewinskiFit, targetRf: number): FractionFo
   }
   const logFraction = (rfToRm(targetRf) - fit.intercept) / fit.slope;
   const fraction = Math.min(10 ** logFraction, 1);
-  return { fraction, extrapolated: outside(fit, fraction), reachable: logFraction <= 1e-9, rf: predictRf(fit, fraction).rf };
+  return {
+    fraction,
+    extrapolated: outside(fit, fraction),
+    reachable: logFraction <= 1e-9,
+    rf: predictRf(fit, fraction).rf,
+  };
 }

@@ -19,7 +19,8 @@ const readable = (classKey: string) => classKey.replace(/-/g, ' ');
 /**
  * Stains likely to show a compound with these class keys (see compound-classes.ts), best first.
  * Each matching class adds 3 for a specific stain, 2 for a broad one, 1 for a general one, halved for a stain
- * that shows only some members of a class (UV 365: fluorescent ones); non-destructive UV gets a bonus when it matches because it is looked at first; general stains stay listed as fallbacks.
+ * that shows only some members of a class (UV 365: fluorescent ones); non-destructive UV gets a bonus when it matches
+ * because it is looked at first; general stains stay listed as fallbacks.
  * What each stain shows: common practice (standard TLC stain tables), as each stain's `source` says.
  */
 export function suggestStains(classKeys: readonly string[]): StainSuggestion[] {
@@ -40,5 +41,10 @@ export function suggestStains(classKeys: readonly string[]): StainSuggestion[] {
   });
   return suggestions
     .filter((suggestion) => suggestion.score > 0)
-    .sort((a, b) => b.score - a.score || Number(b.stain.nonDestructive) - Number(a.stain.nonDestructive) || a.stain.name.localeCompare(b.stain.name));
+    .sort(
+      (a, b) =>
+        b.score - a.score ||
+        Number(b.stain.nonDestructive) - Number(a.stain.nonDestructive) ||
+        a.stain.name.localeCompare(b.stain.name),
+    );
 }

@@ -39,7 +39,8 @@ export interface TableSize {
   source: string;
 }
 
-const loadOf = (row: StillRow, column: LoadColumn) => (column === 'deltaRf02' ? row.loadMgAtDeltaRf02 : row.loadMgAtDeltaRf01);
+const loadOf = (row: StillRow, column: LoadColumn) =>
+  column === 'deltaRf02' ? row.loadMgAtDeltaRf02 : row.loadMgAtDeltaRf01;
 
 /**
  * Column diameter, eluent volume and fraction size for a sample mass (mg) from Still's table: a row exactly,
@@ -51,14 +52,25 @@ export function sizeFromTable(sampleMg: number, column: LoadColumn): TableSize {
   const last = stillTable[stillTable.length - 1];
   if (sampleMg <= loadOf(first, column)) {
     const position = sampleMg < loadOf(first, column) ? 'below-table' : 'row';
-    return { ...pick(first), position, tableDiameterMm: first.diameterMm, source: `${stillSource}, ${first.diameterMm} mm row (smallest in the table)` };
+    return {
+      ...pick(first),
+      position,
+      tableDiameterMm: first.diameterMm,
+      source: `${stillSource}, ${first.diameterMm} mm row (smallest in the table)`,
+    };
   }
   for (let index = 1; index < stillTable.length; index += 1) {
     const lower = stillTable[index - 1];
     const upper = stillTable[index];
     if (sampleMg > loadOf(upper, column)) continue;
     const t = (sampleMg - loadOf(lower, column)) / (loadOf(upper, column) - loadOf(lower, column));
-    if (t === 1) return { ...pick(upper), position: 'row', tableDiameterMm: upper.diameterMm, source: `${stillSource}, ${upper.diameterMm} mm row` };
+    if (t === 1)
+      return {
+        ...pick(upper),
+        position: 'row',
+        tableDiameterMm: upper.diameterMm,
+        source: `${stillSource}, ${upper.diameterMm} mm row`,
+      };
     const mix = (key: 'diameterMm' | 'eluentMl' | 'fractionMl') => lower[key] + t * (upper[key] - lower[key]);
     return {
       diameterMm: mix('diameterMm'),
@@ -76,7 +88,9 @@ export function sizeFromTable(sampleMg: number, column: LoadColumn): TableSize {
     fractionMl: last.fractionMl * area,
     position: 'above-table',
     tableDiameterMm: null,
-    source: `extrapolated from the ${last.diameterMm} mm row of ${stillSource} by cross-section area at the same bed height (common practice; outside the table)`,
+    source:
+      `extrapolated from the ${last.diameterMm} mm row of ${stillSource} by cross-section area ` +
+      `at the same bed height (common practice; outside the table)`,
   };
 }
 

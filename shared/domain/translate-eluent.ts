@@ -1,6 +1,12 @@
 import { requireSolvent } from '../catalogue/solvents';
 import type { Adsorbent, SolventHazard, SourcedValue } from '../catalogue/types';
-import { blendAt, mixtureStrength, strengthEquation, strongFractionForStrength, type MixturePart } from './eluent-strength';
+import {
+  blendAt,
+  mixtureStrength,
+  strengthEquation,
+  strongFractionForStrength,
+  type MixturePart,
+} from './eluent-strength';
 import { formatComposition } from './eluent-notation';
 import { formatNumber } from './format-number';
 
@@ -48,35 +54,59 @@ const sideName = (side: readonly MixturePart[]) => side.map((part) => requireSol
  * (Snyder's mixed-solvent equation, see eluent-strength.ts). Equal ε° is an estimate of equal overall
  * strength; selectivity can differ, so the result says to confirm it on a TLC plate (common practice).
  */
-export function translateEluent(source: readonly MixturePart[], target: TranslationTarget, adsorbent: Adsorbent = 'silica'): EluentTranslation {
+export function translateEluent(
+  source: readonly MixturePart[],
+  target: TranslationTarget,
+  adsorbent: Adsorbent = 'silica',
+): EluentTranslation {
   const start = mixtureStrength(source, adsorbent);
   if (!start.ok) return { ok: false, missing: start.missing, message: start.message };
   const solution = strongFractionForStrength(target.weak, target.strong, start.epsilon, adsorbent);
   if (!solution.ok) return solution;
-  const blend = blendAt(target.weak, target.strong, solution.strongVolumeFraction).map((part) => ({ solvent: part.solvent, parts: 100 * part.parts }));
+  const blend = blendAt(target.weak, target.strong, solution.strongVolumeFraction).map((part) => ({
+    solvent: part.solvent,
+    parts: 100 * part.parts,
+  }));
   const end = mixtureStrength(blend, adsorbent);
   const pair = `${sideName(target.weak)} → ${sideName(target.strong)}`;
   const warnings: string[] = [];
   if (solution.reach === 'below-range') {
-    warnings.push(`${pair} cannot be made as weak as the source (ε° ${formatNumber(start.epsilon, 3)} below ${formatNumber(solution.range[0], 3)}); the pure weak side is given.`);
+    warnings.push(
+      `${pair} cannot be made as weak as the source (ε° ${formatNumber(start.epsilon, 3)} below ` +
+        `${formatNumber(solution.range[0], 3)}); the pure weak side is given.`,
+    );
   }
   if (solution.reach === 'above-range') {
-    warnings.push(`${pair} cannot reach the source's strength (ε° ${formatNumber(start.epsilon, 3)} above ${formatNumber(solution.range[1], 3)}); the pure strong side is given.`);
+    warnings.push(
+      `${pair} cannot reach the source's strength (ε° ${formatNumber(start.epsilon, 3)} above ` +
+        `${formatNumber(solution.range[1], 3)}); the pure strong side is given.`,
+    );
   }
   const values = [start, ...(end.ok ? [end] : [])].flatMap((result) => [
     ...result.components.map((part) => ({ solvent: part.solvent, quantity: 'ε°' as const, value: part.epsilon })),
     { solvent: result.area.solvent, quantity: 'n_b' as const, value: result.area },
   ]);
-  const unique = values.filter((item, index) => values.findIndex((other) => other.solvent === item.solvent && other.quantity === item.quantity) === index);
+  const unique = values.filter(
+    (item, index) =>
+      values.findIndex((other) => other.solvent === item.solvent && other.quantity === item.quantity) === index,
+  );
   if (unique.some((item) => item.value.provenance !== 'confirmed')) {
     warnings.push('Some ε° or n_b values are from memory or estimated, so the translated ratio is an estimate.');
   }
-  warnings.push('Equal ε° matches overall strength, not selectivity: spots may move apart or change order. Run a TLC plate in the new eluent before the column (common practice).');
+  warnings.push(
+    'Equal ε° matches overall strength, not selectivity: spots may move apart or change order. Run a ' +
+      'TLC plate in the new eluent before the column (common practice).',
+  );
   return {
     ok: true,
     adsorbent,
     source: { components: [...source], epsilon: start.epsilon, description: formatComposition(source) },
-    target: { components: blend, strongVolumeFraction: solution.strongVolumeFraction, epsilon: solution.epsilon, description: formatComposition(blend) },
+    target: {
+      components: blend,
+      strongVolumeFraction: solution.strongVolumeFraction,
+      epsilon: solution.epsilon,
+      description: formatComposition(blend),
+    },
     reach: solution.reach,
     targetRange: solution.range,
     warnings,

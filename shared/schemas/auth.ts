@@ -54,7 +54,9 @@ export const passwordResetSchema = z.object({ password: newPasswordSchema });
 export type PasswordResetInput = z.infer<typeof passwordResetSchema>;
 
 /** Tokens sent by e-mail: 32 random bytes in base64url (43 characters). */
-export const tokenParamSchema = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'Not a valid link token.') });
+export const tokenParamSchema = z.object({
+  token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'Not a valid link token.'),
+});
 
 export const invitationAcceptSchema = z.object({ name: personNameSchema, password: newPasswordSchema });
 export type InvitationAccept = z.infer<typeof invitationAcceptSchema>;

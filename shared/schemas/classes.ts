@@ -23,7 +23,12 @@ export type ClassIndex = z.infer<typeof classIndexSchema>;
 export type ClassIndexItem = ClassIndex['items'][number];
 
 /** How often something (a stain, an additive) was used in the class's records, and how often the record went clean or partial. */
-const usageSchema = z.object({ key: z.string(), label: z.string(), records: z.number().int(), worked: z.number().int() });
+const usageSchema = z.object({
+  key: z.string(),
+  label: z.string(),
+  records: z.number().int(),
+  worked: z.number().int(),
+});
 export type Usage = z.infer<typeof usageSchema>;
 
 /** One solvent combination used for the class (gradients count by their final mixture). */
@@ -37,10 +42,21 @@ export const solventPairSchema = z.object({
 });
 
 /** Snyder's ε° of one record's eluent on its adsorbent (shared/domain/eluent-strength.ts). */
-export const strengthPointSchema = z.object({ recordId: z.number().int(), epsilon: z.number(), outcome: z.enum(outcomes), demo: z.boolean() });
+export const strengthPointSchema = z.object({
+  recordId: z.number().int(),
+  epsilon: z.number(),
+  outcome: z.enum(outcomes),
+  demo: z.boolean(),
+});
 
 /** A record's % strong solvent and target Rf in the class's most used pair (for the scatter). */
-export const rfPointSchema = z.object({ recordId: z.number().int(), strongPercent: z.number(), rf: z.number(), outcome: z.enum(outcomes), demo: z.boolean() });
+export const rfPointSchema = z.object({
+  recordId: z.number().int(),
+  strongPercent: z.number(),
+  rf: z.number(),
+  outcome: z.enum(outcomes),
+  demo: z.boolean(),
+});
 
 /** `GET /api/classes/:key`. */
 export const classDetailSchema = z.object({

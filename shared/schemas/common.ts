@@ -19,7 +19,11 @@ export function errorDetailsOf(message: string, details: unknown): ErrorDetail[]
   const asDetail = (item: unknown): ErrorDetail => {
     if (item && typeof item === 'object' && !Array.isArray(item)) {
       const facts = item as Record<string, unknown>;
-      return { ...facts, path: typeof facts.path === 'string' ? facts.path : '', message: typeof facts.message === 'string' ? facts.message : message };
+      return {
+        ...facts,
+        path: typeof facts.path === 'string' ? facts.path : '',
+        message: typeof facts.message === 'string' ? facts.message : message,
+      };
     }
     return { path: '', message, value: item };
   };
@@ -34,8 +38,17 @@ export const paginationQuerySchema = z.object({
 });
 
 export function pageOf<T extends z.ZodType>(item: T) {
-  return z.object({ items: z.array(item), total: z.number().int(), page: z.number().int(), pageSize: z.number().int() });
+  return z.object({
+    items: z.array(item),
+    total: z.number().int(),
+    page: z.number().int(),
+    pageSize: z.number().int(),
+  });
 }
 
-export const healthSchema = z.object({ status: z.enum(['ok', 'degraded']), db: z.enum(['up', 'down']), version: z.string() });
+export const healthSchema = z.object({
+  status: z.enum(['ok', 'degraded']),
+  db: z.enum(['up', 'down']),
+  version: z.string(),
+});
 export type Health = z.infer<typeof healthSchema>;

@@ -3,7 +3,9 @@ import { pageOf, paginationQuerySchema } from './common';
 import { recordListItemSchema } from './record-dto';
 
 /** Body of `POST /api/structures/parse`: SMILES or molfile text (the chemistry engine limits its size). */
-export const structureParseInputSchema = z.object({ structure: z.string().min(1, 'Give a structure (SMILES or molfile).').max(200_000) });
+export const structureParseInputSchema = z.object({
+  structure: z.string().min(1, 'Give a structure (SMILES or molfile).').max(200_000),
+});
 export type StructureParseInput = z.infer<typeof structureParseInputSchema>;
 
 /** Descriptors computed with OpenChemLib on the neutral parent (see server/chem/descriptors.ts for sources). */

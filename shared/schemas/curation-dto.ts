@@ -7,7 +7,12 @@ export const curationRecordSchema = z.object({
   id: z.number().int(),
   status: z.enum(recordStatuses),
   mergedIntoId: z.number().int().nullable(),
-  compound: z.object({ id: z.number().int(), name: z.string().nullable(), synonyms: z.array(z.string()), canonicalSmiles: z.string() }),
+  compound: z.object({
+    id: z.number().int(),
+    name: z.string().nullable(),
+    synonyms: z.array(z.string()),
+    canonicalSmiles: z.string(),
+  }),
   author: z.object({ id: z.number().int(), name: z.string() }),
   technique: z.enum(techniques),
   stationaryPhase: z.string(),
@@ -94,13 +99,15 @@ export type UnitedCounts = z.infer<typeof countsSchema>;
 
 /** `GET /api/curation/merge-preview?ids=…`: side-by-side values, per-record and united counts, and blockers. */
 export const mergePreviewSchema = z.object({
-  records: z.array(curationRecordSchema.extend({
-    notes: z.string().nullable(),
-    counts: countsSchema,
-    /** Each spot of the record's plate, in plate order, and each visualisation, so the merge screen shows values, not counts. */
-    spots: z.array(z.object({ role: z.enum(spotRoles), rf: z.number(), label: z.string().nullable() })),
-    stains: z.array(z.object({ method: z.string(), note: z.string().nullable(), label: z.string() })),
-  })),
+  records: z.array(
+    curationRecordSchema.extend({
+      notes: z.string().nullable(),
+      counts: countsSchema,
+      /** Each spot of the record's plate, in plate order, and each visualisation, so the merge screen shows values, not counts. */
+      spots: z.array(z.object({ role: z.enum(spotRoles), rf: z.number(), label: z.string().nullable() })),
+      stains: z.array(z.object({ method: z.string(), note: z.string().nullable(), label: z.string() })),
+    }),
+  ),
   fields: z.array(mergeFieldSchema),
   /** After the merge: spots, photos and visualisations summed; bookmarks counted once per user; contributors once per person. */
   united: countsSchema,
@@ -108,7 +115,11 @@ export const mergePreviewSchema = z.object({
 });
 export type MergePreview = z.infer<typeof mergePreviewSchema>;
 
-export const mergeResultSchema = z.object({ mergeId: z.number().int(), survivor: curationRecordSchema, merged: z.array(curationRecordSchema) });
+export const mergeResultSchema = z.object({
+  mergeId: z.number().int(),
+  survivor: curationRecordSchema,
+  merged: z.array(curationRecordSchema),
+});
 export type MergeResult = z.infer<typeof mergeResultSchema>;
 
 export const unmergeResultSchema = z.object({ mergeId: z.number().int(), restored: z.array(curationRecordSchema) });

@@ -2,7 +2,11 @@ import { z } from 'zod';
 import { mergeableFields } from './curation-fields';
 
 const id = z.number().int().positive();
-const ids = z.array(id).min(1).max(20).refine((list) => new Set(list).size === list.length, { message: 'Each record may appear only once.' });
+const ids = z
+  .array(id)
+  .min(1)
+  .max(20)
+  .refine((list) => new Set(list).size === list.length, { message: 'Each record may appear only once.' });
 
 /** Body of `POST /api/curation/duplicates/dismiss`: the group's records and why they are not duplicates. */
 export const dismissInputSchema = z.object({
@@ -16,23 +20,36 @@ export const mergeInputSchema = z
   .object({ survivorId: id, mergedIds: ids, fields: z.partialRecord(z.enum(mergeableFields), id).default({}) })
   .superRefine((input, context) => {
     if (input.mergedIds.includes(input.survivorId)) {
-      context.addIssue({ code: 'custom', path: ['mergedIds'], message: 'The survivor cannot also be merged into itself.' });
+      context.addIssue({
+        code: 'custom',
+        path: ['mergedIds'],
+        message: 'The survivor cannot also be merged into itself.',
+      });
     }
     const involved = new Set([input.survivorId, ...input.mergedIds]);
     for (const [field, source] of Object.entries(input.fields)) {
       if (!involved.has(source as number)) {
-        context.addIssue({ code: 'custom', path: ['fields', field], message: `Record ${source} is not one of the records being merged.` });
+        context.addIssue({
+          code: 'custom',
+          path: ['fields', field],
+          message: `Record ${source} is not one of the records being merged.`,
+        });
       }
     }
   });
 export type MergeInput = z.input<typeof mergeInputSchema>;
 
 /** Body of `POST /api/records/:id/retire`. */
-export const retireInputSchema = z.object({ reason: z.string().trim().min(3, 'Say why the record is retired (at least 3 characters).').max(1000) });
+export const retireInputSchema = z.object({
+  reason: z.string().trim().min(3, 'Say why the record is retired (at least 3 characters).').max(1000),
+});
 export type RetireInput = z.input<typeof retireInputSchema>;
 
 export const mergePreviewQuerySchema = z.object({
-  ids: z.preprocess((value) => (typeof value === 'string' ? value.split(',').filter(Boolean).map(Number) : value), z.array(id).min(2).max(21)),
+  ids: z.preprocess(
+    (value) => (typeof value === 'string' ? value.split(',').filter(Boolean).map(Number) : value),
+    z.array(id).min(2).max(21),
+  ),
 });
 
 export * from './curation-fields';

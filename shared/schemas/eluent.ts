@@ -6,7 +6,10 @@ import { eluentSchema, type Eluent } from './eluent-shape';
 // The shapes of an eluent live in eluent-shape.ts (the notation parser needs them without this file's parser).
 export * from './eluent-shape';
 
-const namedComponentSchema = z.object({ solvent: z.string().trim().min(1).max(60), parts: z.number().positive().finite() });
+const namedComponentSchema = z.object({
+  solvent: z.string().trim().min(1).max(60),
+  parts: z.number().positive().finite(),
+});
 const namedAdditiveSchema = z.object({ additive: z.string().trim().min(1).max(60), percent: z.number() });
 
 /**
@@ -19,7 +22,15 @@ export const eluentInputSchema = z.union([
     components: z.array(namedComponentSchema).min(1).max(4),
     additives: z.array(namedAdditiveSchema).max(4).default([]),
     mode: z.enum(['isocratic', 'gradient']).optional(),
-    steps: z.array(z.object({ components: z.array(namedComponentSchema).min(1).max(4), columnVolumes: z.number().positive().nullable().default(null) })).max(20).default([]),
+    steps: z
+      .array(
+        z.object({
+          components: z.array(namedComponentSchema).min(1).max(4),
+          columnVolumes: z.number().positive().nullable().default(null),
+        }),
+      )
+      .max(20)
+      .default([]),
   }),
 ]);
 export type EluentInput = z.input<typeof eluentInputSchema>;
@@ -29,7 +40,12 @@ export const eluentFromInputSchema = eluentInputSchema.transform((input, context
   const result = normaliseEluentInput(input);
   if (result.ok) return result.eluent;
   for (const issue of result.issues) {
-    context.addIssue({ code: 'custom', path: issue.path, message: issue.message, params: { unknownWord: issue.unknownWord, suggestion: issue.suggestion } });
+    context.addIssue({
+      code: 'custom',
+      path: issue.path,
+      message: issue.message,
+      params: { unknownWord: issue.unknownWord, suggestion: issue.suggestion },
+    });
   }
   return z.NEVER;
 });
@@ -43,10 +59,20 @@ export interface EluentInputIssue {
 
 export type NormalisedEluent = { ok: true; eluent: Eluent } | { ok: false; issues: EluentInputIssue[] };
 
-function keyOf<T extends { key: string }>(resolution: Resolution<T>, kind: string, path: (string | number)[], issues: EluentInputIssue[]): string {
+function keyOf<T extends { key: string }>(
+  resolution: Resolution<T>,
+  kind: string,
+  path: (string | number)[],
+  issues: EluentInputIssue[],
+): string {
   if (resolution.ok) return resolution.value.key;
   const hint = resolution.suggestion ? ` Did you mean "${resolution.suggestion}"?` : '';
-  issues.push({ path, message: `Unknown ${kind} "${resolution.input}".${hint}`, unknownWord: resolution.input, ...(resolution.suggestion ? { suggestion: resolution.suggestion } : {}) });
+  issues.push({
+    path,
+    message: `Unknown ${kind} "${resolution.input}".${hint}`,
+    unknownWord: resolution.input,
+    ...(resolution.suggestion ? { suggestion: resolution.suggestion } : {}),
+  });
   return resolution.input;
 }
 
@@ -62,7 +88,10 @@ export function normaliseEluentInput(input: z.output<typeof eluentInputSchema>):
   }
   const issues: EluentInputIssue[] = [];
   const resolveParts = (parts: { solvent: string; parts: number }[], path: (string | number)[]) =>
-    parts.map((part, index) => ({ solvent: keyOf(resolveSolvent(part.solvent), 'solvent', [...path, index, 'solvent'], issues), parts: part.parts }));
+    parts.map((part, index) => ({
+      solvent: keyOf(resolveSolvent(part.solvent), 'solvent', [...path, index, 'solvent'], issues),
+      parts: part.parts,
+    }));
   const candidate = {
     components: resolveParts(input.components, ['components']),
     additives: input.additives.map((item, index) => ({
@@ -70,7 +99,10 @@ export function normaliseEluentInput(input: z.output<typeof eluentInputSchema>):
       percent: item.percent,
     })),
     mode: input.mode ?? (input.steps.length > 0 ? 'gradient' : 'isocratic'),
-    steps: input.steps.map((step, index) => ({ components: resolveParts(step.components, ['steps', index, 'components']), columnVolumes: step.columnVolumes })),
+    steps: input.steps.map((step, index) => ({
+      components: resolveParts(step.components, ['steps', index, 'components']),
+      columnVolumes: step.columnVolumes,
+    })),
   };
   if (issues.length > 0) return { ok: false, issues };
   return validated(candidate);
@@ -79,5 +111,11 @@ export function normaliseEluentInput(input: z.output<typeof eluentInputSchema>):
 function validated(candidate: unknown): NormalisedEluent {
   const result = eluentSchema.safeParse(candidate);
   if (result.success) return { ok: true, eluent: result.data };
-  return { ok: false, issues: result.error.issues.map((issue) => ({ path: issue.path.map((part) => (typeof part === 'symbol' ? String(part) : part)), message: issue.message })) };
+  return {
+    ok: false,
+    issues: result.error.issues.map((issue) => ({
+      path: issue.path.map((part) => (typeof part === 'symbol' ? String(part) : part)),
+      message: issue.message,
+    })),
+  };
 }

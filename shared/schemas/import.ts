@@ -6,21 +6,60 @@ import { solventKeys } from '../catalogue/solvents';
  * (`solvent:<catalogue key>`: volume fraction, % or parts, as in the open TLC dataset) or be ignored.
  */
 export const importFields = [
-  'name', 'structure', 'phase', 'eluent', 'additive', 'rf', 'rfStartingMaterial', 'rfOther', 'stain',
-  'technique', 'outcome', 'outcomeReason', 'notes', 'notebook', 'yield', 'columnDiameter', 'cartridge',
-  'silica', 'sampleMass', 'loadMethod', 'fractionSize', 'fractionsPooled', 'date', 'author', 'recordId',
+  'name',
+  'structure',
+  'phase',
+  'eluent',
+  'additive',
+  'rf',
+  'rfStartingMaterial',
+  'rfOther',
+  'stain',
+  'technique',
+  'outcome',
+  'outcomeReason',
+  'notes',
+  'notebook',
+  'yield',
+  'columnDiameter',
+  'cartridge',
+  'silica',
+  'sampleMass',
+  'loadMethod',
+  'fractionSize',
+  'fractionsPooled',
+  'date',
+  'author',
+  'recordId',
 ] as const;
 export type ImportField = (typeof importFields)[number];
 
 export const importFieldLabels: Record<ImportField, string> = {
-  name: 'compound name', structure: 'structure (SMILES or molfile)', phase: 'stationary phase', eluent: 'eluent',
-  additive: 'additive (% v/v)', rf: 'Rf of the target', rfStartingMaterial: 'Rf of the starting material',
-  rfOther: 'Rf of a by-product', stain: 'visualisation', technique: 'technique', outcome: 'outcome',
-  outcomeReason: 'outcome reason', notes: 'notes', notebook: 'notebook reference', yield: 'yield (%)',
-  columnDiameter: 'column diameter (mm)', cartridge: 'cartridge size', silica: 'silica (g)', sampleMass: 'sample (mg)',
-  loadMethod: 'load (dry / liquid)', fractionSize: 'fraction size (mL)', fractionsPooled: 'fractions pooled',
-  date: 'date (the record\'s date)', author: 'person (a member, else "recorded by")',
-  recordId: 'record id (from this app\'s export)',
+  name: 'compound name',
+  structure: 'structure (SMILES or molfile)',
+  phase: 'stationary phase',
+  eluent: 'eluent',
+  additive: 'additive (% v/v)',
+  rf: 'Rf of the target',
+  rfStartingMaterial: 'Rf of the starting material',
+  rfOther: 'Rf of a by-product',
+  stain: 'visualisation',
+  technique: 'technique',
+  outcome: 'outcome',
+  outcomeReason: 'outcome reason',
+  notes: 'notes',
+  notebook: 'notebook reference',
+  yield: 'yield (%)',
+  columnDiameter: 'column diameter (mm)',
+  cartridge: 'cartridge size',
+  silica: 'silica (g)',
+  sampleMass: 'sample (mg)',
+  loadMethod: 'load (dry / liquid)',
+  fractionSize: 'fraction size (mL)',
+  fractionsPooled: 'fractions pooled',
+  date: "date (the record's date)",
+  author: 'person (a member, else "recorded by")',
+  recordId: "record id (from this app's export)",
 };
 
 /** Fields that several columns may feed (their texts are joined); every other field takes one column. */
@@ -46,7 +85,11 @@ export const importMappingSchema = z
       if (target === IGNORE_COLUMN || repeatableImportFields.includes(target as ImportField)) continue;
       const other = seen.get(target);
       if (other !== undefined) {
-        context.addIssue({ code: 'custom', path: [header], message: `Columns "${other}" and "${header}" both map to ${target}.` });
+        context.addIssue({
+          code: 'custom',
+          path: [header],
+          message: `Columns "${other}" and "${header}" both map to ${target}.`,
+        });
       }
       seen.set(target, header);
     }
@@ -68,7 +111,10 @@ export const rowResults = ['accepted', 'rejected', 'duplicate'] as const;
 
 /** Query of `POST /api/imports`: `dryRun=1` previews the first `previewRows` rows and writes nothing. */
 export const importUploadQuerySchema = z.object({
-  dryRun: z.enum(['0', '1', 'true', 'false']).optional().transform((value) => value === '1' || value === 'true'),
+  dryRun: z
+    .enum(['0', '1', 'true', 'false'])
+    .optional()
+    .transform((value) => value === '1' || value === 'true'),
   previewRows: z.coerce.number().int().min(1).max(200).default(20),
   /** Milliseconds to wait for a short import to finish before answering 202 with its progress. */
   wait: z.coerce.number().int().min(0).max(10_000).default(3_000),
@@ -85,7 +131,13 @@ export const importRowResultSchema = z.object({
   warnings: z.array(z.string()).default([]),
   values: z.record(z.string(), z.string()),
   record: z
-    .object({ name: z.string().nullable(), smiles: z.string().nullable(), eluent: z.string(), rf: z.number().nullable(), phase: z.string() })
+    .object({
+      name: z.string().nullable(),
+      smiles: z.string().nullable(),
+      eluent: z.string(),
+      rf: z.number().nullable(),
+      phase: z.string(),
+    })
     .nullable(),
 });
 export type ImportRowResult = z.infer<typeof importRowResultSchema>;

@@ -13,13 +13,40 @@ const words = new Set(commonPasswordWords);
 
 /** Keyboard rows and columns (QWERTY, AZERTY, QWERTZ) and plain sequences; read in both directions. */
 const runs = [
-  '`1234567890-=', 'qwertyuiop[]', "asdfghjkl;'", 'zxcvbnm,./', 'azertyuiop', 'qsdfghjklm', 'wxcvbn', 'qwertzuiop',
-  'yxcvbnm', '1qaz2wsx3edc4rfv5tgb6yhn7ujm8ik,9ol.0p;/', 'zaq12wsxcde34rfvbgt56yhnmju78ik,9ol.0p;/',
-  'q1w2e3r4t5y6u7i8o9p0', '1q2w3e4r5t6y7u8i9o0p', 'qazwsxedcrfvtgbyhnujmikolp', 'qweasdzxc', 'qwerasdfzxcv',
-  'abcdefghijklmnopqrstuvwxyz', '0123456789012345678901234567890', '11223344556677889900',
+  '`1234567890-=',
+  'qwertyuiop[]',
+  "asdfghjkl;'",
+  'zxcvbnm,./',
+  'azertyuiop',
+  'qsdfghjklm',
+  'wxcvbn',
+  'qwertzuiop',
+  'yxcvbnm',
+  '1qaz2wsx3edc4rfv5tgb6yhn7ujm8ik,9ol.0p;/',
+  'zaq12wsxcde34rfvbgt56yhnmju78ik,9ol.0p;/',
+  'q1w2e3r4t5y6u7i8o9p0',
+  '1q2w3e4r5t6y7u8i9o0p',
+  'qazwsxedcrfvtgbyhnujmikolp',
+  'qweasdzxc',
+  'qwerasdfzxcv',
+  'abcdefghijklmnopqrstuvwxyz',
+  '0123456789012345678901234567890',
+  '11223344556677889900',
 ].flatMap((r) => [r, [...r].reverse().join('')]);
 
-const LEET: Record<string, string> = { '0': 'o', '3': 'e', '4': 'a', '5': 's', '7': 't', '8': 'b', '9': 'g', '@': 'a', $: 's', '!': 'i', '|': 'l' };
+const LEET: Record<string, string> = {
+  '0': 'o',
+  '3': 'e',
+  '4': 'a',
+  '5': 's',
+  '7': 't',
+  '8': 'b',
+  '9': 'g',
+  '@': 'a',
+  $: 's',
+  '!': 'i',
+  '|': 'l',
+};
 
 function deLeet(s: string): string[] {
   const base = [...s].map((c) => LEET[c] ?? c).join('');
@@ -28,7 +55,8 @@ function deLeet(s: string): string[] {
 
 const isFiller = (c: string) => !/\p{L}/u.test(c);
 const isRun = (s: string) => s.length >= 3 && runs.some((r) => r.includes(s));
-const isWord = (s: string, extra: Set<string>) => s.length >= 3 && [s, ...deLeet(s)].some((w) => words.has(w) || extra.has(w));
+const isWord = (s: string, extra: Set<string>) =>
+  s.length >= 3 && [s, ...deLeet(s)].some((w) => words.has(w) || extra.has(w));
 
 /**
  * True when the password is nothing but keyboard runs, sequences, digits and symbols, plus at most one
@@ -38,7 +66,10 @@ const isWord = (s: string, extra: Set<string>) => s.length >= 3 && [s, ...deLeet
 function onlyPredictableParts(pw: string, extra: Set<string>): boolean {
   const n = pw.length;
   // reach[i][w][m]: prefix of length i is covered, w = a word was used, m = a run or word was used.
-  const reach = Array.from({ length: n + 1 }, () => [[false, false], [false, false]]);
+  const reach = Array.from({ length: n + 1 }, () => [
+    [false, false],
+    [false, false],
+  ]);
   reach[0][0][0] = true;
   for (let i = 0; i < n; i++) {
     const spans: { j: number; run: boolean; word: boolean }[] = [];

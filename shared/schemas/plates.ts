@@ -24,7 +24,11 @@ export const plateReadSpotSchema = z.object({
 });
 export type PlateReadSpot = z.infer<typeof plateReadSpotSchema>;
 
-export const plateReadLaneSchema = z.object({ x: z.number(), label: z.string().optional(), spots: z.array(plateReadSpotSchema) });
+export const plateReadLaneSchema = z.object({
+  x: z.number(),
+  label: z.string().optional(),
+  spots: z.array(plateReadSpotSchema),
+});
 export type PlateReadLane = z.infer<typeof plateReadLaneSchema>;
 
 /** One plate: corners top-left, top-right, bottom-right, bottom-left; origin and front from the left edge to the right. */
@@ -48,7 +52,11 @@ export type PlateReading = z.infer<typeof plateReadingSchema>;
 /** What a lane holds, named by the chemist on the overlay. */
 export const annotationLaneRoles = ['starting_material', 'co_spot', 'mixture', 'fraction', 'other'] as const;
 export const annotationLaneRoleLabels: Record<(typeof annotationLaneRoles)[number], string> = {
-  starting_material: 'SM', co_spot: 'co-spot', mixture: 'RM', fraction: 'fraction', other: 'other',
+  starting_material: 'SM',
+  co_spot: 'co-spot',
+  mixture: 'RM',
+  fraction: 'fraction',
+  other: 'other',
 };
 export const annotationSpotRoles = ['target', 'starting_material', 'by_product', 'unknown'] as const;
 
@@ -56,21 +64,38 @@ const coordinate = z.number().finite().min(-100_000).max(100_000);
 const point = z.tuple([coordinate, coordinate]);
 
 export const plateAnnotationSchema = z.object({
-  plates: z.array(z.object({
-    corners: z.array(point).length(4),
-    origin: z.array(point).length(2),
-    front: z.array(point).length(2),
-    lanes: z.array(z.object({
-      x: coordinate,
-      label: z.string().trim().max(40).optional(),
-      role: z.enum(annotationLaneRoles).optional(),
-      fraction: z.number().int().min(0).max(10_000).optional(),
-      spots: z.array(z.object({
-        x: coordinate, y: coordinate, rf: z.number().min(-1).max(2), kind: z.enum(plateSpotKinds),
-        role: z.enum(annotationSpotRoles).optional(), rfLow: z.number().optional(), rfHigh: z.number().optional(),
-      })).max(40),
-    })).max(40),
-  })).max(12),
+  plates: z
+    .array(
+      z.object({
+        corners: z.array(point).length(4),
+        origin: z.array(point).length(2),
+        front: z.array(point).length(2),
+        lanes: z
+          .array(
+            z.object({
+              x: coordinate,
+              label: z.string().trim().max(40).optional(),
+              role: z.enum(annotationLaneRoles).optional(),
+              fraction: z.number().int().min(0).max(10_000).optional(),
+              spots: z
+                .array(
+                  z.object({
+                    x: coordinate,
+                    y: coordinate,
+                    rf: z.number().min(-1).max(2),
+                    kind: z.enum(plateSpotKinds),
+                    role: z.enum(annotationSpotRoles).optional(),
+                    rfLow: z.number().optional(),
+                    rfHigh: z.number().optional(),
+                  }),
+                )
+                .max(40),
+            }),
+          )
+          .max(40),
+      }),
+    )
+    .max(12),
   /** The proposed pool of a fractions plate and the monitoring sentences, as shown when saved. */
   pooling: z.string().max(500).optional(),
   monitoring: z.array(z.string().max(300)).max(12).optional(),

@@ -96,7 +96,9 @@ export const recordDtoSchema = recordListItemSchema.extend({
   column: columnDetailsDtoSchema.nullable(),
   notes: z.string().nullable(),
   photos: z.array(photoDtoSchema),
-  contributors: z.array(z.object({ id: z.number().int(), name: z.string(), role: z.enum(['author', 'editor', 'merged-from']) })),
+  contributors: z.array(
+    z.object({ id: z.number().int(), name: z.string(), role: z.enum(['author', 'editor', 'merged-from']) }),
+  ),
   mergedIntoId: z.number().int().nullable(),
   retiredReason: z.string().nullable(),
   retiredAt: z.string().nullable(),

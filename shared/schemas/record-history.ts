@@ -1,7 +1,17 @@
 import { z } from 'zod';
 
 /** What a revision did to a record. Curation and import write the last four. */
-export const revisionActions = ['create', 'update', 'photo-add', 'photo-remove', 'retire', 'restore', 'merge', 'unmerge', 'import'] as const;
+export const revisionActions = [
+  'create',
+  'update',
+  'photo-add',
+  'photo-remove',
+  'retire',
+  'restore',
+  'merge',
+  'unmerge',
+  'import',
+] as const;
 export type RevisionAction = (typeof revisionActions)[number];
 
 /** One field's change: its name in the record DTO (dotted for column details) and the values before and after. */

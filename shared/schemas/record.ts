@@ -15,7 +15,13 @@ export * from './record-parts';
 export * from './record-dto';
 export * from './record-history';
 
-const optionalText = (max: number) => z.string().trim().max(max).nullish().transform((value) => (value ? value : null));
+const optionalText = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max)
+    .nullish()
+    .transform((value) => (value ? value : null));
 
 /** Fields of a record other than its compound; every one optional in a PATCH. */
 const recordFields = z.object({
@@ -34,7 +40,10 @@ const recordFields = z.object({
   /** The day the plate was run (YYYY-MM-DD): not in the future (a day's grace for time zones), not before 1900. */
   runOn: z.iso
     .date('Give the date as YYYY-MM-DD.')
-    .refine((day) => day >= '1900-01-01' && Date.parse(`${day}T00:00:00Z`) <= Date.now() + 86_400_000, 'The plate cannot have been run in the future.')
+    .refine(
+      (day) => day >= '1900-01-01' && Date.parse(`${day}T00:00:00Z`) <= Date.now() + 86_400_000,
+      'The plate cannot have been run in the future.',
+    )
     .nullish()
     .transform((value) => value ?? null),
 });
@@ -42,7 +51,11 @@ const recordFields = z.object({
 /** Structure text (SMILES or molfile) or an existing compound's id; the chemistry engine checks the size and content. */
 const compoundReference = {
   // Not trimmed: a molfile's first (title) line may be blank and is significant.
-  structure: z.string().max(200_000).refine((s) => s.trim().length > 0, 'Give a structure (SMILES or molfile).').optional(),
+  structure: z
+    .string()
+    .max(200_000)
+    .refine((s) => s.trim().length > 0, 'Give a structure (SMILES or molfile).')
+    .optional(),
   compoundId: z.number().int().positive().optional(),
   /** The compound's name; kept as its name when it has none yet, otherwise added to its synonyms. */
   name: z.string().trim().min(1).max(200).optional(),
@@ -55,10 +68,18 @@ function checkRecord(record: RecordFieldsOut, context: z.RefinementCtx, creating
     context.addIssue({ code: 'custom', path: ['structure'], message: 'Give a structure or a compoundId, not both.' });
   }
   if (creating && record.structure === undefined && record.compoundId === undefined) {
-    context.addIssue({ code: 'custom', path: ['structure'], message: 'Give the compound: a structure (SMILES or molfile) or a compoundId.' });
+    context.addIssue({
+      code: 'custom',
+      path: ['structure'],
+      message: 'Give the compound: a structure (SMILES or molfile) or a compoundId.',
+    });
   }
   if (record.stationaryPhase === 'other' && !record.stationaryPhaseOther) {
-    context.addIssue({ code: 'custom', path: ['stationaryPhaseOther'], message: 'Name the stationary phase when choosing "other".' });
+    context.addIssue({
+      code: 'custom',
+      path: ['stationaryPhaseOther'],
+      message: 'Name the stationary phase when choosing "other".',
+    });
   }
   if (record.spots && record.spots.filter((spot) => spot.role === 'target').length > 1) {
     context.addIssue({ code: 'custom', path: ['spots'], message: 'Only one spot can be the target.' });
@@ -88,20 +109,43 @@ export const recordUpdateSchema = recordFields
 export type RecordUpdate = z.input<typeof recordUpdateSchema>;
 export type RecordUpdateParsed = z.output<typeof recordUpdateSchema>;
 
-export const recordSortKeys = ['createdAt', 'updatedAt', 'compound', 'technique', 'phase', 'strongPercent', 'targetRf', 'outcome', 'yieldPercent', 'author'] as const;
+export const recordSortKeys = [
+  'createdAt',
+  'updatedAt',
+  'compound',
+  'technique',
+  'phase',
+  'strongPercent',
+  'targetRf',
+  'outcome',
+  'yieldPercent',
+  'author',
+] as const;
 
 const listOf = <T extends z.ZodType>(item: T) =>
-  z.preprocess((value) => (value === undefined || value === '' ? undefined : typeof value === 'string' ? value.split(',') : value), z.array(item).max(20).optional());
+  z.preprocess(
+    (value) => (value === undefined || value === '' ? undefined : typeof value === 'string' ? value.split(',') : value),
+    z.array(item).max(20).optional(),
+  );
 
-const catalogueKey = (resolve: (input: string) => { ok: true; value: { key: string } } | { ok: false; suggestion: string | null }, kind: string) =>
-  z.string().trim().min(1).max(80).transform((input, context) => {
-    const found = resolve(input);
-    if (found.ok) return found.value.key;
-    context.addIssue(
-      { code: 'custom', message: `Unknown ${kind} "${input}".${found.suggestion ? ` Did you mean "${found.suggestion}"?` : ''}` },
-    );
-    return z.NEVER;
-  });
+const catalogueKey = (
+  resolve: (input: string) => { ok: true; value: { key: string } } | { ok: false; suggestion: string | null },
+  kind: string,
+) =>
+  z
+    .string()
+    .trim()
+    .min(1)
+    .max(80)
+    .transform((input, context) => {
+      const found = resolve(input);
+      if (found.ok) return found.value.key;
+      context.addIssue({
+        code: 'custom',
+        message: `Unknown ${kind} "${input}".${found.suggestion ? ` Did you mean "${found.suggestion}"?` : ''}`,
+      });
+      return z.NEVER;
+    });
 
 /** Query of `GET /api/records`: page, sort, order and filters (lists are comma-separated or repeated). */
 export const recordListQuerySchema = paginationQuerySchema.extend({
@@ -112,12 +156,20 @@ export const recordListQuerySchema = paginationQuerySchema.extend({
   class: z.string().trim().max(60).optional(),
   phase: listOf(catalogueKey(resolvePhase, 'stationary phase')),
   solvent: listOf(catalogueKey(resolveSolvent, 'solvent')),
-  stain: listOf(catalogueKey((input) => (input === 'other' ? { ok: true, value: { key: 'other' } } : resolveStain(input)), 'visualisation')),
+  stain: listOf(
+    catalogueKey(
+      (input) => (input === 'other' ? { ok: true, value: { key: 'other' } } : resolveStain(input)),
+      'visualisation',
+    ),
+  ),
   outcome: listOf(z.enum(outcomes)),
   technique: listOf(z.enum(techniques)),
   author: z.coerce.number().int().positive().optional(),
   status: z.enum(['active', 'merged', 'retired', 'all']).default('active'),
-  demo: z.enum(['true', 'false']).transform((value) => value === 'true').optional(),
+  demo: z
+    .enum(['true', 'false'])
+    .transform((value) => value === 'true')
+    .optional(),
   from: z.iso.date().optional(),
   to: z.iso.date().optional(),
 });

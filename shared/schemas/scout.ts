@@ -3,12 +3,20 @@ import { resolveSolvent } from '../catalogue/lookup';
 import { phaseNameSchema } from './record-parts';
 
 /** A solvent by catalogue key, name or abbreviation ("EtOAc", "hexane"); resolves to the key. */
-export const solventNameSchema = z.string().trim().min(1).max(60).transform((input, context) => {
-  const found = resolveSolvent(input);
-  if (found.ok) return found.value.key;
-  context.addIssue({ code: 'custom', message: `Unknown solvent "${input}".${found.suggestion ? ` Did you mean "${found.suggestion}"?` : ''}` });
-  return z.NEVER;
-});
+export const solventNameSchema = z
+  .string()
+  .trim()
+  .min(1)
+  .max(60)
+  .transform((input, context) => {
+    const found = resolveSolvent(input);
+    if (found.ok) return found.value.key;
+    context.addIssue({
+      code: 'custom',
+      message: `Unknown solvent "${input}".${found.suggestion ? ` Did you mean "${found.suggestion}"?` : ''}`,
+    });
+    return z.NEVER;
+  });
 
 /** Target Rf bounds for Scout: flash columns work best with the target near Rf 0.2–0.35 (Still 1978; common practice). */
 export const scoutTargetRange = [0.15, 0.45] as const;
@@ -59,7 +67,12 @@ export const neighbourSchema = z.object({
 });
 export type Neighbour = z.infer<typeof neighbourSchema>;
 
-export const curvePointSchema = z.object({ strongPercent: z.number(), rf: z.number(), lower: z.number(), upper: z.number() });
+export const curvePointSchema = z.object({
+  strongPercent: z.number(),
+  rf: z.number(),
+  lower: z.number(),
+  upper: z.number(),
+});
 
 export const suggestionSchema = z.object({
   phase: z.object({ key: z.string(), name: z.string(), why: z.string() }),
@@ -147,8 +160,16 @@ export const cautionSchema = z.object({ key: z.string(), title: z.string(), text
 
 export const scoutResultSchema = z.object({
   query: z.object({
-    canonicalSmiles: z.string(), formula: z.string(), mw: z.number(), clogp: z.number(), tpsa: z.number(), hbd: z.number(), hba: z.number(),
-    classes: z.array(z.string()), svg: z.string(), existingCompoundId: z.number().int().nullable(),
+    canonicalSmiles: z.string(),
+    formula: z.string(),
+    mw: z.number(),
+    clogp: z.number(),
+    tpsa: z.number(),
+    hbd: z.number(),
+    hba: z.number(),
+    classes: z.array(z.string()),
+    svg: z.string(),
+    existingCompoundId: z.number().int().nullable(),
   }),
   targetRf: z.number(),
   knowledge: z.object({ compounds: z.number().int(), measurements: z.number().int() }),

@@ -36,9 +36,18 @@ export const searchFiltersSchema = z.object({
 const structureSearchFields = {
   mode: z.enum(searchModes).default('text'),
   /** Words to find in names, synonyms, class names, notes, notebook references (typos tolerated). */
-  q: z.string().trim().max(200).optional().transform((value) => value || undefined),
+  q: z
+    .string()
+    .trim()
+    .max(200)
+    .optional()
+    .transform((value) => value || undefined),
   /** SMILES or molfile for `similar` and `substructure` (the chemistry engine checks it). */
-  structure: z.string().max(20_000).optional().transform((value) => (value?.trim() ? value : undefined)),
+  structure: z
+    .string()
+    .max(20_000)
+    .optional()
+    .transform((value) => (value?.trim() ? value : undefined)),
   /** Least Tanimoto similarity (0–1) of a similarity search. */
   threshold: z.coerce.number().min(0).max(1).default(DEFAULT_SIMILARITY_THRESHOLD),
   /** Most compounds a structure search considers (the best by similarity; the first found by substructure). */
@@ -48,7 +57,11 @@ const structureSearchFields = {
 
 function needsStructure(query: { mode: SearchMode; structure?: string }, context: z.RefinementCtx) {
   if (query.mode !== 'text' && !query.structure) {
-    context.addIssue({ code: 'custom', path: ['structure'], message: `Give a structure (SMILES or molfile) for a ${query.mode === 'similar' ? 'similarity' : 'substructure'} search.` });
+    context.addIssue({
+      code: 'custom',
+      path: ['structure'],
+      message: `Give a structure (SMILES or molfile) for a ${query.mode === 'similar' ? 'similarity' : 'substructure'} search.`,
+    });
   }
 }
 
@@ -60,7 +73,9 @@ export type SearchQuery = z.input<typeof searchQuerySchema>;
 export type SearchQueryParsed = z.output<typeof searchQuerySchema>;
 
 /** Query of `GET /api/export.csv` and `GET /api/export.sdf`: the search without pages (every matching record). */
-export const exportQuerySchema = z.object({ ...searchFiltersSchema.shape, ...structureSearchFields }).superRefine(needsStructure);
+export const exportQuerySchema = z
+  .object({ ...searchFiltersSchema.shape, ...structureSearchFields })
+  .superRefine(needsStructure);
 export type ExportQueryParsed = z.output<typeof exportQuerySchema>;
 
 /** One set of conditions as a result shows it: the eluent, the target's Rf, how it was seen, how it went. */

@@ -13,7 +13,13 @@ export const columnPlanInputSchema = z.object({
 export type ColumnPlanInput = z.input<typeof columnPlanInputSchema>;
 
 const flagSchema = z.object({ code: z.string(), message: z.string() });
-const stillRowSchema = z.object({ diameterMm: z.number(), eluentMl: z.number(), loadMgAtDeltaRf02: z.number(), loadMgAtDeltaRf01: z.number(), fractionMl: z.number() });
+const stillRowSchema = z.object({
+  diameterMm: z.number(),
+  eluentMl: z.number(),
+  loadMgAtDeltaRf02: z.number(),
+  loadMgAtDeltaRf01: z.number(),
+  fractionMl: z.number(),
+});
 
 /** The plan of shared/domain/column-plan.ts with the table it was read from. Units: mm, g, mL, CV. */
 export const columnPlanResultSchema = z.object({
@@ -39,7 +45,10 @@ export type ColumnPlanResult = z.infer<typeof columnPlanResultSchema>;
 /** One side of the target pair: a solvent name, or a fixed blend as parts (a name alone means one part). */
 const sideSchema = z.preprocess(
   (value) => (typeof value === 'string' ? [{ solvent: value, parts: 1 }] : value),
-  z.array(z.object({ solvent: solventNameSchema, parts: z.number().positive() })).min(1).max(3),
+  z
+    .array(z.object({ solvent: solventNameSchema, parts: z.number().positive() }))
+    .min(1)
+    .max(3),
 );
 
 /**
@@ -54,13 +63,23 @@ export const translateEluentInputSchema = z.object({
 export type TranslateEluentInput = z.input<typeof translateEluentInputSchema>;
 
 const partSchema = z.object({ solvent: z.string(), parts: z.number() });
-const hazardSchema = z.object({ solvent: z.string(), name: z.string(), hazards: z.array(z.string()), hazardNote: z.string() });
+const hazardSchema = z.object({
+  solvent: z.string(),
+  name: z.string(),
+  hazards: z.array(z.string()),
+  hazardNote: z.string(),
+});
 const sourcedSchema = z.object({ value: z.number(), provenance: z.string(), source: z.string() });
 
 export const translateEluentResultSchema = z.object({
   adsorbent: z.enum(['silica', 'alumina']),
   source: z.object({ components: z.array(partSchema), epsilon: z.number(), description: z.string() }),
-  target: z.object({ components: z.array(partSchema), strongVolumeFraction: z.number(), epsilon: z.number(), description: z.string() }),
+  target: z.object({
+    components: z.array(partSchema),
+    strongVolumeFraction: z.number(),
+    epsilon: z.number(),
+    description: z.string(),
+  }),
   reach: z.enum(['within', 'below-range', 'above-range']),
   targetRange: z.tuple([z.number(), z.number()]),
   warnings: z.array(z.string()),
@@ -68,7 +87,13 @@ export const translateEluentResultSchema = z.object({
   values: z.array(z.object({ solvent: z.string(), quantity: z.string(), value: sourcedSchema })),
   equation: z.string(),
   /** Replacements common practice uses for the source's solvents (solvent catalogue). */
-  greener: z.array(z.object({ solvent: z.string(), name: z.string(), alternatives: z.array(z.object({ solvents: z.array(partSchema), note: z.string() })) })),
+  greener: z.array(
+    z.object({
+      solvent: z.string(),
+      name: z.string(),
+      alternatives: z.array(z.object({ solvents: z.array(partSchema), note: z.string() })),
+    }),
+  ),
   /** Additives of the source eluent, carried over unchanged. */
   additives: z.array(z.object({ additive: z.string(), percent: z.number() })),
 });

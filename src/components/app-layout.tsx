@@ -38,7 +38,8 @@ export function AppLayout() {
                 key={n.to}
                 to={n.to}
                 className={({ isActive }) =>
-                  `px-2 py-1 rounded-plate ${isActive ? 'bg-front-light text-front-dark font-medium' : 'text-ink-soft hover:text-ink hover:bg-plate'}`
+                  `px-2 py-1 rounded-plate ` +
+                  `${isActive ? 'bg-front-light text-front-dark font-medium' : 'text-ink-soft hover:text-ink hover:bg-plate'}`
                 }
               >
                 {n.label}

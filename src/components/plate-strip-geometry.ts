@@ -20,8 +20,32 @@ export interface StripGeometry {
 }
 
 export const stripSizes: Record<'sm' | 'lg', StripGeometry> = {
-  sm: { laneWidth: 18, figureWidth: 0, gap: 5, axisWidth: 0, plateHeight: 60, frontY: 6, originY: 53, labelHeight: 0, spotRx: 3.4, spotRy: 2.7, fontSize: 0 },
-  lg: { laneWidth: 40, figureWidth: 34, gap: 10, axisWidth: 26, plateHeight: 220, frontY: 16, originY: 198, labelHeight: 34, spotRx: 7, spotRy: 5, fontSize: 10 },
+  sm: {
+    laneWidth: 18,
+    figureWidth: 0,
+    gap: 5,
+    axisWidth: 0,
+    plateHeight: 60,
+    frontY: 6,
+    originY: 53,
+    labelHeight: 0,
+    spotRx: 3.4,
+    spotRy: 2.7,
+    fontSize: 0,
+  },
+  lg: {
+    laneWidth: 40,
+    figureWidth: 34,
+    gap: 10,
+    axisWidth: 26,
+    plateHeight: 220,
+    frontY: 16,
+    originY: 198,
+    labelHeight: 34,
+    spotRx: 7,
+    spotRy: 5,
+    fontSize: 10,
+  },
 };
 
 /** Rf is distance of the spot over distance of the front, both from the origin; clamped to 0–1 for drawing. */
@@ -60,7 +84,8 @@ export function wrapLabel(label: string, maxChars: number): string[] {
   if (label.length <= maxChars) return [label];
   const words = label.split(' ');
   let first = '';
-  while (words.length && (first + ' ' + words[0]).trim().length <= maxChars) first = (first + ' ' + words.shift()).trim();
+  while (words.length && (first + ' ' + words[0]).trim().length <= maxChars)
+    first = (first + ' ' + words.shift()).trim();
   if (!first) first = words.shift() ?? '';
   const rest = words.join(' ');
   return rest ? [first, rest.length > maxChars ? rest.slice(0, maxChars - 1) + '…' : rest] : [first];

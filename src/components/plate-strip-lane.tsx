@@ -18,8 +18,24 @@ export function PlateLaneDrawing({ lane, x, g }: { lane: PlateLane; x: number; g
   return (
     <g>
       <rect x={x} y={0.5} width={g.laneWidth} height={g.plateHeight - 1} rx={2} className="fill-plate stroke-line" />
-      <line data-part="front" x1={x + 2} x2={x + g.laneWidth - 2} y1={g.frontY} y2={g.frontY} className="stroke-front" strokeWidth={1.2} />
-      <line data-part="origin" x1={x + 2} x2={x + g.laneWidth - 2} y1={g.originY} y2={g.originY} className="stroke-ink-soft" strokeDasharray="2 2" />
+      <line
+        data-part="front"
+        x1={x + 2}
+        x2={x + g.laneWidth - 2}
+        y1={g.frontY}
+        y2={g.frontY}
+        className="stroke-front"
+        strokeWidth={1.2}
+      />
+      <line
+        data-part="origin"
+        x1={x + 2}
+        x2={x + g.laneWidth - 2}
+        y1={g.originY}
+        y2={g.originY}
+        className="stroke-ink-soft"
+        strokeDasharray="2 2"
+      />
       {p && p.low !== undefined && p.high !== undefined && (
         <rect
           data-part="interval"
@@ -61,7 +77,15 @@ export function PlateLaneDrawing({ lane, x, g }: { lane: PlateLane; x: number; g
       ))}
       {p && (
         <g data-part="predicted" data-rf={p.rf}>
-          <ellipse cx={spotX} cy={spotY(p.rf, g)} rx={g.spotRx + 2} ry={g.spotRy + 2} fill="none" className="stroke-spot-dark" strokeDasharray="2 1.5" />
+          <ellipse
+            cx={spotX}
+            cy={spotY(p.rf, g)}
+            rx={g.spotRx + 2}
+            ry={g.spotRy + 2}
+            fill="none"
+            className="stroke-spot-dark"
+            strokeDasharray="2 1.5"
+          />
           <ellipse cx={spotX} cy={spotY(p.rf, g)} rx={g.spotRx} ry={g.spotRy} className="fill-spot" opacity={0.85} />
         </g>
       )}
@@ -86,14 +110,24 @@ export function PlateLaneDrawing({ lane, x, g }: { lane: PlateLane; x: number; g
 function laneFigures(lane: PlateLane, g: StripGeometry) {
   const items = lane.spots.map((s) => ({ rf: s.rf, text: s.rf.toFixed(2), strong: s.role === 'target' }));
   if (lane.predicted) items.push({ rf: lane.predicted.rf, text: `≈${lane.predicted.rf.toFixed(2)}`, strong: true });
-  const ys = spreadLabels(items.map((f) => spotY(f.rf, g)), g.fontSize + 1);
+  const ys = spreadLabels(
+    items.map((f) => spotY(f.rf, g)),
+    g.fontSize + 1,
+  );
   return items.map((f, i) => ({ ...f, y: ys[i] }));
 }
 
 function LaneLabel({ label, x, g }: { label: string; x: number; g: StripGeometry }) {
   const lines = wrapLabel(label, Math.floor((g.laneWidth + g.figureWidth) / (g.fontSize * 0.62)));
   return (
-    <text x={x} y={g.plateHeight + g.fontSize + 4} fontSize={g.fontSize} className="fill-ink" fontFamily="IBM Plex Mono, monospace" aria-hidden="true">
+    <text
+      x={x}
+      y={g.plateHeight + g.fontSize + 4}
+      fontSize={g.fontSize}
+      className="fill-ink"
+      fontFamily="IBM Plex Mono, monospace"
+      aria-hidden="true"
+    >
       <title>{label}</title>
       {lines.map((line, i) => (
         <tspan key={i} x={x} dy={i === 0 ? 0 : g.fontSize + 2}>

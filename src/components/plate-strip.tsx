@@ -13,7 +13,12 @@ interface PlateStripProps {
   className?: string;
 }
 
-const roleWords: Record<SpotRole, string> = { target: 'target', starting_material: 'starting material', by_product: 'by-product', unknown: 'unknown spot' };
+const roleWords: Record<SpotRole, string> = {
+  target: 'target',
+  starting_material: 'starting material',
+  by_product: 'by-product',
+  unknown: 'unknown spot',
+};
 const rf2 = (rf: number) => rf.toFixed(2);
 
 /** One sentence per lane listing every Rf, for screen readers and the hover title. */

@@ -25,9 +25,13 @@ export function StructureImage({ compoundId, name, size = 'md', link = true, cla
   const [failed, setFailed] = useState(false);
   const label = name ?? `compound ${compoundId}`;
   const picture = (
-    <span className={`relative block aspect-[4/3] overflow-hidden rounded-plate border border-line bg-surface ${boxes[size]} ${className}`}>
+    <span
+      className={`relative block aspect-[4/3] overflow-hidden rounded-plate border border-line bg-surface ${boxes[size]} ${className}`}
+    >
       {failed ? (
-        <span className="absolute inset-0 grid place-items-center px-2 text-center text-2xs text-ink-soft">No depiction for {label}</span>
+        <span className="absolute inset-0 grid place-items-center px-2 text-center text-2xs text-ink-soft">
+          No depiction for {label}
+        </span>
       ) : (
         <img
           src={`/api/compounds/${compoundId}/svg`}
@@ -44,7 +48,11 @@ export function StructureImage({ compoundId, name, size = 'md', link = true, cla
   );
   if (!link) return picture;
   return (
-    <Link to={`/compounds/${compoundId}`} className="inline-block rounded-plate hover:opacity-90" title={`Open ${label}`}>
+    <Link
+      to={`/compounds/${compoundId}`}
+      className="inline-block rounded-plate hover:opacity-90"
+      title={`Open ${label}`}
+    >
       {picture}
     </Link>
   );

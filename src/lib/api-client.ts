@@ -41,7 +41,10 @@ async function send(path: string, opts: Options, retried = false): Promise<Respo
     body: opts.form ?? (opts.body !== undefined ? JSON.stringify(opts.body) : undefined),
   });
   if (res.status === 403 && !retried && method !== 'GET') {
-    const peek = (await res.clone().json().catch(() => null)) as { error?: { code?: string } } | null;
+    const peek = (await res
+      .clone()
+      .json()
+      .catch(() => null)) as { error?: { code?: string } } | null;
     if (peek?.error?.code === 'csrf') {
       await fetchCsrf();
       return send(path, opts, true);
@@ -58,7 +61,12 @@ export async function api<T = unknown>(path: string, opts: Options = {}, schema?
   const body = text ? JSON.parse(text) : undefined;
   if (!res.ok) {
     const err = body?.error ?? {};
-    throw new ApiRequestError(res.status, err.code ?? 'http_' + res.status, err.message ?? res.statusText, Array.isArray(err.details) ? err.details : []);
+    throw new ApiRequestError(
+      res.status,
+      err.code ?? 'http_' + res.status,
+      err.message ?? res.statusText,
+      Array.isArray(err.details) ? err.details : [],
+    );
   }
   return schema ? schema.parse(body) : (body as T);
 }

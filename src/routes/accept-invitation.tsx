@@ -37,17 +37,34 @@ export default function AcceptInvitationPage() {
   if (preview.isLoading) return <PageLoading />;
   const inv = preview.data;
   return (
-    <AuthCard title="Join your group’s Rfolio" footer={<Link to="/sign-in" className="inline-block min-h-6 py-0.5 text-front hover:underline">Already have an account? Sign in</Link>}>
+    <AuthCard
+      title="Join your group’s Rfolio"
+      footer={
+        <Link to="/sign-in" className="inline-block min-h-6 py-0.5 text-front hover:underline">
+          Already have an account? Sign in
+        </Link>
+      }
+    >
       {!inv ? (
         <FormAlert>{preview.error?.message ?? 'This invitation could not be read.'}</FormAlert>
       ) : (
         <form onSubmit={submit} noValidate className="space-y-4">
           <p className="text-sm text-ink-soft">
-            {inv.inviterName ?? 'Your group'} invited <span className="font-medium text-ink">{inv.email}</span> to join as{' '}
-            <span className="font-medium text-ink">{inv.role}</span>: {roleLine[inv.role]}.
+            {inv.inviterName ?? 'Your group'} invited <span className="font-medium text-ink">{inv.email}</span> to join
+            as <span className="font-medium text-ink">{inv.role}</span>: {roleLine[inv.role]}.
           </p>
-          <TextField label="Your name" autoComplete="name" required error={form.formState.errors.name?.message} {...form.register('name')} />
-          <NewPasswordField label="Choose a password" error={form.formState.errors.password?.message} {...form.register('password')} />
+          <TextField
+            label="Your name"
+            autoComplete="name"
+            required
+            error={form.formState.errors.name?.message}
+            {...form.register('name')}
+          />
+          <NewPasswordField
+            label="Choose a password"
+            error={form.formState.errors.password?.message}
+            {...form.register('password')}
+          />
           {formError && <FormAlert>{formError}</FormAlert>}
           <Button type="submit" variant="primary" className="w-full" disabled={accept.isPending}>
             {accept.isPending ? 'Joining…' : 'Join the group'}

@@ -15,8 +15,9 @@ export default function AccountPage() {
       <header>
         <h1 className="text-2xl font-semibold">Profile and password</h1>
         <p className="mt-1 text-sm text-ink-soft">
-          Signed in as <span className="font-medium text-ink">{user.email}</span> with the <span className="font-medium text-ink">{user.role}</span> role.
-          An admin of your group changes e-mail addresses and roles.
+          Signed in as <span className="font-medium text-ink">{user.email}</span> with the{' '}
+          <span className="font-medium text-ink">{user.role}</span> role. An admin of your group changes e-mail
+          addresses and roles.
         </p>
       </header>
       <Card title="Your name">

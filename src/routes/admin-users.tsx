@@ -34,7 +34,9 @@ export default function AdminUsersPage() {
         {users.isLoading || !me ? (
           <PageLoading label="Loading people…" />
         ) : users.error ? (
-          <p role="alert" className="text-failed">{users.error.message}</p>
+          <p role="alert" className="text-failed">
+            {users.error.message}
+          </p>
         ) : (
           <PeopleTable people={users.data!.items} meId={me.id} />
         )}

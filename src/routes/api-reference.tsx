@@ -34,7 +34,9 @@ export default function ApiReferencePage() {
             <code className="figure">Authorization: Bearer &lt;token&gt;</code>: no cookie and no CSRF token are needed.
             A token acts with your current role, or only reads when it is read-only.
           </p>
-          <pre className="figure overflow-x-auto rounded-plate bg-plate p-3 text-xs">{`curl -H "Authorization: Bearer $RFOLIO_TOKEN" ${window.location.origin}/api/export.csv`}</pre>
+          <pre className={'figure overflow-x-auto rounded-plate bg-plate ' + 'p-3 text-xs'}>
+            {`curl -H "Authorization: ` + `Bearer $RFOLIO_TOKEN" ${window.location.origin}/api/export.csv`}
+          </pre>
           <p>Every failure answers {'{ "error": { "code", "message", "details"? } }'}.</p>
         </div>
       </Card>

@@ -17,24 +17,39 @@ export default function CautionsPage() {
       </header>
       <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
         {Object.values(cautions).map((caution) => (
-          <Card key={caution.key} title={caution.title}><p className="text-sm">{caution.text}</p></Card>
+          <Card key={caution.key} title={caution.title}>
+            <p className="text-sm">{caution.text}</p>
+          </Card>
         ))}
       </div>
       <Card title="Solvents">
         <table className="w-full text-sm">
           <thead>
             <tr className="border-b border-line text-left text-xs text-ink-soft">
-              <th scope="col" className="py-1 pr-3 font-medium">Solvent</th>
-              <th scope="col" className="py-1 pr-3 font-medium">Hazards</th>
-              <th scope="col" className="py-1 font-medium">Greener alternative (common practice)</th>
+              <th scope="col" className="py-1 pr-3 font-medium">
+                Solvent
+              </th>
+              <th scope="col" className="py-1 pr-3 font-medium">
+                Hazards
+              </th>
+              <th scope="col" className="py-1 font-medium">
+                Greener alternative (common practice)
+              </th>
             </tr>
           </thead>
           <tbody>
             {solvents.map((solvent) => (
               <tr key={solvent.key} className="border-b border-line/60 align-top">
-                <th scope="row" className="py-1.5 pr-3 text-left font-medium">{solvent.name}</th>
-                <td className="py-1.5 pr-3">{words(solvent.hazards) || '—'}<p className="text-xs text-ink-soft">{solvent.hazardNote}</p></td>
-                <td className="py-1.5 text-xs">{solvent.greenerAlternatives.map((alternative) => alternative.note).join(' ') || '—'}</td>
+                <th scope="row" className="py-1.5 pr-3 text-left font-medium">
+                  {solvent.name}
+                </th>
+                <td className="py-1.5 pr-3">
+                  {words(solvent.hazards) || '—'}
+                  <p className="text-xs text-ink-soft">{solvent.hazardNote}</p>
+                </td>
+                <td className="py-1.5 text-xs">
+                  {solvent.greenerAlternatives.map((alternative) => alternative.note).join(' ') || '—'}
+                </td>
               </tr>
             ))}
           </tbody>
@@ -43,7 +58,10 @@ export default function CautionsPage() {
       <Card title="Stains and visualisation">
         <ul className="space-y-1 text-sm">
           {stains.map((stain) => (
-            <li key={stain.key}><strong>{stain.name}</strong>{stain.needsHeat ? ' (heat gun)' : ''}: {stain.preparationHazards}</li>
+            <li key={stain.key}>
+              <strong>{stain.name}</strong>
+              {stain.needsHeat ? ' (heat gun)' : ''}: {stain.preparationHazards}
+            </li>
           ))}
         </ul>
       </Card>

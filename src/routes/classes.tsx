@@ -9,7 +9,9 @@ export default function ClassesPage() {
   const [onlyRecorded, setOnlyRecorded] = useState(true);
   const items = useMemo(() => {
     const all = index.data?.items ?? [];
-    return (onlyRecorded ? all.filter((item) => item.recordCount > 0) : all).slice().sort((a, b) => b.recordCount - a.recordCount || a.name.localeCompare(b.name));
+    return (onlyRecorded ? all.filter((item) => item.recordCount > 0) : all)
+      .slice()
+      .sort((a, b) => b.recordCount - a.recordCount || a.name.localeCompare(b.name));
   }, [index.data, onlyRecorded]);
   return (
     <section className="space-y-4">
@@ -17,8 +19,8 @@ export default function ClassesPage() {
         <div>
           <h1 className="text-2xl font-semibold">Compound classes</h1>
           <p className="mt-1 max-w-3xl text-sm text-ink-soft">
-            Classes are found by substructure when a compound is stored; a compound can be in several. Open a class to see which eluents,
-            stains and additives worked for it.
+            Classes are found by substructure when a compound is stored; a compound can be in several. Open a class to
+            see which eluents, stains and additives worked for it.
           </p>
         </div>
         <label className="flex items-center gap-2 text-sm">
@@ -26,7 +28,15 @@ export default function ClassesPage() {
           Only classes with records
         </label>
       </header>
-      {index.isLoading ? <PageLoading label="Loading classes…" /> : index.error ? <p role="alert" className="text-failed">{index.error.message}</p> : <ClassTable classes={items} />}
+      {index.isLoading ? (
+        <PageLoading label="Loading classes…" />
+      ) : index.error ? (
+        <p role="alert" className="text-failed">
+          {index.error.message}
+        </p>
+      ) : (
+        <ClassTable classes={items} />
+      )}
     </section>
   );
 }

@@ -33,7 +33,10 @@ export default function ContributePage() {
               failed.push(`${file.name} (${(error as Error).message})`);
             }
           }
-          const notice = failed.length > 0 ? `Record saved, but these photos were not: ${failed.join('; ')}. Add them below.` : 'Record saved.';
+          const notice =
+            failed.length > 0
+              ? `Record saved, but these photos were not: ${failed.join('; ')}. Add them below.`
+              : 'Record saved.';
           navigate(`/records/${record.id}`, { state: { notice } });
         }}
       />

@@ -14,23 +14,31 @@ export default function CurationPage() {
       <header>
         <h1 className="text-2xl font-semibold">Curation queue</h1>
         <p className="mt-1 max-w-3xl text-sm text-ink-soft">
-          Suspected duplicates among active records. Same conditions: one compound, one stationary phase, the same solvents with the
-          strong solvent's share within {data ? data.rules.ratioRelativeTolerance * 100 : 5} % relative (every component for three or more),
-          and target Rf within {data?.rules.rfTolerance ?? 0.05}. Same structure: compounds identical once stereo is set aside, entered
-          under different names. A merge keeps every spot, photo, note, bookmark and contributor, and can be undone once.
+          Suspected duplicates among active records. Same conditions: one compound, one stationary phase, the same
+          solvents with the strong solvent's share within {data ? data.rules.ratioRelativeTolerance * 100 : 5} %
+          relative (every component for three or more), and target Rf within {data?.rules.rfTolerance ?? 0.05}. Same
+          structure: compounds identical once stereo is set aside, entered under different names. A merge keeps every
+          spot, photo, note, bookmark and contributor, and can be undone once.
         </p>
       </header>
       <section aria-labelledby="duplicates-heading" className="space-y-3">
         <h2 id="duplicates-heading" className="text-lg font-semibold">
           Suspected duplicates{data ? ` (${data.groups.length})` : ''}
-          {data && data.dismissedCount > 0 && <span className="ml-2 text-sm font-normal text-ink-soft">{data.dismissedCount} dismissed</span>}
+          {data && data.dismissedCount > 0 && (
+            <span className="ml-2 text-sm font-normal text-ink-soft">{data.dismissedCount} dismissed</span>
+          )}
         </h2>
         {duplicates.isLoading ? (
           <PageLoading label="Looking for duplicates…" />
         ) : duplicates.error ? (
-          <p role="alert" className="text-failed">{duplicates.error.message}</p>
+          <p role="alert" className="text-failed">
+            {duplicates.error.message}
+          </p>
         ) : data!.groups.length === 0 ? (
-          <EmptyState title="Nothing to review">No active records look like duplicates right now. New records and edits are checked each time this page opens.</EmptyState>
+          <EmptyState title="Nothing to review">
+            No active records look like duplicates right now. New records and edits are checked each time this page
+            opens.
+          </EmptyState>
         ) : (
           data!.groups.map((group) => <DuplicateGroupCard key={group.signature} group={group} />)
         )}

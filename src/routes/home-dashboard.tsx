@@ -21,24 +21,57 @@ export default function HomeDashboard({ name, firstSignIn }: { name: string; fir
   return (
     <section className="space-y-5">
       <header>
-        <h1 className="text-2xl font-semibold">{firstSignIn ? 'Welcome' : 'Welcome back'}, {name}</h1>
-        <p className="mt-1 text-sm text-ink-soft">What the group has purified lately, what you keep close, and a quick start for a new compound.</p>
+        <h1 className="text-2xl font-semibold">
+          {firstSignIn ? 'Welcome' : 'Welcome back'}, {name}
+        </h1>
+        <p className="mt-1 text-sm text-ink-soft">
+          What the group has purified lately, what you keep close, and a quick start for a new compound.
+        </p>
       </header>
-      <Card><QuickScout /></Card>
-      {overview.data ? <GrowthCounts overview={overview.data} /> : overview.error ? <p role="alert" className="text-failed">{overview.error.message}</p> : null}
+      <Card>
+        <QuickScout />
+      </Card>
+      {overview.data ? (
+        <GrowthCounts overview={overview.data} />
+      ) : overview.error ? (
+        <p role="alert" className="text-failed">
+          {overview.error.message}
+        </p>
+      ) : null}
       <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-        <Card title="New in the group" actions={<Link to="/records" className="inline-block min-h-6 py-0.5 text-front hover:underline">All records</Link>}>
+        <Card
+          title="New in the group"
+          actions={
+            <Link to="/records" className="inline-block min-h-6 py-0.5 text-front hover:underline">
+              All records
+            </Link>
+          }
+        >
           {latest.isLoading ? (
             <PageLoading label="Loading records…" />
           ) : latest.data && latest.data.items.length > 0 ? (
             <RecordRows records={latest.data.items} />
           ) : (
-            <EmptyState title="No records yet" action={<Link to="/contribute" className="text-front underline">Contribute the first</Link>}>
+            <EmptyState
+              title="No records yet"
+              action={
+                <Link to="/contribute" className="text-front underline">
+                  Contribute the first
+                </Link>
+              }
+            >
               The group’s purifications appear here as they are recorded.
             </EmptyState>
           )}
         </Card>
-        <Card title="My bookmarks" actions={<Link to="/bookmarks" className="inline-block min-h-6 py-0.5 text-front hover:underline">All bookmarks ({mine.length})</Link>}>
+        <Card
+          title="My bookmarks"
+          actions={
+            <Link to="/bookmarks" className="inline-block min-h-6 py-0.5 text-front hover:underline">
+              All bookmarks ({mine.length})
+            </Link>
+          }
+        >
           {bookmarks.isLoading ? (
             <PageLoading label="Loading bookmarks…" />
           ) : mine.length > 0 ? (

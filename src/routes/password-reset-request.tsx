@@ -13,13 +13,29 @@ export default function PasswordResetRequestPage() {
   const form = useForm<PasswordResetRequest>({ resolver: zodResolver(passwordResetRequestSchema) });
   const submit = form.handleSubmit((input) => request.mutate(input));
   return (
-    <AuthCard title="Forgot your password?" footer={<Link to="/sign-in" className="inline-block min-h-6 py-0.5 text-front hover:underline">Back to sign-in</Link>}>
+    <AuthCard
+      title="Forgot your password?"
+      footer={
+        <Link to="/sign-in" className="inline-block min-h-6 py-0.5 text-front hover:underline">
+          Back to sign-in
+        </Link>
+      }
+    >
       {request.isSuccess ? (
         <FormAlert tone="clean">{request.data.message}</FormAlert>
       ) : (
         <form onSubmit={submit} noValidate className="space-y-4">
-          <p className="text-sm text-ink-soft">Enter the e-mail you sign in with. We will send a link to choose a new password.</p>
-          <TextField label="E-mail" type="email" autoComplete="username" required error={form.formState.errors.email?.message} {...form.register('email')} />
+          <p className="text-sm text-ink-soft">
+            Enter the e-mail you sign in with. We will send a link to choose a new password.
+          </p>
+          <TextField
+            label="E-mail"
+            type="email"
+            autoComplete="username"
+            required
+            error={form.formState.errors.email?.message}
+            {...form.register('email')}
+          />
           {request.error && <FormAlert>{request.error.message}</FormAlert>}
           <Button type="submit" variant="primary" className="w-full" disabled={request.isPending}>
             {request.isPending ? 'Sending…' : 'Send the link'}

@@ -29,7 +29,14 @@ export default function PasswordResetPage() {
 
   if (preview.isLoading) return <PageLoading />;
   return (
-    <AuthCard title="Choose a new password" footer={<Link to="/password-reset" className="inline-block min-h-6 py-0.5 text-front hover:underline">Ask for a new link</Link>}>
+    <AuthCard
+      title="Choose a new password"
+      footer={
+        <Link to="/password-reset" className="inline-block min-h-6 py-0.5 text-front hover:underline">
+          Ask for a new link
+        </Link>
+      }
+    >
       {preview.error ? (
         <FormAlert>{preview.error.message}</FormAlert>
       ) : (

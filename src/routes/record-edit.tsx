@@ -12,17 +12,36 @@ export default function RecordEditPage() {
   const navigate = useNavigate();
   const { data: record, isLoading, error } = useRecord(id);
   const update = useUpdateRecord();
-  const schema = useMemo(() => editRecordFormSchema(record?.compound.canonicalSmiles ?? ''), [record?.compound.canonicalSmiles]);
+  const schema = useMemo(
+    () => editRecordFormSchema(record?.compound.canonicalSmiles ?? ''),
+    [record?.compound.canonicalSmiles],
+  );
   if (isLoading) return <PageLoading label="Loading the record…" />;
-  if (error || !record) return <p role="alert" className="text-failed">{error?.message ?? 'Record not found.'}</p>;
+  if (error || !record)
+    return (
+      <p role="alert" className="text-failed">
+        {error?.message ?? 'Record not found.'}
+      </p>
+    );
   if (!record.canEdit) {
-    return <p role="alert" className="rounded-plate border border-line bg-surface p-4">Only the record’s author, a curator or an admin may edit it. <Link className="text-front underline" to={`/records/${id}`}>Back to the record</Link></p>;
+    return (
+      <p role="alert" className="rounded-plate border border-line bg-surface p-4">
+        Only the record’s author, a curator or an admin may edit it.{' '}
+        <Link className="text-front underline" to={`/records/${id}`}>
+          Back to the record
+        </Link>
+      </p>
+    );
   }
   return (
     <section className="space-y-4">
       <header>
-        <h1 className="text-2xl font-semibold">Edit record <span className="figure">#{record.id}</span></h1>
-        <p className="mt-1 text-sm text-ink-soft">{record.compound.name ?? record.compound.canonicalSmiles} · every change is kept in the history.</p>
+        <h1 className="text-2xl font-semibold">
+          Edit record <span className="figure">#{record.id}</span>
+        </h1>
+        <p className="mt-1 text-sm text-ink-soft">
+          {record.compound.name ?? record.compound.canonicalSmiles} · every change is kept in the history.
+        </p>
       </header>
       <RecordForm
         defaultValues={recordToFormValues(record)}

@@ -27,30 +27,66 @@ export default function ScoutPage() {
       <header className="space-y-1">
         <h1 className="text-2xl font-semibold">Scout</h1>
         <p className="max-w-3xl text-sm text-ink-soft">
-          Starting conditions for a new molecule from the group’s recorded purifications: the nearest neighbours, a ratio for your target Rf, additives, stains and how sure the estimate is.
-          Scout estimates; run a TLC plate before the column.
+          Starting conditions for a new molecule from the group’s recorded purifications: the nearest neighbours, a
+          ratio for your target Rf, additives, stains and how sure the estimate is. Scout estimates; run a TLC plate
+          before the column.
         </p>
       </header>
-      <Card><ScoutForm key={handedOver} initialStructure={handedOver} onSubmit={(input) => scout.mutate(input)} busy={scout.isPending} /></Card>
-      {scout.error && <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-sm text-failed">{scout.error.message}</p>}
+      <Card>
+        <ScoutForm
+          key={handedOver}
+          initialStructure={handedOver}
+          onSubmit={(input) => scout.mutate(input)}
+          busy={scout.isPending}
+        />
+      </Card>
+      {scout.error && (
+        <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-sm text-failed">
+          {scout.error.message}
+        </p>
+      )}
       {!result && !scout.error && (
-        <EmptyState title="Nothing scouted yet">Draw or paste a structure (SMILES or molfile), pick the Rf you want and press “Scout conditions”.</EmptyState>
+        <EmptyState title="Nothing scouted yet">
+          Draw or paste a structure (SMILES or molfile), pick the Rf you want and press “Scout conditions”.
+        </EmptyState>
       )}
       {result && (
         <div className="space-y-4" data-testid="scout-result">
           <SuggestionHero result={result} />
-          {result.cautions.length > 0 && <HazardLine>{result.cautions.map((caution) => caution.title).join(' · ')}.</HazardLine>}
+          {result.cautions.length > 0 && (
+            <HazardLine>{result.cautions.map((caution) => caution.title).join(' · ')}.</HazardLine>
+          )}
           <div className="grid gap-4 lg:grid-cols-3">
-            <Card title="Additives the neighbours needed"><AdditiveList additives={result.additives} /></Card>
-            <Card title="Stains likely to show it"><StainList stains={result.stains} /></Card>
-            <Card title="Warnings from failed attempts"><WarningList warnings={result.warnings} /></Card>
+            <Card title="Additives the neighbours needed">
+              <AdditiveList additives={result.additives} />
+            </Card>
+            <Card title="Stains likely to show it">
+              <StainList stains={result.stains} />
+            </Card>
+            <Card title="Warnings from failed attempts">
+              <WarningList warnings={result.warnings} />
+            </Card>
           </div>
           <div className="grid gap-4 lg:grid-cols-2">
-            <Card title="Why these numbers"><EvidenceList evidence={result.evidence} /></Card>
-            {result.suggestion && <Card title="Predicted Rf across the pair"><ResponseCurve result={result} /></Card>}
+            <Card title="Why these numbers">
+              <EvidenceList evidence={result.evidence} />
+            </Card>
+            {result.suggestion && (
+              <Card title="Predicted Rf across the pair">
+                <ResponseCurve result={result} />
+              </Card>
+            )}
           </div>
-          <Card title={`Nearest recorded neighbours (${result.neighbours.length})`}><NeighboursTable neighbours={result.neighbours} /></Card>
-          <ColumnPlanPanel key={`${result.query.canonicalSmiles}-${result.suggestion?.label}`} title="Column plan for this suggestion" rfTarget={result.suggestion ? Math.min(0.99, Math.max(0.05, result.suggestion.predictedRf)) : result.targetRf} />
+          <Card title={`Nearest recorded neighbours (${result.neighbours.length})`}>
+            <NeighboursTable neighbours={result.neighbours} />
+          </Card>
+          <ColumnPlanPanel
+            key={`${result.query.canonicalSmiles}-${result.suggestion?.label}`}
+            title="Column plan for this suggestion"
+            rfTarget={
+              result.suggestion ? Math.min(0.99, Math.max(0.05, result.suggestion.predictedRf)) : result.targetRf
+            }
+          />
         </div>
       )}
     </section>

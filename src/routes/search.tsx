@@ -16,9 +16,14 @@ import { SearchForm } from '../features/search/components/search-form';
 import { searchApiParams, useSearchUrl } from '../features/search/hooks/use-search-url';
 
 const recordStar = (hit: SearchRecordHit) => (
-  <BookmarkToggle recordId={hit.recordId} label={`record ${hit.recordId}, ${hit.record.compound.name ?? hit.record.compound.canonicalSmiles}`} />
+  <BookmarkToggle
+    recordId={hit.recordId}
+    label={`record ${hit.recordId}, ${hit.record.compound.name ?? hit.record.compound.canonicalSmiles}`}
+  />
 );
-const compoundStar = (hit: SearchCompoundHit) => <BookmarkToggle compoundId={hit.id} label={`compound ${hit.compound.name ?? hit.compound.canonicalSmiles}`} />;
+const compoundStar = (hit: SearchCompoundHit) => (
+  <BookmarkToggle compoundId={hit.id} label={`compound ${hit.compound.name ?? hit.compound.canonicalSmiles}`} />
+);
 
 function CopyLink() {
   const [copied, setCopied] = useState(false);
@@ -28,7 +33,12 @@ function CopyLink() {
     setTimeout(() => setCopied(false), 2_000);
   };
   return (
-    <Button size="sm" variant="quiet" onClick={() => void copy()} title="The link holds the whole search: words, structure, filters, view and page">
+    <Button
+      size="sm"
+      variant="quiet"
+      onClick={() => void copy()}
+      title="The link holds the whole search: words, structure, filters, view and page"
+    >
       {copied ? 'Link copied' : 'Copy link to this search'}
     </Button>
   );
@@ -48,7 +58,9 @@ export default function SearchPage() {
       <header className="flex flex-wrap items-baseline justify-between gap-2">
         <div>
           <h1 className="text-2xl font-semibold">Search</h1>
-          <p className="mt-1 text-sm text-ink-soft">Find how the group purified a compound, or anything like it. Only active records are searched.</p>
+          <p className="mt-1 text-sm text-ink-soft">
+            Find how the group purified a compound, or anything like it. Only active records are searched.
+          </p>
         </div>
         <CopyLink />
       </header>
@@ -56,28 +68,61 @@ export default function SearchPage() {
       <SearchFilters filters={state.filters} onChange={(changes) => update(changes)} />
       {!ready ? (
         <EmptyState title="Draw or paste a structure">
-          A similarity or substructure search needs a structure: draw it, paste a SMILES or molfile, or drop a .mol file, then press Search.
+          A similarity or substructure search needs a structure: draw it, paste a SMILES or molfile, or drop a .mol
+          file, then press Search.
         </EmptyState>
       ) : (
         <>
           <div className="flex flex-wrap items-center justify-between gap-3">
-            <ResultsBar result={result} view={state.view} sort={state.sort} onView={(view) => update({ view })} onSort={(sort) => update({ sort })} />
+            <ResultsBar
+              result={result}
+              view={state.view}
+              sort={state.sort}
+              onView={(view) => update({ view })}
+              onSort={(sort) => update({ sort })}
+            />
             <ExportLinks state={state} />
           </div>
           {search.isLoading ? (
             <PageLoading label="Searching…" />
           ) : search.error ? (
-            <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-failed">{search.error.message}</p>
+            <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-failed">
+              {search.error.message}
+            </p>
           ) : result && result.total === 0 ? (
-            <EmptyState title="Nothing found" action={<Link to="/contribute" className={buttonClass('secondary', 'sm')}>Contribute a record</Link>}>
+            <EmptyState
+              title="Nothing found"
+              action={
+                <Link to="/contribute" className={buttonClass('secondary', 'sm')}>
+                  Contribute a record
+                </Link>
+              }
+            >
               {state.mode === 'similar' ? 'Lower the least similarity, ' : 'Try fewer or other words, '}
-              remove a filter, or switch between similar and substructure. If nobody has purified it yet, record it when you do.
+              remove a filter, or switch between similar and substructure. If nobody has purified it yet, record it when
+              you do.
             </EmptyState>
           ) : result ? (
-            <div role="region" aria-label="Search results" aria-busy={search.isFetching} data-location={location.search} className={search.isPlaceholderData ? 'opacity-60 transition-opacity' : ''}>
-              {state.view === 'records' ? <ResultsTable hits={records} action={recordStar} /> : <ResultsGrid hits={compounds} action={compoundStar} />}
+            <div
+              role="region"
+              aria-label="Search results"
+              aria-busy={search.isFetching}
+              data-location={location.search}
+              className={search.isPlaceholderData ? 'opacity-60 transition-opacity' : ''}
+            >
+              {state.view === 'records' ? (
+                <ResultsTable hits={records} action={recordStar} />
+              ) : (
+                <ResultsGrid hits={compounds} action={compoundStar} />
+              )}
               <div className="mt-3">
-                <Pager page={state.page} pageSize={state.pageSize} total={result.total} onPage={(page) => update({ page }, false)} onPageSize={(pageSize) => update({ pageSize })} />
+                <Pager
+                  page={state.page}
+                  pageSize={state.pageSize}
+                  total={result.total}
+                  onPage={(page) => update({ page }, false)}
+                  onPageSize={(pageSize) => update({ pageSize })}
+                />
               </div>
             </div>
           ) : null}

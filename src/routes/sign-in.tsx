@@ -20,7 +20,11 @@ export function SignInPage() {
 
   return (
     <div className="min-h-screen grid place-items-center bg-plate px-4">
-      <form onSubmit={submit} className="w-full max-w-sm rounded-plate border border-line bg-surface p-6 shadow-sm" noValidate>
+      <form
+        onSubmit={submit}
+        className="w-full max-w-sm rounded-plate border border-line bg-surface p-6 shadow-sm"
+        noValidate
+      >
         <Wordmark className="text-2xl" />
         <h1 className="mt-4 text-lg font-semibold">Sign in to your group's Rfolio</h1>
         {resetDone && (

@@ -17,7 +17,10 @@ export default function ToolsPage() {
     <section className="space-y-4">
       <header className="space-y-1">
         <h1 className="text-2xl font-semibold">Column planner and eluent translator</h1>
-        <p className="max-w-3xl text-sm text-ink-soft">Every number says where it came from: the 1978 sizing table, CV = 1/Rf, Snyder’s mixed-solvent strength. Confirm on a TLC plate before the column.</p>
+        <p className="max-w-3xl text-sm text-ink-soft">
+          Every number says where it came from: the 1978 sizing table, CV = 1/Rf, Snyder’s mixed-solvent strength.
+          Confirm on a TLC plate before the column.
+        </p>
       </header>
       <ColumnPlanPanel title="Column planner" showTable rfTarget={rfTarget} rfImpurity={rfImpurity} />
       <EluentTranslator />

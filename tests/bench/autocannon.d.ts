@@ -47,7 +47,10 @@ declare module 'autocannon' {
   }
 
   export interface Instance extends EventEmitter, PromiseLike<AutocannonResult> {
-    on(event: 'response', listener: (client: Client, statusCode: number, bytes: number, responseTimeMs: number) => void): this;
+    on(
+      event: 'response',
+      listener: (client: Client, statusCode: number, bytes: number, responseTimeMs: number) => void,
+    ): this;
     on(event: 'reqError', listener: (error: Error) => void): this;
     stop(): void;
   }

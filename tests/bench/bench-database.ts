@@ -3,7 +3,16 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { dirname, join, resolve } from 'node:path';
-import { clusterPassword, clusterPaths, databaseUrl, dropDatabase, ensureDatabase, ensurePostgresInstalled, startCluster, stopCluster } from '../../server/bootstrap/postgres.mjs';
+import {
+  clusterPassword,
+  clusterPaths,
+  databaseUrl,
+  dropDatabase,
+  ensureDatabase,
+  ensurePostgresInstalled,
+  startCluster,
+  stopCluster,
+} from '../../server/bootstrap/postgres.mjs';
 
 export const projectRoot = resolve(dirname(fileURLToPath(import.meta.url)), '..', '..');
 

@@ -45,25 +45,41 @@ try {
   const started = performance.now();
   console.log(`fuzzing ${base} with ${CASES} cases, seed ${SEED}`);
   for (const [index, [name, family]] of families.entries()) {
-    const runs = index === families.length - 1 ? CASES - tally.total() : Math.round((CASES * family.weight) / totalWeight);
+    const runs =
+      index === families.length - 1 ? CASES - tally.total() : Math.round((CASES * family.weight) / totalWeight);
     const cases = fc.sample(family.cases, { numRuns: runs, seed: SEED + index });
     for (const fuzzCase of cases) {
-      const answer = await fuzzCase.send(ctx.agent).then(answerOf, (error: Error) => ({ status: 599, body: { socket: error.message }, type: 'none' }));
+      const answer = await fuzzCase
+        .send(ctx.agent)
+        .then(answerOf, (error: Error) => ({ status: 599, body: { socket: error.message }, type: 'none' }));
       tally.add(fuzzCase.endpoint, fuzzCase.input, answer);
     }
-    console.log(`${name}: ${runs} cases done (${tally.total()} in ${((performance.now() - started) / 1000).toFixed(0)} s)`);
+    console.log(
+      `${name}: ${runs} cases done (${tally.total()} in ${((performance.now() - started) / 1000).toFixed(0)} s)`,
+    );
   }
 
-  console.log(`\n${'endpoint'.padEnd(44)} ${'cases'.padStart(6)} ${'2xx/3xx'.padStart(8)} ${'4xx ok'.padStart(7)} ${'5xx'.padStart(5)} ${'4xx ?'.padStart(6)}`);
+  console.log(
+    `\n${'endpoint'.padEnd(44)} ${'cases'.padStart(6)} ${'2xx/3xx'.padStart(8)} ${'4xx ok'.padStart(7)} ` +
+      `${'5xx'.padStart(5)} ${'4xx ?'.padStart(6)}`,
+  );
   for (const [endpoint, counts] of [...tally.byEndpoint].sort(([a], [b]) => a.localeCompare(b))) {
     const total = counts.accepted + counts.refused + counts.server_error + counts.unexplained_refusal;
-    console.log(`${endpoint.padEnd(44)} ${String(total).padStart(6)} ${String(counts.accepted).padStart(8)} ${String(counts.refused).padStart(7)} ${String(counts.server_error).padStart(5)} ${String(counts.unexplained_refusal).padStart(6)}`);
+    console.log(
+      `${endpoint.padEnd(44)} ${String(total).padStart(6)} ${String(counts.accepted).padStart(8)} ` +
+        `${String(counts.refused).padStart(7)} ${String(counts.server_error).padStart(5)} ` +
+        `${String(counts.unexplained_refusal).padStart(6)}`,
+    );
   }
   for (const offence of tally.offences.slice(0, 20)) {
-    console.log(`\n${offence.verdict} ${offence.status} ${offence.endpoint}\n  input: ${JSON.stringify(offence.input)}\n  why:   ${offence.why}`);
+    console.log(
+      `\n${offence.verdict} ${offence.status} ${offence.endpoint}\n  input: ${JSON.stringify(offence.input)}\n  why:   ${offence.why}`,
+    );
   }
   console.log(`\nseed=${SEED} duration_s=${((performance.now() - started) / 1000).toFixed(0)}`);
-  console.log(`cases=${tally.total()} server_errors=${tally.total('server_error')} unexplained_refusals=${tally.total('unexplained_refusal')}`);
+  console.log(
+    `cases=${tally.total()} server_errors=${tally.total('server_error')} unexplained_refusals=${tally.total('unexplained_refusal')}`,
+  );
 } finally {
   server.close();
   await close();

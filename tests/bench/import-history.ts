@@ -15,8 +15,18 @@ function mulberry32(seed: number): () => number {
 
 /** Eluents a group writes in its sheets, in several notations (parsed by shared/domain/eluent-notation). */
 const eluents = [
-  'EtOAc/hexanes 1:4', 'EtOAc/hexanes 1:9', 'hexane:EtOAc, 3:1', '20% EtOAc in hexanes', '30% EtOAc/hexanes',
-  'DCM/MeOH 9:1', 'DCM/MeOH 95:5 + 1% Et3N', '100% DCM', 'PE/EtOAc 5:1', 'Et2O/pentane 1:2', 'EtOAc', 'DCM/MeOH 20:1 + 0.5% AcOH',
+  'EtOAc/hexanes 1:4',
+  'EtOAc/hexanes 1:9',
+  'hexane:EtOAc, 3:1',
+  '20% EtOAc in hexanes',
+  '30% EtOAc/hexanes',
+  'DCM/MeOH 9:1',
+  'DCM/MeOH 95:5 + 1% Et3N',
+  '100% DCM',
+  'PE/EtOAc 5:1',
+  'Et2O/pentane 1:2',
+  'EtOAc',
+  'DCM/MeOH 20:1 + 0.5% AcOH',
 ];
 const stains = ['UV', 'UV, KMnO4', 'UV 254', 'CAM', 'p-anisaldehyde', 'ninhydrin', 'iodine', 'UV, PMA'];
 const outcomes = ['clean', 'clean', 'clean', 'partial', 'failed'];
@@ -47,7 +57,15 @@ export function historyCsv(compounds: readonly string[], rows: number, seed = 7)
   for (let i = 0; i < rows; i++) {
     const compound = i % compounds.length;
     const rf = (0.05 + random() * 0.9).toFixed(2);
-    const cells = [`compound ${compound + 1}`, compounds[compound], pick(eluents), rf, pick(stains), `NB-${1000 + Math.floor(i / 20)}-${i % 20}`, pick(outcomes)];
+    const cells = [
+      `compound ${compound + 1}`,
+      compounds[compound],
+      pick(eluents),
+      rf,
+      pick(stains),
+      `NB-${1000 + Math.floor(i / 20)}-${i % 20}`,
+      pick(outcomes),
+    ];
     lines.push(cells.map((cell) => (/[",]/.test(cell) ? `"${cell.replace(/"/g, '""')}"` : cell)).join(','));
   }
   for (let i = lines.length - 1; i > 0; i--) {

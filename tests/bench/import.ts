@@ -6,7 +6,15 @@ import { createServer, type Server } from 'node:http';
 import os from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { dirname, resolve } from 'node:path';
-import { clusterPaths, databaseUrl, dropDatabase, ensureDatabase, ensurePostgresInstalled, startCluster, stopCluster } from '../../server/bootstrap/postgres.mjs';
+import {
+  clusterPaths,
+  databaseUrl,
+  dropDatabase,
+  ensureDatabase,
+  ensurePostgresInstalled,
+  startCluster,
+  stopCluster,
+} from '../../server/bootstrap/postgres.mjs';
 import { distinctCompounds, historyCsv } from './import-history';
 
 const ROWS = Number(process.env.BENCH_ROWS ?? 10_000);
@@ -60,7 +68,11 @@ async function main() {
     return res;
   };
   const { token } = (await (await call('/api/auth/csrf')).json()) as { token: string };
-  const login = await call('/api/auth/login', { method: 'POST', headers: { 'content-type': 'application/json', 'x-csrf-token': token }, body: JSON.stringify({ email, password }) });
+  const login = await call('/api/auth/login', {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', 'x-csrf-token': token },
+    body: JSON.stringify({ email, password }),
+  });
   const { csrfToken } = (await login.json()) as { csrfToken: string };
 
   const importOnce = async (label: string) => {
@@ -68,7 +80,11 @@ async function main() {
     form.append('file', new Blob([csv], { type: 'text/csv' }), 'group-history.csv');
     const started = performance.now();
     const cpuBefore = process.cpuUsage();
-    const res = await call('/api/imports?wait=0', { method: 'POST', headers: { 'x-csrf-token': csrfToken }, body: form });
+    const res = await call('/api/imports?wait=0', {
+      method: 'POST',
+      headers: { 'x-csrf-token': csrfToken },
+      body: form,
+    });
     const created = (await res.json()) as { id: number; error?: unknown };
     if (!created.id) throw new Error(`upload refused: ${JSON.stringify(created)}`);
     let body: Record<string, unknown>;
@@ -87,15 +103,26 @@ async function main() {
     if (busy > 0) console.log(`(${busy} progress polls were answered busy and repeated)`);
     const seconds = (performance.now() - started) / 1000;
     const cpu = process.cpuUsage(cpuBefore);
-    console.log(`${label}: ${seconds.toFixed(1)} s — status ${body.status}, ${body.total} rows: accepted ${body.accepted}, rejected ${body.rejected}, duplicates ${body.duplicates}, new compounds ${body.newCompounds} (${(ROWS / seconds).toFixed(0)} rows/s; CPU of this process incl. worker threads ${((cpu.user + cpu.system) / 1e6).toFixed(1)} s)`);
+    console.log(
+      `${label}: ${seconds.toFixed(1)} s — status ${body.status}, ${body.total} rows: accepted ` +
+        `${body.accepted}, rejected ${body.rejected}, duplicates ${body.duplicates}, new compounds ` +
+        `${body.newCompounds} (${(ROWS / seconds).toFixed(0)} rows/s; CPU of this process incl. worker threads ` +
+        `${((cpu.user + cpu.system) / 1e6).toFixed(1)} s)`,
+    );
     return { seconds, status: body.status };
   };
 
-  const load = () => (globalThis.process.platform === 'linux' ? ` (load average ${(os.loadavg()[0]).toFixed(1)} on ${os.cpus().length} cores)` : '');
+  const load = () =>
+    globalThis.process.platform === 'linux'
+      ? ` (load average ${os.loadavg()[0].toFixed(1)} on ${os.cpus().length} cores)`
+      : '';
   console.log(`Starting${load()}.`);
   const first = await importOnce('First import (end to end)');
   await importOnce('Same file again (all duplicates)');
-  console.log(`Target ≤ 30 s for the first import: ${first.seconds <= 30 && first.status === 'completed' ? 'met' : 'NOT met'} (${first.seconds.toFixed(1)} s, ${first.status})${load()}.`);
+  console.log(
+    `Target ≤ 30 s for the first import: ${first.seconds <= 30 && first.status === 'completed' ? 'met' : 'NOT met'} ` +
+      `(${first.seconds.toFixed(1)} s, ${first.status})${load()}.`,
+  );
   server.close();
   await close();
   await sequelize.close();

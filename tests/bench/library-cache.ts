@@ -18,7 +18,8 @@ export interface CachedLibrary {
 const VERSION = 1;
 const CHUNK = 2000;
 
-const toBase64 = (bytes: ArrayBufferView) => Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('base64');
+const toBase64 = (bytes: ArrayBufferView) =>
+  Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('base64');
 
 /** Distinct compounds (by ID code) from the generated library, a few extra drawn to cover duplicates. */
 function distinctCompounds(size: number): { smiles: string[]; idcodes: string[] } {
@@ -40,14 +41,20 @@ function distinctCompounds(size: number): { smiles: string[]; idcodes: string[] 
  * Loads the library of `size` compounds from `file`, or generates it and computes fingerprints and
  * search graphs in the worker pool (minutes at 100k), then writes the file for the next run.
  */
-export async function loadOrBuildLibrary(file: string, size: number, log: (line: string) => void): Promise<CachedLibrary> {
+export async function loadOrBuildLibrary(
+  file: string,
+  size: number,
+  log: (line: string) => void,
+): Promise<CachedLibrary> {
   if (existsSync(file)) {
     const cached = JSON.parse(readFileSync(file, 'utf8')) as CachedLibrary;
     if (cached.version === VERSION && cached.size === size) return cached;
   }
   const started = performance.now();
   const { smiles, idcodes } = distinctCompounds(size);
-  log(`generated ${smiles.length} distinct structures in ${((performance.now() - started) / 1000).toFixed(1)} s; fingerprinting…`);
+  log(
+    `generated ${smiles.length} distinct structures in ${((performance.now() - started) / 1000).toFixed(1)} s; fingerprinting…`,
+  );
   const fingerprints: string[] = [];
   const graphs: string[] = [];
   for (let start = 0; start < idcodes.length; start += CHUNK) {

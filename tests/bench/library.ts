@@ -1,4 +1,14 @@
-import { acyls, alcohols, alkyls, amines, arylHalides, arylPartners, carbonylCaps, linkers, sulfonyls } from './building-blocks';
+import {
+  acyls,
+  alcohols,
+  alkyls,
+  amines,
+  arylHalides,
+  arylPartners,
+  carbonylCaps,
+  linkers,
+  sulfonyls,
+} from './building-blocks';
 
 /**
  * A generated benchmark library: products enumerated from tests/bench/building-blocks.ts by common
@@ -18,12 +28,19 @@ interface Family {
 }
 
 function family<A, B>(first: readonly A[], second: readonly B[], make: (a: A, b: B) => string): Family {
-  return { size: first.length * second.length, product: (i) => make(first[Math.floor(i / second.length)], second[i % second.length]) };
+  return {
+    size: first.length * second.length,
+    product: (i) => make(first[Math.floor(i / second.length)], second[i % second.length]),
+  };
 }
 
 function chain<A>(first: readonly A[], ends: readonly string[], make: (a: A, linker: string) => string): Family {
   const pairs = family(first, linkers, make);
-  return family(Array.from({ length: pairs.size }, (_, i) => i), ends, (i, end) => fill(pairs.product(i), end));
+  return family(
+    Array.from({ length: pairs.size }, (_, i) => i),
+    ends,
+    (i, end) => fill(pairs.product(i), end),
+  );
 }
 
 const families: Family[] = [

@@ -61,7 +61,10 @@ export async function startApp(databaseUrl: string): Promise<RunningApp> {
   const deadline = Date.now() + 180_000;
   for (;;) {
     if (child.exitCode !== null) throw new Error(`the app exited with code ${child.exitCode}`);
-    const healthy = await fetch(`${base}/api/health`).then((res) => res.ok, () => false);
+    const healthy = await fetch(`${base}/api/health`).then(
+      (res) => res.ok,
+      () => false,
+    );
     if (healthy) break;
     if (Date.now() > deadline) throw new Error('the app did not become healthy within 180 s');
     await new Promise((resolve) => setTimeout(resolve, 300));

@@ -36,9 +36,19 @@ export function mixRoutes(inputs: MixInputs): MixRoute[] {
   return [
     route('records list', 6, pages, (page) => ({ method: 'GET', path: `/api/records?page=${page}` })),
     route('record page', 7, inputs.recordIds, (id) => ({ method: 'GET', path: `/api/records/${id}` })),
-    route('text search', 3, inputs.words, (word) => ({ method: 'GET', path: `/api/search?q=${encodeURIComponent(word)}` })),
-    route('similarity search', 2, inputs.structures, (smiles) => ({ method: 'GET', path: `/api/search?mode=similar&structure=${encodeURIComponent(smiles)}` })),
-    route('scout', 2, inputs.structures, (smiles) => ({ method: 'POST', path: '/api/scout', body: JSON.stringify({ structure: smiles }) })),
+    route('text search', 3, inputs.words, (word) => ({
+      method: 'GET',
+      path: `/api/search?q=${encodeURIComponent(word)}`,
+    })),
+    route('similarity search', 2, inputs.structures, (smiles) => ({
+      method: 'GET',
+      path: `/api/search?mode=similar&structure=${encodeURIComponent(smiles)}`,
+    })),
+    route('scout', 2, inputs.structures, (smiles) => ({
+      method: 'POST',
+      path: '/api/scout',
+      body: JSON.stringify({ structure: smiles }),
+    })),
   ];
 }
 
@@ -58,7 +68,12 @@ export function sessionHeaders(session: Session, method = 'GET'): Record<string,
  * each call draws a new user and new inputs. `equal` gives every route the same share.
  */
 export function autocannonRequests(routes: MixRoute[], sessions: Session[], equal = false): AutocannonRequest[] {
-  const slots = routes.flatMap((route) => Array.from({ length: equal ? 1 : route.weight }, (_, i) => ({ route, order: (i + 0.5) / (equal ? 1 : route.weight) })));
+  const slots = routes.flatMap((route) =>
+    Array.from({ length: equal ? 1 : route.weight }, (_, i) => ({
+      route,
+      order: (i + 0.5) / (equal ? 1 : route.weight),
+    })),
+  );
   slots.sort((a, b) => a.order - b.order);
   return slots.map(({ route }) => ({
     label: route.label,

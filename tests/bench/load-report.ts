@@ -56,7 +56,10 @@ export class RouteStats {
   route(label: string): Figures & { statuses: string } {
     const byStatus = this.failures.get(label) ?? new Map<number, number>();
     const non2xx = [...byStatus.values()].reduce((sum, n) => sum + n, 0);
-    return { ...figures(this.latencies.get(label) ?? [], non2xx), statuses: [...byStatus].map(([status, n]) => `${status}×${n}`).join(' ') };
+    return {
+      ...figures(this.latencies.get(label) ?? [], non2xx),
+      statuses: [...byStatus].map(([status, n]) => `${status}×${n}`).join(' '),
+    };
   }
 
   /** p50/p99 of the responses that came in each `seconds`-long slice of the run (shows a warm-up tail apart from the steady state). */
@@ -67,27 +70,47 @@ export class RouteStats {
       if (!bySlice.has(slice)) bySlice.set(slice, []);
       bySlice.get(slice)!.push(ms);
     }
-    return [...bySlice].sort(([a], [b]) => a - b).map(([slice, latencies]) => ({ from: slice * seconds, figures: figures(latencies, 0) }));
+    return [...bySlice]
+      .sort(([a], [b]) => a - b)
+      .map(([slice, latencies]) => ({ from: slice * seconds, figures: figures(latencies, 0) }));
   }
 
   overall(): Figures {
     const all = [...this.latencies.values()].flat();
-    const non2xx = [...this.failures.values()].flatMap((byStatus) => [...byStatus.values()]).reduce((sum, n) => sum + n, 0);
+    const non2xx = [...this.failures.values()]
+      .flatMap((byStatus) => [...byStatus.values()])
+      .reduce((sum, n) => sum + n, 0);
     return figures(all, non2xx);
   }
 }
 
 /** One line per route: requests per second, latency percentiles in ms, non-2xx answers. */
 export function printRouteTable(stats: RouteStats, durationS: number) {
-  const header = ['route'.padEnd(20), 'req/s'.padStart(7), 'p50'.padStart(7), 'p90'.padStart(7), 'p99'.padStart(7), 'max'.padStart(7), 'non-2xx'.padStart(8)];
+  const header = [
+    'route'.padEnd(20),
+    'req/s'.padStart(7),
+    'p50'.padStart(7),
+    'p90'.padStart(7),
+    'p99'.padStart(7),
+    'max'.padStart(7),
+    'non-2xx'.padStart(8),
+  ];
   console.log(header.join(' '));
   for (const label of stats.labels()) {
     const r = stats.route(label);
-    const cells = [label.padEnd(20), (r.count / durationS).toFixed(1).padStart(7), ...[r.p50, r.p90, r.p99, r.max].map((v) => v.toFixed(1).padStart(7)), String(r.non2xx).padStart(8)];
+    const cells = [
+      label.padEnd(20),
+      (r.count / durationS).toFixed(1).padStart(7),
+      ...[r.p50, r.p90, r.p99, r.max].map((v) => v.toFixed(1).padStart(7)),
+      String(r.non2xx).padStart(8),
+    ];
     console.log(`${cells.join(' ')}${r.statuses ? `  (${r.statuses})` : ''}`);
   }
   const slices = stats.slices(5).map(({ from, figures: f }) => `${from}–${from + 5} s p50=${f.p50} p99=${f.p99}`);
   console.log(`by time: ${slices.join('; ')}`);
   const all = stats.overall();
-  console.log(`${'all'.padEnd(20)} ${(all.count / durationS).toFixed(1).padStart(7)} ${[all.p50, all.p90, all.p99, all.max].map((v) => v.toFixed(1).padStart(7)).join(' ')} ${String(all.non2xx).padStart(8)}  (ms)`);
+  console.log(
+    `${'all'.padEnd(20)} ${(all.count / durationS).toFixed(1).padStart(7)} ` +
+      `${[all.p50, all.p90, all.p99, all.max].map((v) => v.toFixed(1).padStart(7)).join(' ')} ${String(all.non2xx).padStart(8)}  (ms)`,
+  );
 }

@@ -36,9 +36,15 @@ const DEMO_PASSWORD = process.env.RFOLIO_DEMO_PASSWORD ?? 'rfolio-demo-2026';
 const EQUAL = process.argv.includes('--equal');
 const COLD_REPEATS = option('cold-repeats', 3);
 const WRITE_EVERY_S = option('write-every', 0);
-const WRITE_KIND = process.argv.includes('--write-kind') ? process.argv[process.argv.indexOf('--write-kind') + 1] : 'bookmark';
+const WRITE_KIND = process.argv.includes('--write-kind')
+  ? process.argv[process.argv.indexOf('--write-kind') + 1]
+  : 'bookmark';
 if (!['bookmark', 'edit'].includes(WRITE_KIND)) throw new Error('--write-kind is bookmark or edit');
-const loadAverage = () => os.loadavg().map((value) => value.toFixed(2)).join(' ');
+const loadAverage = () =>
+  os
+    .loadavg()
+    .map((value) => value.toFixed(2))
+    .join(' ');
 
 async function getJson<T>(app: RunningApp, session: Session, path: string): Promise<T> {
   const res = await fetch(app.base + path, { headers: sessionHeaders(session) });
@@ -48,11 +54,28 @@ async function getJson<T>(app: RunningApp, session: Session, path: string): Prom
 
 /** Record ids, name words and structures from the seeded data, read through the API as a user would. */
 async function mixInputs(app: RunningApp, session: Session): Promise<MixInputs> {
-  type Page = { items: { id: number; compound: { name: string | null; canonicalSmiles: string } }[]; total: number; pageSize: number };
+  type Page = {
+    items: { id: number; compound: { name: string | null; canonicalSmiles: string } }[];
+    total: number;
+    pageSize: number;
+  };
   const first = await getJson<Page>(app, session, '/api/records?page=1');
   const pages = Math.max(1, Math.ceil(first.total / first.pageSize));
-  const items = (await Promise.all(Array.from({ length: pages }, (_, i) => getJson<Page>(app, session, `/api/records?page=${i + 1}`)))).flatMap((page) => page.items);
-  const words = [...new Set(items.flatMap((item) => (item.compound.name ?? '').toLowerCase().split(/[^a-z]+/).filter((word) => word.length >= 4)))];
+  const items = (
+    await Promise.all(
+      Array.from({ length: pages }, (_, i) => getJson<Page>(app, session, `/api/records?page=${i + 1}`)),
+    )
+  ).flatMap((page) => page.items);
+  const words = [
+    ...new Set(
+      items.flatMap((item) =>
+        (item.compound.name ?? '')
+          .toLowerCase()
+          .split(/[^a-z]+/)
+          .filter((word) => word.length >= 4),
+      ),
+    ),
+  ];
   const structures = [...new Set(items.map((item) => item.compound.canonicalSmiles))];
   return { recordIds: items.map((item) => item.id), words, structures, pages };
 }
@@ -72,7 +95,9 @@ async function probe(app: RunningApp, routes: MixRoute[], session: Session) {
 
 /** Every distinct read `repeats` times in random order, `CONNECTIONS` at a time, each by a random signed-in user. */
 async function coldPass(app: RunningApp, routes: MixRoute[], sessions: Session[], repeats: number) {
-  const requests = routes.flatMap((route) => Array.from({ length: repeats }, () => route.all().map((request) => ({ label: route.label, ...request }))).flat());
+  const requests = routes.flatMap((route) =>
+    Array.from({ length: repeats }, () => route.all().map((request) => ({ label: route.label, ...request }))).flat(),
+  );
   for (let i = requests.length - 1; i > 0; i--) {
     const j = Math.floor(Math.random() * (i + 1));
     [requests[i], requests[j]] = [requests[j], requests[i]];
@@ -80,23 +105,33 @@ async function coldPass(app: RunningApp, routes: MixRoute[], sessions: Session[]
   const stats = new RouteStats();
   let next = 0;
   const started = performance.now();
-  await Promise.all(Array.from({ length: CONNECTIONS }, async () => {
-    while (next < requests.length) {
-      const { label, method = 'GET', path, body } = requests[next++];
-      const session = sessions[Math.floor(Math.random() * sessions.length)];
-      const sent = performance.now();
-      const res = await fetch(app.base + path!, { method, body, headers: sessionHeaders(session, method) });
-      await res.arrayBuffer();
-      stats.add(label, res.status, performance.now() - sent);
-    }
-  }));
+  await Promise.all(
+    Array.from({ length: CONNECTIONS }, async () => {
+      while (next < requests.length) {
+        const { label, method = 'GET', path, body } = requests[next++];
+        const session = sessions[Math.floor(Math.random() * sessions.length)];
+        const sent = performance.now();
+        const res = await fetch(app.base + path!, { method, body, headers: sessionHeaders(session, method) });
+        await res.arrayBuffer();
+        stats.add(label, res.status, performance.now() - sent);
+      }
+    }),
+  );
   return { stats, durationS: (performance.now() - started) / 1000, count: requests.length };
 }
 
 async function load(app: RunningApp, routes: MixRoute[], sessions: Session[], durationS: number) {
   const stats = new RouteStats();
-  const instance = autocannon({ url: app.base, connections: CONNECTIONS, duration: durationS, timeout: 10, requests: autocannonRequests(routes, sessions, EQUAL) });
-  instance.on('response', (client, status, _bytes, ms) => stats.add(client.requestIterator.currentRequest.label ?? '?', status, ms));
+  const instance = autocannon({
+    url: app.base,
+    connections: CONNECTIONS,
+    duration: durationS,
+    timeout: 10,
+    requests: autocannonRequests(routes, sessions, EQUAL),
+  });
+  instance.on('response', (client, status, _bytes, ms) =>
+    stats.add(client.requestIterator.currentRequest.label ?? '?', status, ms),
+  );
   const result = await instance;
   return { result, stats };
 }
@@ -116,7 +151,11 @@ function writer(app: RunningApp, session: Session, recordIds: number[], everyS: 
   let marked: number | null = null;
   let edits = 0;
   const send = async (method: string, path: string, body?: unknown) => {
-    const res = await fetch(app.base + path, { method, headers: sessionHeaders(session, method), body: body === undefined ? undefined : JSON.stringify(body) });
+    const res = await fetch(app.base + path, {
+      method,
+      headers: sessionHeaders(session, method),
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
     await res.arrayBuffer();
     statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
     return res.ok;
@@ -144,9 +183,14 @@ const database = app ? undefined : throwawayDatabase('load');
 try {
   console.log(`load average before start (1/5/15 min): ${loadAverage()} on ${os.cpus().length} cores`);
   app ??= await startApp(database!.url);
-  const sessions = await Promise.all(['admin', 'curator', 'member', 'viewer'].map((role) => signIn(app!.base, `${role}@example.org`, DEMO_PASSWORD)));
+  const sessions = await Promise.all(
+    ['admin', 'curator', 'member', 'viewer'].map((role) => signIn(app!.base, `${role}@example.org`, DEMO_PASSWORD)),
+  );
   const inputs = await mixInputs(app, sessions[0]);
-  console.log(`demo data: ${inputs.recordIds.length} records, ${inputs.structures.length} structures, ${inputs.words.length} name words; ${sessions.length} users signed in`);
+  console.log(
+    `demo data: ${inputs.recordIds.length} records, ${inputs.structures.length} structures, ` +
+      `${inputs.words.length} name words; ${sessions.length} users signed in`,
+  );
   const { kept, skipped } = await probe(app, mixRoutes(inputs), sessions[0]);
   const shares = kept.map((route) => `${route.label} ${EQUAL ? 1 : route.weight}`);
   console.log(`mix (relative shares): ${shares.join(', ')}`);
@@ -154,21 +198,36 @@ try {
   if (COLD_REPEATS > 0) {
     const cold = await coldPass(app, kept, sessions, COLD_REPEATS);
     const all = cold.stats.overall();
-    console.log(`cold pass: every distinct read ×${COLD_REPEATS}, ${cold.count} requests, ${CONNECTIONS} at a time, in ${cold.durationS.toFixed(1)} s`);
+    console.log(
+      `cold pass: every distinct read ×${COLD_REPEATS}, ${cold.count} requests, ${CONNECTIONS} at a ` +
+        `time, in ${cold.durationS.toFixed(1)} s`,
+    );
     printRouteTable(cold.stats, cold.durationS);
     console.log(`cold_rps=${Math.round(cold.count / cold.durationS)} cold_p99_ms=${all.p99} cold_errors=${all.non2xx}`);
   }
   if (WARMUP_S > 0) await load(app, kept, sessions, WARMUP_S);
   console.log(`load average before the run: ${loadAverage()}`);
-  const writes = WRITE_EVERY_S > 0 ? writer(app, WRITE_KIND === 'edit' ? sessions[0] : sessions[2], inputs.recordIds, WRITE_EVERY_S, WRITE_KIND) : null;
+  const writes =
+    WRITE_EVERY_S > 0
+      ? writer(app, WRITE_KIND === 'edit' ? sessions[0] : sessions[2], inputs.recordIds, WRITE_EVERY_S, WRITE_KIND)
+      : null;
   const { result, stats } = await load(app, kept, sessions, DURATION_S);
   writes?.stop();
-  if (writes) console.log(`writes during the run (one every ${WRITE_EVERY_S} s, ${WRITE_KIND === 'edit' ? 'record edits by the admin' : 'bookmarks by a member'}): ${writes.summary()}`);
+  if (writes)
+    console.log(
+      `writes during the run (one every ${WRITE_EVERY_S} s, ` +
+        `${WRITE_KIND === 'edit' ? 'record edits by the admin' : 'bookmarks by a member'}): ${writes.summary()}`,
+    );
   console.log(`load average after the run: ${loadAverage()}`);
   printRouteTable(stats, result.duration);
   const errors = result.non2xx + result.errors + result.timeouts + (writes?.failed() ?? 0);
-  console.log(`connections=${CONNECTIONS} duration_s=${result.duration} requests=${result.requests.total} non2xx=${result.non2xx} socket_errors=${result.errors} timeouts=${result.timeouts}`);
-  console.log(`rps=${Math.round(result.requests.total / result.duration)} p99_ms=${stats.overall().p99} errors=${errors}`);
+  console.log(
+    `connections=${CONNECTIONS} duration_s=${result.duration} requests=${result.requests.total} ` +
+      `non2xx=${result.non2xx} socket_errors=${result.errors} timeouts=${result.timeouts}`,
+  );
+  console.log(
+    `rps=${Math.round(result.requests.total / result.duration)} p99_ms=${stats.overall().p99} errors=${errors}`,
+  );
 } finally {
   await app?.stop();
   database?.cleanup();

@@ -31,18 +31,25 @@ interface Analysed {
 }
 
 const cachePath = resolve('.cache/scout/open-tlc-structures.json');
-const oclVersion = (JSON.parse(readFileSync(resolve('node_modules/openchemlib/package.json'), 'utf8')) as { version: string }).version;
+const oclVersion = (
+  JSON.parse(readFileSync(resolve('node_modules/openchemlib/package.json'), 'utf8')) as { version: string }
+).version;
 
 /** Descriptors, classes and fingerprints of each SMILES, computed with server/chem once and cached in .cache/. */
 export function analyseSmiles(smiles: readonly string[]): Map<string, Analysed> {
-  const cache: { version: string; entries: Record<string, Analysed> } = existsSync(cachePath) ? JSON.parse(readFileSync(cachePath, 'utf8')) : { version: oclVersion, entries: {} };
+  const cache: { version: string; entries: Record<string, Analysed> } = existsSync(cachePath)
+    ? JSON.parse(readFileSync(cachePath, 'utf8'))
+    : { version: oclVersion, entries: {} };
   if (cache.version !== oclVersion) Object.assign(cache, { version: oclVersion, entries: {} });
   let changed = false;
   for (const text of smiles) {
     if (cache.entries[text]) continue;
     const analysis = analyseStructure(text);
     cache.entries[text] = {
-      idcode: analysis.identity.idcode, smiles: analysis.identity.canonicalSmiles, descriptors: analysis.descriptors, classes: analysis.classes,
+      idcode: analysis.identity.idcode,
+      smiles: analysis.identity.canonicalSmiles,
+      descriptors: analysis.descriptors,
+      classes: analysis.classes,
       fingerprint: Array.from(fingerprintMolecule(analysis.parent)),
     };
     changed = true;
@@ -56,7 +63,9 @@ export function analyseSmiles(smiles: readonly string[]): Map<string, Analysed> 
 
 /** The eluent of a row as parts by volume (the CSV gives volume fractions). */
 export function componentsOf(row: Row): { solvent: string; parts: number }[] {
-  return openTlcColumns.map(([column, solvent]) => ({ solvent, parts: Number(row[column]) })).filter((part) => part.parts > 0);
+  return openTlcColumns
+    .map(([column, solvent]) => ({ solvent, parts: Number(row[column]) }))
+    .filter((part) => part.parts > 0);
 }
 
 /** Reads a CSV with the columns of tlc-rf.csv into a knowledge set (phase: silica TLC plates); ids count from `idBase` + 1. */
@@ -75,11 +84,27 @@ function knowledgeOfRows(rows: Row[], path: string, idBase: number): KnowledgeSe
     if (id === undefined) {
       id = idBase + compounds.length + 1;
       ids.set(structure.idcode, id);
-      compounds.push({ id, name: row.name || null, smiles: structure.smiles, descriptors: structure.descriptors, classes: structure.classes, fingerprint: structure.fingerprint });
+      compounds.push({
+        id,
+        name: row.name || null,
+        smiles: structure.smiles,
+        descriptors: structure.descriptors,
+        classes: structure.classes,
+        fingerprint: structure.fingerprint,
+      });
     }
     measurements.push({
-      recordId: null, compoundId: id, phase: 'silica-tlc-f254', components: componentsOf(row), additives: [], mode: 'isocratic',
-      rf: Math.min(1, Math.max(0, Number(row.rf))), outcome: 'clean', outcomeReason: null, visualisations: [], demo: false,
+      recordId: null,
+      compoundId: id,
+      phase: 'silica-tlc-f254',
+      components: componentsOf(row),
+      additives: [],
+      mode: 'isocratic',
+      rf: Math.min(1, Math.max(0, Number(row.rf))),
+      outcome: 'clean',
+      outcomeReason: null,
+      visualisations: [],
+      demo: false,
     });
   }
   return { version: `open-tlc:${path}:${rows.length}`, compounds, measurements };
@@ -103,5 +128,12 @@ export function fixedSplit(path: string): [KnowledgeSet, KnowledgeSet] {
   const order = new Map<string, number>();
   for (const row of rows) if (!order.has(row.smiles)) order.set(row.smiles, order.size);
   const isTest = (row: Row) => (order.get(row.smiles) as number) % 4 === 3;
-  return [knowledgeOfRows(rows.filter((row) => !isTest(row)), `${path}:train`, 0), knowledgeOfRows(rows.filter(isTest), `${path}:test`, 1_000_000)];
+  return [
+    knowledgeOfRows(
+      rows.filter((row) => !isTest(row)),
+      `${path}:train`,
+      0,
+    ),
+    knowledgeOfRows(rows.filter(isTest), `${path}:test`, 1_000_000),
+  ];
 }

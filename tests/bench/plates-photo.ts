@@ -3,14 +3,32 @@
  * its ground truth in the displayed image's pixels (EXIF orientation applied), in the API's own shape.
  */
 import sharp from 'sharp';
-import { imageToPlate, makePhotoScene, plateColour, plateToImage, seededRandom, type PhotoScene, type PlateLook, type PlateScene, type SpotTruth } from './plates-scene';
+import {
+  imageToPlate,
+  makePhotoScene,
+  plateColour,
+  plateToImage,
+  seededRandom,
+  type PhotoScene,
+  type PlateLook,
+  type PlateScene,
+  type SpotTruth,
+} from './plates-scene';
 
 export type TruthSpot = { x: number; y: number; rf: number; kind: SpotTruth['kind']; rfLow?: number; rfHigh?: number };
 export type TruthPlate = {
-  corners: [number, number][]; origin: [number, number][]; front: [number, number][]; kind: PlateScene['kind'];
+  corners: [number, number][];
+  origin: [number, number][];
+  front: [number, number][];
+  kind: PlateScene['kind'];
   lanes: { x: number; label: string; spots: TruthSpot[] }[];
 };
-export type GeneratedPhoto = { scene: PhotoScene; bytes: Buffer; contentType: string; truth: { width: number; height: number; plates: TruthPlate[] } };
+export type GeneratedPhoto = {
+  scene: PhotoScene;
+  bytes: Buffer;
+  contentType: string;
+  truth: { width: number; height: number; plates: TruthPlate[] };
+};
 
 const GRAPHITE: [number, number, number] = [78, 78, 84];
 const clamp01 = (value: number) => (value < 0 ? 0 : value > 1 ? 1 : value);
@@ -30,14 +48,16 @@ function labelStrokes(u: number, v: number, label: string): [number, number, num
   const rnd = seededRandom(label.charCodeAt(0) * 31 + Math.round(u * 10));
   const strokes: [number, number, number, number][] = [];
   for (let i = 0; i < Math.min(3, label.length + 1); i++) {
-    const x0 = u - 1.2 + rnd() * 2.4, y0 = v + rnd() * 2;
+    const x0 = u - 1.2 + rnd() * 2.4,
+      y0 = v + rnd() * 2;
     strokes.push([x0, y0, x0 + (rnd() - 0.5) * 1.6, y0 + 0.6 + rnd() * 1.4]);
   }
   return strokes;
 }
 
 function segmentDistance(u: number, v: number, [x0, y0, x1, y1]: [number, number, number, number]): number {
-  const dx = x1 - x0, dy = y1 - y0;
+  const dx = x1 - x0,
+    dy = y1 - y0;
   const t = clamp01(((u - x0) * dx + (v - y0) * dy) / (dx * dx + dy * dy || 1));
   return Math.hypot(u - x0 - t * dx, v - y0 - t * dy);
 }
@@ -46,7 +66,8 @@ function spotAlpha(spot: SpotTruth, u: number, v: number, originV: number, front
   let rho: number;
   if (spot.kind === 'streak') {
     const run = originV - frontV;
-    const top = originV - (spot.rfHigh ?? spot.rf) * run, bottom = originV - (spot.rfLow ?? spot.rf) * run;
+    const top = originV - (spot.rfHigh ?? spot.rf) * run,
+      bottom = originV - (spot.rfLow ?? spot.rf) * run;
     const dv = v < top ? (top - v) / (spot.radius * 0.8) : v > bottom ? (v - bottom) / (spot.radius * 0.8) : 0;
     rho = Math.hypot((u - spot.u) / (spot.radius * 0.9), dv);
   } else {
@@ -71,11 +92,13 @@ function plateAt(look: PlateLook, plate: PlateScene, u: number, v: number, pixel
       }
     }
     mix(colour, GRAPHITE, 0.65 * stroke(Math.hypot(u - lane.u, v - plate.originV), 0.7, pixel));
-    for (const segment of labelStrokes(lane.u, plate.originV + 2.5, lane.label)) mix(colour, GRAPHITE, 0.55 * stroke(segmentDistance(u, v, segment), 0.3, pixel));
+    for (const segment of labelStrokes(lane.u, plate.originV + 2.5, lane.label))
+      mix(colour, GRAPHITE, 0.55 * stroke(segmentDistance(u, v, segment), 0.3, pixel));
   }
   mix(colour, GRAPHITE, 0.5 * stroke(Math.abs(v - plate.originV), 0.3, pixel));
   const edgeTick = u < 4 || u > plate.widthMm - 4;
-  if (plate.frontStyle === 'line' || edgeTick) mix(colour, GRAPHITE, 0.5 * stroke(Math.abs(v - plate.frontV), 0.3, pixel));
+  if (plate.frontStyle === 'line' || edgeTick)
+    mix(colour, GRAPHITE, 0.5 * stroke(Math.abs(v - plate.frontV), 0.3, pixel));
   return colour;
 }
 
@@ -93,9 +116,18 @@ export function drawPhoto(scene: PhotoScene): { pixels: Buffer; truth: Generated
   const rnd = seededRandom(scene.seed * 104729 + 3);
   const gauss = () => Math.sqrt(-2 * Math.log(rnd() + 1e-12)) * Math.cos(2 * Math.PI * rnd());
   const boxes = scene.plates.map((plate) => {
-    const corners = [[0, 0], [plate.widthMm, 0], [plate.widthMm, plate.heightMm], [0, plate.heightMm]].map(([u, v]) => plateToImage(scene, plate, u, v));
-    return { x0: Math.floor(Math.min(...corners.map((p) => p[0]))) - 2, x1: Math.ceil(Math.max(...corners.map((p) => p[0]))) + 2,
-      y0: Math.floor(Math.min(...corners.map((p) => p[1]))) - 2, y1: Math.ceil(Math.max(...corners.map((p) => p[1]))) + 2 };
+    const corners = [
+      [0, 0],
+      [plate.widthMm, 0],
+      [plate.widthMm, plate.heightMm],
+      [0, plate.heightMm],
+    ].map(([u, v]) => plateToImage(scene, plate, u, v));
+    return {
+      x0: Math.floor(Math.min(...corners.map((p) => p[0]))) - 2,
+      x1: Math.ceil(Math.max(...corners.map((p) => p[0]))) + 2,
+      y0: Math.floor(Math.min(...corners.map((p) => p[1]))) - 2,
+      y1: Math.ceil(Math.max(...corners.map((p) => p[1]))) + 2,
+    };
   });
   for (let y = 0; y < height; y++) {
     for (let x = 0; x < width; x++) {
@@ -110,10 +142,24 @@ export function drawPhoto(scene: PhotoScene): { pixels: Buffer; truth: Generated
         const onPlate = plateAt(scene.look, plate, u, v, pixel);
         colour = colour.map((value, c) => value * (1 - inside) + onPlate[c] * inside);
       });
-      const light = 1 + scene.light.gx * (2 * x / width - 1) + scene.light.gy * (2 * y / height - 1);
+      const light = 1 + scene.light.gx * ((2 * x) / width - 1) + scene.light.gy * ((2 * y) / height - 1);
       let shade = 1;
-      if (scene.shadow) shade = 1 - scene.shadow.depth * clamp01(0.5 + (x * scene.shadow.nx + y * scene.shadow.ny - scene.shadow.offset - (width * scene.shadow.nx + height * scene.shadow.ny) / 2) / scene.shadow.soft);
-      const glare = scene.glare ? scene.glare.amount * Math.exp(-0.5 * (((x - scene.glare.x) / scene.glare.sx) ** 2 + ((y - scene.glare.y) / scene.glare.sy) ** 2)) : 0;
+      if (scene.shadow)
+        shade =
+          1 -
+          scene.shadow.depth *
+            clamp01(
+              0.5 +
+                (x * scene.shadow.nx +
+                  y * scene.shadow.ny -
+                  scene.shadow.offset -
+                  (width * scene.shadow.nx + height * scene.shadow.ny) / 2) /
+                  scene.shadow.soft,
+            );
+      const glare = scene.glare
+        ? scene.glare.amount *
+          Math.exp(-0.5 * (((x - scene.glare.x) / scene.glare.sx) ** 2 + ((y - scene.glare.y) / scene.glare.sy) ** 2))
+        : 0;
       const at = (y * width + x) * 3;
       for (let c = 0; c < 3; c++) {
         const lit = colour[c] * light * shade;
@@ -121,30 +167,47 @@ export function drawPhoto(scene: PhotoScene): { pixels: Buffer; truth: Generated
       }
     }
   }
-  const plates = scene.plates.map((plate): TruthPlate => {
-    const at = (u: number, v: number) => plateToImage(scene, plate, u, v);
-    return {
-      kind: plate.kind,
-      corners: [at(0, 0), at(plate.widthMm, 0), at(plate.widthMm, plate.heightMm), at(0, plate.heightMm)],
-      origin: [at(0, plate.originV), at(plate.widthMm, plate.originV)],
-      front: [at(0, plate.frontV), at(plate.widthMm, plate.frontV)],
-      lanes: plate.lanes.map((lane) => ({
-        x: at(lane.u, plate.originV)[0], label: lane.label,
-        spots: lane.spots.map((spot) => {
-          const [x, y] = at(spot.u, spot.v);
-          return { x, y, rf: spot.rf, kind: spot.circled ? 'circle' : spot.kind, ...(spot.kind === 'streak' ? { rfLow: spot.rfLow, rfHigh: spot.rfHigh } : {}) };
-        }),
-      })),
-    };
-  }).sort((a, b) => a.corners[0][0] - b.corners[0][0]);
+  const plates = scene.plates
+    .map((plate): TruthPlate => {
+      const at = (u: number, v: number) => plateToImage(scene, plate, u, v);
+      return {
+        kind: plate.kind,
+        corners: [at(0, 0), at(plate.widthMm, 0), at(plate.widthMm, plate.heightMm), at(0, plate.heightMm)],
+        origin: [at(0, plate.originV), at(plate.widthMm, plate.originV)],
+        front: [at(0, plate.frontV), at(plate.widthMm, plate.frontV)],
+        lanes: plate.lanes.map((lane) => ({
+          x: at(lane.u, plate.originV)[0],
+          label: lane.label,
+          spots: lane.spots.map((spot) => {
+            const [x, y] = at(spot.u, spot.v);
+            return {
+              x,
+              y,
+              rf: spot.rf,
+              kind: spot.circled ? 'circle' : spot.kind,
+              ...(spot.kind === 'streak' ? { rfLow: spot.rfLow, rfHigh: spot.rfHigh } : {}),
+            };
+          }),
+        })),
+      };
+    })
+    .sort((a, b) => a.corners[0][0] - b.corners[0][0]);
   return { pixels, truth: { width, height, plates } };
 }
 
 /** Turns displayed pixels into the stored ones for an EXIF orientation (3: 180°, 6: shown turned 90° clockwise, 8: anticlockwise). */
-async function storedFor(pixels: Buffer, width: number, height: number, orientation: PhotoScene['orientation']): Promise<{ data: Buffer; width: number; height: number }> {
+async function storedFor(
+  pixels: Buffer,
+  width: number,
+  height: number,
+  orientation: PhotoScene['orientation'],
+): Promise<{ data: Buffer; width: number; height: number }> {
   if (orientation === 1) return { data: pixels, width, height };
   const angle = orientation === 3 ? 180 : orientation === 6 ? 270 : 90;
-  const { data, info } = await sharp(pixels, { raw: { width, height, channels: 3 } }).rotate(angle).raw().toBuffer({ resolveWithObject: true });
+  const { data, info } = await sharp(pixels, { raw: { width, height, channels: 3 } })
+    .rotate(angle)
+    .raw()
+    .toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height };
 }
 
@@ -158,7 +221,11 @@ export async function generatePhoto(seed: number, look?: PlateLook): Promise<Gen
   const stored = await storedFor(pixels, scene.width, scene.height, scene.orientation);
   let image = sharp(stored.data, { raw: { width: stored.width, height: stored.height, channels: 3 } });
   if (scene.orientation !== 1) image = image.withMetadata({ orientation: scene.orientation });
-  const bytes = scene.format === 'png' ? await image.png().toBuffer()
-    : scene.format === 'webp' ? await image.webp({ quality: scene.quality }).toBuffer() : await image.jpeg({ quality: scene.quality }).toBuffer();
+  const bytes =
+    scene.format === 'png'
+      ? await image.png().toBuffer()
+      : scene.format === 'webp'
+        ? await image.webp({ quality: scene.quality }).toBuffer()
+        : await image.jpeg({ quality: scene.quality }).toBuffer();
   return { scene, bytes, contentType: `image/${scene.format}`, truth };
 }

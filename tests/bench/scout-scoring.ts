@@ -15,7 +15,11 @@ const hexanes = 'hexanes';
 const ethylAcetate = 'ethyl-acetate';
 
 export const eluentKey = (components: ScoutMeasurement['components']) =>
-  [...components].filter((part) => part.parts > 0).sort((a, b) => a.solvent.localeCompare(b.solvent)).map((part) => `${part.solvent}:${(part.parts / components.reduce((sum, item) => sum + item.parts, 0)).toFixed(4)}`).join('|');
+  [...components]
+    .filter((part) => part.parts > 0)
+    .sort((a, b) => a.solvent.localeCompare(b.solvent))
+    .map((part) => `${part.solvent}:${(part.parts / components.reduce((sum, item) => sum + item.parts, 0)).toFixed(4)}`)
+    .join('|');
 
 /** Mean Rf per eluent over a knowledge set: the structure-blind baseline. */
 export function eluentMeans(knowledge: KnowledgeSet): Map<string, number> {
@@ -31,7 +35,8 @@ export function eluentMeans(knowledge: KnowledgeSet): Map<string, number> {
 
 /** EtOAc volume fraction of a hexane/EtOAc (or pure) eluent, or null for other eluents. */
 function ethylAcetateFraction(components: ScoutMeasurement['components']): number | null {
-  if (components.some((part) => part.parts > 0 && part.solvent !== hexanes && part.solvent !== ethylAcetate)) return null;
+  if (components.some((part) => part.parts > 0 && part.solvent !== hexanes && part.solvent !== ethylAcetate))
+    return null;
   const total = components.reduce((sum, part) => sum + part.parts, 0);
   return (components.find((part) => part.solvent === ethylAcetate)?.parts ?? 0) / total;
 }
@@ -51,7 +56,10 @@ export function measuredRfAt(measurements: readonly ScoutMeasurement[], fraction
     points.set(x, [...(points.get(x) ?? []), clampedRm(measurement.rf)]);
   }
   if (fraction === 0 && points.has(0)) return rmToRf(average(points.get(0)!));
-  const curve = [...points].filter(([x]) => x > 0).map(([x, rms]) => ({ lx: Math.log10(x), rm: average(rms) })).sort((a, b) => a.lx - b.lx);
+  const curve = [...points]
+    .filter(([x]) => x > 0)
+    .map(([x, rms]) => ({ lx: Math.log10(x), rm: average(rms) }))
+    .sort((a, b) => a.lx - b.lx);
   if (curve.length < 2) return null;
   const lx = Math.log10(Math.max(fraction, 1e-3));
   let upper = curve.findIndex((point) => point.lx >= lx);
@@ -80,13 +88,35 @@ export interface Fold {
   means: Map<string, number>;
 }
 
-export const foldOf = (knowledge: KnowledgeSet): Fold => ({ knowledge, model: buildScoutModel(knowledge), means: eluentMeans(knowledge) });
+export const foldOf = (knowledge: KnowledgeSet): Fold => ({
+  knowledge,
+  model: buildScoutModel(knowledge),
+  means: eluentMeans(knowledge),
+});
 
 /** Predicts every measurement of a held-out compound from a training fold that does not contain it. */
-export function scoreCompound({ knowledge, model, means }: Fold, compound: ScoutCompound, measurements: readonly ScoutMeasurement[]): CompoundScore {
-  if (knowledge.compounds.some((other) => other.id === compound.id || other.smiles === compound.smiles)) throw new Error('The held-out compound is in the knowledge set.');
-  const query = { id: null, smiles: compound.smiles, descriptors: compound.descriptors, classes: compound.classes, fingerprint: compound.fingerprint };
-  const score: CompoundScore = { compoundId: compound.id, errors: [], baselineErrors: [], hit: null, confidence: 'low', covered: 0 };
+export function scoreCompound(
+  { knowledge, model, means }: Fold,
+  compound: ScoutCompound,
+  measurements: readonly ScoutMeasurement[],
+): CompoundScore {
+  if (knowledge.compounds.some((other) => other.id === compound.id || other.smiles === compound.smiles))
+    throw new Error('The held-out compound is in the knowledge set.');
+  const query = {
+    id: null,
+    smiles: compound.smiles,
+    descriptors: compound.descriptors,
+    classes: compound.classes,
+    fingerprint: compound.fingerprint,
+  };
+  const score: CompoundScore = {
+    compoundId: compound.id,
+    errors: [],
+    baselineErrors: [],
+    hit: null,
+    confidence: 'low',
+    covered: 0,
+  };
   for (const measurement of measurements) {
     if (measurement.rf === null) continue;
     const prediction = predictRf(model, query, measurement.phase, measurement.components);
@@ -96,7 +126,11 @@ export function scoreCompound({ knowledge, model, means }: Fold, compound: Scout
     score.baselineErrors.push(Math.abs(mean - measurement.rf));
     if (measurement.rf >= prediction.interval[0] && measurement.rf <= prediction.interval[1]) score.covered += 1;
   }
-  const result = scout(model, query, { targetRf: 0.3, solventPair: { weak: hexanes, strong: ethylAcetate }, phase: measurements[0]?.phase });
+  const result = scout(model, query, {
+    targetRf: 0.3,
+    solventPair: { weak: hexanes, strong: ethylAcetate },
+    phase: measurements[0]?.phase,
+  });
   score.confidence = result.confidence.level;
   if (result.suggestion) {
     const rf = measuredRfAt(measurements, result.suggestion.strongPercent / 100);

@@ -5,12 +5,43 @@ import type { CachedLibrary } from './library-cache';
  * Invented names for the generated compounds (three words from short lists, then the number), so text
  * search meets repeated chemical words the way a real base does. Not real compound names.
  */
-const substituents = ['methyl', 'ethyl', 'propyl', 'butyl', 'fluoro', 'chloro', 'bromo', 'methoxy', 'nitro', 'cyano', 'amino', 'hydroxy', 'acetyl', 'benzoyl', 'tosyl', 'trifluoromethyl'];
-const cores = ['phenyl', 'pyridyl', 'thienyl', 'furyl', 'naphthyl', 'indolyl', 'piperidinyl', 'morpholinyl', 'piperazinyl', 'cyclohexyl', 'benzyl', 'quinolinyl'];
+const substituents = [
+  'methyl',
+  'ethyl',
+  'propyl',
+  'butyl',
+  'fluoro',
+  'chloro',
+  'bromo',
+  'methoxy',
+  'nitro',
+  'cyano',
+  'amino',
+  'hydroxy',
+  'acetyl',
+  'benzoyl',
+  'tosyl',
+  'trifluoromethyl',
+];
+const cores = [
+  'phenyl',
+  'pyridyl',
+  'thienyl',
+  'furyl',
+  'naphthyl',
+  'indolyl',
+  'piperidinyl',
+  'morpholinyl',
+  'piperazinyl',
+  'cyclohexyl',
+  'benzyl',
+  'quinolinyl',
+];
 const kinds = ['amide', 'ester', 'sulfonamide', 'ether', 'amine', 'urea', 'carbamate', 'biaryl'];
 
 export const benchName = (i: number) =>
-  `${substituents[i % substituents.length]}${cores[Math.floor(i / substituents.length) % cores.length]} ${kinds[Math.floor(i / 7) % kinds.length]} ${i}`;
+  `${substituents[i % substituents.length]}${cores[Math.floor(i / substituents.length) % cores.length]} ` +
+  `${kinds[Math.floor(i / 7) % kinds.length]} ${i}`;
 
 /** Text queries with one typo each (two letters swapped in the first word), e.g. "mehtylphenyl amide". */
 export function queryWords(count: number): string[] {
@@ -29,7 +60,8 @@ export async function insertLibrary(url: string, library: CachedLibrary): Promis
   await client.connect();
   try {
     const author = await client.query(
-      "INSERT INTO users (email, name, role, password_hash) VALUES ('bench-author@bench.invalid', 'Bench author', 'member', 'x') RETURNING id",
+      "INSERT INTO users (email, name, role, password_hash) VALUES ('bench-author@bench.invalid', " +
+        "'Bench author', 'member', 'x') RETURNING id",
     );
     for (let start = 0; start < library.smiles.length; start += BATCH) {
       const end = Math.min(start + BATCH, library.smiles.length);
@@ -39,13 +71,20 @@ export async function insertLibrary(url: string, library: CachedLibrary): Promis
            rotatable_bonds, aromatic_rings, stereocentres, charge, classes, fingerprint)
          SELECT idcode, name, smiles, smiles, '', '', 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, '{}', fingerprint
          FROM unnest($1::text[], $2::text[], $3::text[], $4::bytea[]) AS t(idcode, name, smiles, fingerprint)`,
-        [range.map((i) => library.idcodes[i]), range.map(benchName), range.map((i) => library.smiles[i]), range.map((i) => Buffer.from(library.fingerprints[i], 'base64'))],
+        [
+          range.map((i) => library.idcodes[i]),
+          range.map(benchName),
+          range.map((i) => library.smiles[i]),
+          range.map((i) => Buffer.from(library.fingerprints[i], 'base64')),
+        ],
       );
     }
     await client.query(
-      `INSERT INTO condition_records (compound_id, author_id, technique, stationary_phase, eluent, solvent_keys, strong_percent, target_rf, outcome, notebook_ref, content_hash)
+      `INSERT INTO condition_records (compound_id, author_id, technique, stationary_phase, eluent, solvent_keys,
+        strong_percent, target_rf, outcome, notebook_ref, content_hash)
        SELECT id, $1, 'tlc', 'silica-gel',
-         '{"components":[{"solvent":"ethyl-acetate","parts":1},{"solvent":"hexanes","parts":3}],"additives":[],"mode":"isocratic","steps":[]}'::jsonb,
+         '{"components":[{"solvent":"ethyl-acetate","parts":1},{"solvent":"hexanes","parts":3}],
+           "additives":[],"mode":"isocratic","steps":[]}'::jsonb,
          ARRAY['ethyl-acetate','hexanes'], 25, 0.3, 'clean', 'B-' || id, md5(id::text)
        FROM compounds`,
       [author.rows[0].id],

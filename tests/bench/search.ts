@@ -69,7 +69,8 @@ const queryMolecules = generateLibrary(SIMILARITY_QUERIES * 2, 4242)
 started = performance.now();
 const queryFingerprints = queryMolecules.map(fingerprintMolecule);
 const queryFingerprintMs = (performance.now() - started) / queryMolecules.length;
-// What the search route hands over besides the fingerprint (server/features/search/structure-query.ts): ID code and search graph, for the re-ranking.
+// What the search route hands over besides the fingerprint (server/features/search/structure-query.ts): ID code and
+// search graph, for the re-ranking.
 const queryKeys = queryMolecules.map((mol) => ({ idcode: mol.getIDCode(), graph: searchGraphMolecule(mol) }));
 const similarityMs: number[] = [];
 let topSimilarity = 0;
@@ -79,7 +80,11 @@ for (const [position, fingerprint] of queryFingerprints.entries()) {
   similarityMs.push(performance.now() - t);
   topSimilarity += hits[0]?.similarity ?? 0;
 }
-log(`similarity top-50 (${queryFingerprints.length} novel queries): p50 ${fmt(median(similarityMs))} ms, p95 ${fmt(percentile(similarityMs, 95))} ms; mean best Tanimoto ${(topSimilarity / queryFingerprints.length).toFixed(3)}; query fingerprint ${fmt(queryFingerprintMs)} ms on top`);
+log(
+  `similarity top-50 (${queryFingerprints.length} novel queries): p50 ${fmt(median(similarityMs))} ` +
+    `ms, p95 ${fmt(percentile(similarityMs, 95))} ms; mean best Tanimoto ${(topSimilarity / queryFingerprints.length).toFixed(3)}; ` +
+    `query fingerprint ${fmt(queryFingerprintMs)} ms on top`,
+);
 
 const substructureMedians: number[] = [];
 for (const smiles of SUBSTRUCTURE_QUERIES) {
@@ -94,8 +99,15 @@ for (const smiles of SUBSTRUCTURE_QUERIES) {
     times.push(performance.now() - t);
   }
   substructureMedians.push(median(times));
-  log(`substructure ${smiles.padEnd(18)} hits ${String(last.ids.length).padStart(6)}, screened ${String(last.candidates).padStart(6)} (fast ${last.fastChecks}, SSSearcher ${last.searcherChecks}): p50 ${fmt(median(times))} ms, p95 ${fmt(percentile(times, 95))} ms, first run ${fmt(firstMs)} ms`);
+  log(
+    `substructure ${smiles.padEnd(18)} hits ${String(last.ids.length).padStart(6)}, screened ` +
+      `${String(last.candidates).padStart(6)} (fast ${last.fastChecks}, SSSearcher ${last.searcherChecks}): ` +
+      `p50 ${fmt(median(times))} ms, p95 ${fmt(percentile(times, 95))} ms, first run ${fmt(firstMs)} ms`,
+  );
 }
 
 await closeFingerprintPool();
-console.log(`similarity_p50_ms=${fmt(median(similarityMs))} substructure_p50_ms=${fmt(median(substructureMedians))} rebuild_s=${rebuildSeconds.toFixed(2)}`);
+console.log(
+  `similarity_p50_ms=${fmt(median(similarityMs))} substructure_p50_ms=${fmt(median(substructureMedians))} ` +
+    `rebuild_s=${rebuildSeconds.toFixed(2)}`,
+);

@@ -4,7 +4,15 @@
 import { fileURLToPath } from 'node:url';
 import { dirname, resolve } from 'node:path';
 import { performance } from 'node:perf_hooks';
-import { clusterPaths, databaseUrl, dropDatabase, ensureDatabase, ensurePostgresInstalled, startCluster, stopCluster } from '../../server/bootstrap/postgres.mjs';
+import {
+  clusterPaths,
+  databaseUrl,
+  dropDatabase,
+  ensureDatabase,
+  ensurePostgresInstalled,
+  startCluster,
+  stopCluster,
+} from '../../server/bootstrap/postgres.mjs';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const bin = ensurePostgresInstalled();
@@ -29,8 +37,14 @@ try {
     (SELECT count(*) FROM condition_records WHERE demo) AS records,
     (SELECT count(DISTINCT compound_id) FROM condition_records WHERE demo) AS compounds,
     (SELECT count(DISTINCT cls) FROM compounds, unnest(classes) AS cls) AS classes,
-    (SELECT count(*) FROM compounds WHERE fingerprint IS NOT NULL) AS fingerprints`)) as [Record<string, string>[], unknown];
-  console.log(`demo seed: ${seconds.toFixed(2)} s; ${counts.records} records over ${counts.compounds} compounds, ${counts.classes} classes, ${counts.fingerprints} fingerprints`);
+    (SELECT count(*) FROM compounds WHERE fingerprint IS NOT NULL) AS fingerprints`)) as [
+    Record<string, string>[],
+    unknown,
+  ];
+  console.log(
+    `demo seed: ${seconds.toFixed(2)} s; ${counts.records} records over ${counts.compounds} compounds, ` +
+      `${counts.classes} classes, ${counts.fingerprints} fingerprints`,
+  );
   await closeFingerprintPool();
   await sequelize.close();
 } finally {

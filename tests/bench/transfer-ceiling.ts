@@ -12,9 +12,11 @@ import { clampedRm, eluentKey, hitWindow, measuredRfAt } from './scout-scoring';
  * is the data's own scatter and the eluents' different selectivities rather than a lack of structure knowledge.
  */
 
-const hexaneEtOAc = (components: ScoutMeasurement['components']) => components.every((part) => part.solvent === 'hexanes' || part.solvent === 'ethyl-acetate');
+const hexaneEtOAc = (components: ScoutMeasurement['components']) =>
+  components.every((part) => part.solvent === 'hexanes' || part.solvent === 'ethyl-acetate');
 const etoacFraction = (components: ScoutMeasurement['components']) =>
-  (components.find((part) => part.solvent === 'ethyl-acetate')?.parts ?? 0) / components.reduce((sum, part) => sum + part.parts, 0);
+  (components.find((part) => part.solvent === 'ethyl-acetate')?.parts ?? 0) /
+  components.reduce((sum, part) => sum + part.parts, 0);
 
 export interface TransferCeiling {
   reference: string;
@@ -54,7 +56,9 @@ export function transferCeilings(knowledge: KnowledgeSet, targetRf = 0.3, minSha
       const carried = new Map<string, number>([[reference, known]]);
       for (const eluent of eluents) {
         if (eluent === reference) continue;
-        const pairs = measuredIn.filter((other) => other !== heldOut && meanRm(other, eluent) !== null).map((other) => [meanRm(other, reference)!, meanRm(other, eluent)!]);
+        const pairs = measuredIn
+          .filter((other) => other !== heldOut && meanRm(other, eluent) !== null)
+          .map((other) => [meanRm(other, reference)!, meanRm(other, eluent)!]);
         if (pairs.length < 3) continue;
         const mx = mean(pairs.map(([x]) => x));
         const my = mean(pairs.map(([, y]) => y));
@@ -69,10 +73,23 @@ export function transferCeilings(knowledge: KnowledgeSet, targetRf = 0.3, minSha
         errors.push(Math.abs(rmToRf(carried.get(key)!) - measurement.rf));
       }
       // The carried hexane/EtOAc curve, read like Scout's measured-curve check: RM linear in log10 of the EtOAc fraction.
-      const curve = [...carried].filter(([key]) => hexaneEtOAc(componentsOf.get(key)!)).map(([key, value]) => ({ fraction: etoacFraction(componentsOf.get(key)!), rm: value }));
+      const curve = [...carried]
+        .filter(([key]) => hexaneEtOAc(componentsOf.get(key)!))
+        .map(([key, value]) => ({ fraction: etoacFraction(componentsOf.get(key)!), rm: value }));
       const asMeasurements = curve.map((point): ScoutMeasurement => ({
-        recordId: null, compoundId: heldOut, phase: 'silica', mode: 'isocratic', additives: [], outcome: 'clean', outcomeReason: null, visualisations: [],
-        components: [{ solvent: 'hexanes', parts: 1 - point.fraction }, { solvent: 'ethyl-acetate', parts: point.fraction }], rf: rmToRf(point.rm),
+        recordId: null,
+        compoundId: heldOut,
+        phase: 'silica',
+        mode: 'isocratic',
+        additives: [],
+        outcome: 'clean',
+        outcomeReason: null,
+        visualisations: [],
+        components: [
+          { solvent: 'hexanes', parts: 1 - point.fraction },
+          { solvent: 'ethyl-acetate', parts: point.fraction },
+        ],
+        rf: rmToRf(point.rm),
       }));
       const target = rfToRm(targetRf);
       const best = ladderSteps()
@@ -83,7 +100,13 @@ export function transferCeilings(knowledge: KnowledgeSet, targetRf = 0.3, minSha
       const rf = best ? measuredRfAt(own, best.step.strongFraction) : null;
       if (rf !== null) hits.push(rf >= hitWindow[0] && rf <= hitWindow[1]);
     }
-    results.push({ reference, compounds: measuredIn.length, mae: mean(errors), hit: hits.filter(Boolean).length / Math.max(hits.length, 1), hitCompounds: hits.length });
+    results.push({
+      reference,
+      compounds: measuredIn.length,
+      mae: mean(errors),
+      hit: hits.filter(Boolean).length / Math.max(hits.length, 1),
+      hitCompounds: hits.length,
+    });
   }
   return results.sort((a, b) => a.mae - b.mae);
 }

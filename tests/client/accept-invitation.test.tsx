@@ -12,7 +12,14 @@ const token = 'A'.repeat(43);
 function renderPage() {
   vi.stubGlobal(
     'fetch',
-    strictFetch({ [`/api/auth/invitations/${token}`]: { email: 'new.person@example.org', role: 'member', inviterName: 'Ada Admin', expiresAt: '2030-01-01T00:00:00.000Z' } }),
+    strictFetch({
+      [`/api/auth/invitations/${token}`]: {
+        email: 'new.person@example.org',
+        role: 'member',
+        inviterName: 'Ada Admin',
+        expiresAt: '2030-01-01T00:00:00.000Z',
+      },
+    }),
   );
   return renderWithProviders(
     <Routes>

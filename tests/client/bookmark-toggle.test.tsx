@@ -8,15 +8,28 @@ import { BookmarkToggle } from '../../src/features/bookmarks/components/bookmark
 function bookmarkServer() {
   const items: { id: number; recordId: number | null; compoundId: number | null }[] = [];
   const calls: string[] = [];
-  const json = (body: unknown, status = 200) => new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+  const json = (body: unknown, status = 200) =>
+    new Response(body === undefined ? null : JSON.stringify(body), {
+      status,
+      headers: { 'Content-Type': 'application/json' },
+    });
   const fetch = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
     const path = String(input).replace(/^https?:\/\/[^/]+/, '');
     const method = init?.method ?? 'GET';
     calls.push(`${method} ${path}`);
-    if (method !== 'GET' && (init?.headers as Record<string, string>)['X-CSRF-Token'] !== 'token-1') return json({ error: { code: 'csrf', message: 'no' } }, 403);
+    if (method !== 'GET' && (init?.headers as Record<string, string>)['X-CSRF-Token'] !== 'token-1')
+      return json({ error: { code: 'csrf', message: 'no' } }, 403);
     if (method === 'GET' && path === '/api/auth/csrf') return json({ token: 'token-1' });
     if (method === 'GET' && path === '/api/bookmarks') {
-      return json({ items: items.map((item) => ({ ...item, note: null, createdAt: '2026-12-01T00:00:00.000Z', record: null, compound: null })) });
+      return json({
+        items: items.map((item) => ({
+          ...item,
+          note: null,
+          createdAt: '2026-12-01T00:00:00.000Z',
+          record: null,
+          compound: null,
+        })),
+      });
     }
     if (method === 'POST' && path === '/api/bookmarks') {
       const body = JSON.parse(String(init?.body));
@@ -25,7 +38,10 @@ function bookmarkServer() {
       return json({ ...item, note: null, createdAt: '2026-12-01T00:00:00.000Z', record: null, compound: null }, 201);
     }
     if (method === 'DELETE' && path === '/api/bookmarks?recordId=7') {
-      items.splice(items.findIndex((item) => item.recordId === 7), 1);
+      items.splice(
+        items.findIndex((item) => item.recordId === 7),
+        1,
+      );
       return new Response(null, { status: 204 });
     }
     throw new Error(`unexpected request: ${method} ${path}`);

@@ -16,8 +16,21 @@ describe('chart helpers', () => {
 
 describe('Scatter and Histogram', () => {
   it('draw a point per datum, place a higher y higher, and list the numbers with units in a table', () => {
-    render(<Scatter title="Rf against EtOAc" x={{ label: 'EtOAc', unit: '% v/v' }} y={{ label: 'Rf', domain: [0, 1] }} points={[{ x: 10, y: 0.1 }, { x: 30, y: 0.5 }]} fit={{ f: (x) => x / 60, label: 'line' }} />);
-    const img = screen.getByRole('img', { name: /Rf against EtOAc\. 2 points of Rf against EtOAc \(% v\/v\); line: line\./ });
+    render(
+      <Scatter
+        title="Rf against EtOAc"
+        x={{ label: 'EtOAc', unit: '% v/v' }}
+        y={{ label: 'Rf', domain: [0, 1] }}
+        points={[
+          { x: 10, y: 0.1 },
+          { x: 30, y: 0.5 },
+        ]}
+        fit={{ f: (x) => x / 60, label: 'line' }}
+      />,
+    );
+    const img = screen.getByRole('img', {
+      name: /Rf against EtOAc\. 2 points of Rf against EtOAc \(% v\/v\); line: line\./,
+    });
     const points = img.querySelectorAll('[data-part="point"]');
     expect(points).toHaveLength(2);
     expect(Number(points[1].getAttribute('cy'))).toBeLessThan(Number(points[0].getAttribute('cy')));
@@ -26,7 +39,14 @@ describe('Scatter and Histogram', () => {
   });
 
   it('draw bars whose heights follow the counts', () => {
-    render(<Histogram title="Target Rf" x={{ label: 'Rf', domain: [0, 1] }} countLabel="records" bins={binValues([0.1, 0.6, 0.7], 0, 1, 0.5)} />);
+    render(
+      <Histogram
+        title="Target Rf"
+        x={{ label: 'Rf', domain: [0, 1] }}
+        countLabel="records"
+        bins={binValues([0.1, 0.6, 0.7], 0, 1, 0.5)}
+      />,
+    );
     const bars = screen.getByRole('img', { name: /3 records in 2 bins/ }).querySelectorAll('[data-part="bar"]');
     expect(Number(bars[1].getAttribute('height'))).toBeCloseTo(2 * Number(bars[0].getAttribute('height')), 6);
   });

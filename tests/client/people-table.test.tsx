@@ -6,11 +6,31 @@ import { PeopleTable } from '../../src/features/people/components/people-table';
 import type { AdminUser } from '../../shared/schemas/accounts';
 
 const people: AdminUser[] = [
-  { id: 1, name: 'Bea Admin', email: 'bea@example.org', role: 'admin', status: 'active', lastSignInAt: '2026-11-30T09:15:00.000Z', createdAt: '2026-01-01T00:00:00.000Z' },
-  { id: 2, name: 'Abel Viewer', email: 'abel@example.org', role: 'viewer', status: 'disabled', lastSignInAt: null, createdAt: '2026-01-02T00:00:00.000Z' },
+  {
+    id: 1,
+    name: 'Bea Admin',
+    email: 'bea@example.org',
+    role: 'admin',
+    status: 'active',
+    lastSignInAt: '2026-11-30T09:15:00.000Z',
+    createdAt: '2026-01-01T00:00:00.000Z',
+  },
+  {
+    id: 2,
+    name: 'Abel Viewer',
+    email: 'abel@example.org',
+    role: 'viewer',
+    status: 'disabled',
+    lastSignInAt: null,
+    createdAt: '2026-01-02T00:00:00.000Z',
+  },
 ];
 
-const names = () => screen.getAllByRole('row').slice(1).map((r) => within(r).getAllByRole('cell')[0].textContent);
+const names = () =>
+  screen
+    .getAllByRole('row')
+    .slice(1)
+    .map((r) => within(r).getAllByRole('cell')[0].textContent);
 
 describe('PeopleTable', () => {
   it('lists name, e-mail, role, status and last sign-in, marking the signed-in admin', () => {

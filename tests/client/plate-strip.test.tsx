@@ -21,16 +21,19 @@ const lane: PlateLane = {
 };
 
 describe('PlateStrip', () => {
-  it.each(['sm', 'lg'] as const)('in the %s size, draws the origin below the front and one dot per spot at its Rf', (size) => {
-    render(<PlateStrip lanes={[lane]} size={size} />);
-    const svg = screen.getByRole('img');
-    const origin = svg.querySelector('[data-part="origin"]')!;
-    const front = svg.querySelector('[data-part="front"]')!;
-    expect(y(origin, 'y1')).toBeGreaterThan(y(front, 'y1'));
-    const spots = svg.querySelectorAll('[data-part="spot"]');
-    expect(spots).toHaveLength(3);
-    spots.forEach((spot, i) => expect(y(spot, 'cy')).toBeCloseTo(expectedY(lane.spots[i].rf, svg), 6));
-  });
+  it.each(['sm', 'lg'] as const)(
+    'in the %s size, draws the origin below the front and one dot per spot at its Rf',
+    (size) => {
+      render(<PlateStrip lanes={[lane]} size={size} />);
+      const svg = screen.getByRole('img');
+      const origin = svg.querySelector('[data-part="origin"]')!;
+      const front = svg.querySelector('[data-part="front"]')!;
+      expect(y(origin, 'y1')).toBeGreaterThan(y(front, 'y1'));
+      const spots = svg.querySelectorAll('[data-part="spot"]');
+      expect(spots).toHaveLength(3);
+      spots.forEach((spot, i) => expect(y(spot, 'cy')).toBeCloseTo(expectedY(lane.spots[i].rf, svg), 6));
+    },
+  );
 
   it('draws the starting material hollow and the target filled in the spot colour', () => {
     render(<PlateStrip lanes={[lane]} />);
@@ -60,7 +63,12 @@ describe('PlateStrip', () => {
   });
 
   it('for a Scout estimate, spans the interval band from the low to the high Rf and shows the neighbours faintly', () => {
-    render(<PlateStrip size="lg" lanes={[{ spots: [], predicted: { rf: 0.3, low: 0.22, high: 0.39 }, neighbours: [0.25, 0.36] }]} />);
+    render(
+      <PlateStrip
+        size="lg"
+        lanes={[{ spots: [], predicted: { rf: 0.3, low: 0.22, high: 0.39 }, neighbours: [0.25, 0.36] }]}
+      />,
+    );
     const svg = screen.getByRole('img');
     const band = svg.querySelector('[data-part="interval"]')!;
     expect(y(band, 'y')).toBeCloseTo(expectedY(0.39, svg), 6);
@@ -68,7 +76,9 @@ describe('PlateStrip', () => {
     const neighbours = svg.querySelectorAll('[data-part="neighbour"]');
     expect([...neighbours].map((n) => y(n, 'cy'))).toEqual([expectedY(0.25, svg), expectedY(0.36, svg)]);
     neighbours.forEach((n) => expect(Number(n.getAttribute('opacity'))).toBeLessThan(0.5));
-    expect(svg).toHaveAccessibleDescription(/predicted target Rf 0\.30 \(interval 0\.22–0\.39\); neighbours Rf 0\.25, 0\.36/);
+    expect(svg).toHaveAccessibleDescription(
+      /predicted target Rf 0\.30 \(interval 0\.22–0\.39\); neighbours Rf 0\.25, 0\.36/,
+    );
   });
 
   it('keeps an out-of-range Rf on the plate (clamped to the front) while the description gives the recorded value', () => {

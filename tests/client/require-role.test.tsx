@@ -7,7 +7,10 @@ afterEach(() => vi.unstubAllGlobals());
 
 describe('RequireRole', () => {
   it('when a viewer opens a curator page, then it explains the role needed instead of the page', async () => {
-    vi.stubGlobal('fetch', strictFetch({ '/api/auth/me': { user: { id: 1, email: 'v@x.org', name: 'V', role: 'viewer' } } }));
+    vi.stubGlobal(
+      'fetch',
+      strictFetch({ '/api/auth/me': { user: { id: 1, email: 'v@x.org', name: 'V', role: 'viewer' } } }),
+    );
     renderWithProviders(
       <RequireRole least="curator">
         <p>secret curation page</p>
@@ -18,7 +21,10 @@ describe('RequireRole', () => {
   });
 
   it('when an admin opens a curator page, then the page shows', async () => {
-    vi.stubGlobal('fetch', strictFetch({ '/api/auth/me': { user: { id: 2, email: 'a@x.org', name: 'A', role: 'admin' } } }));
+    vi.stubGlobal(
+      'fetch',
+      strictFetch({ '/api/auth/me': { user: { id: 2, email: 'a@x.org', name: 'A', role: 'admin' } } }),
+    );
     renderWithProviders(
       <RequireRole least="curator">
         <p>secret curation page</p>

@@ -16,7 +16,8 @@ function parseServer(answer: (structure: string) => Answer) {
   const sent: string[] = [];
   const fetch = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
     const path = String(input).replace(/^https?:\/\/[^/]+/, '');
-    const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+    const json = (status: number, body: unknown) =>
+      new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
     if (path === '/api/auth/csrf') return json(200, { token: 'test-token' });
     if (path === '/api/structures/parse' && init?.method === 'POST') {
       const { structure } = JSON.parse(String(init.body)) as { structure: string };
@@ -53,7 +54,13 @@ const aspirin: ParsedStructure = {
   existingCompoundId: null,
 };
 
-function Harness({ onChange, initial = '' }: { onChange?: (text: string, parsed?: ParsedStructure) => void; initial?: string }) {
+function Harness({
+  onChange,
+  initial = '',
+}: {
+  onChange?: (text: string, parsed?: ParsedStructure) => void;
+  initial?: string;
+}) {
   const [text, setText] = useState(initial);
   return (
     <StructureInput
@@ -72,7 +79,13 @@ describe('StructureInput', () => {
   it('when the server refuses a SMILES, then it shows the server message and marks the place it names', async () => {
     const server = parseServer(() => ({
       status: 400,
-      body: { error: { code: 'smiles_unclosed_ring', message: 'Ring bond 1 is opened but never closed.', details: [{ path: '', message: 'Ring bond 1 is opened but never closed.', position: 2, token: '1' }] } },
+      body: {
+        error: {
+          code: 'smiles_unclosed_ring',
+          message: 'Ring bond 1 is opened but never closed.',
+          details: [{ path: '', message: 'Ring bond 1 is opened but never closed.', position: 2, token: '1' }],
+        },
+      },
     }));
     renderWithProviders(<Harness />);
     await userEvent.type(screen.getByLabelText('SMILES or molfile'), 'C1CC');
@@ -84,17 +97,29 @@ describe('StructureInput', () => {
     expect(screen.getByLabelText('SMILES or molfile')).toHaveAttribute('aria-invalid', 'true');
   });
 
-  it('when the server refuses an impossible valence (bromine in a ring, one misplaced click), then the preview names the atom and its element before saving', async () => {
-    const message = 'Atom 5 at position 8 (Br) is double-bonded to carbon; a halogen binds carbon by one single bond.';
-    parseServer(() => ({ status: 422, body: { error: { code: 'valence', message, details: [{ path: '', message, atom: 5, position: 8, token: 'Br' }] } } }));
-    renderWithProviders(<Harness />);
-    fireEvent.change(screen.getByLabelText('SMILES or molfile'), { target: { value: 'C1=NC=CBr=C1' } });
-    const alert = await screen.findByRole('alert', {}, { timeout: 3000 });
-    expect(alert).toHaveTextContent(message);
-    expect(alert).toHaveTextContent('Where: character 8, atom 5 (Br).');
-    expect(alert.querySelector('mark')).toHaveTextContent('B');
-    expect(within(screen.getByRole('complementary', { name: 'Structure check' })).getByRole('status')).toHaveTextContent('Not accepted');
-  });
+  it(
+    'when the server refuses an impossible valence (bromine in a ring, one misplaced click), then ' +
+      'the preview names the atom and its element before saving',
+    async () => {
+      const message =
+        'Atom 5 at position 8 (Br) is double-bonded to carbon; a halogen binds carbon by one single bond.';
+      parseServer(() => ({
+        status: 422,
+        body: {
+          error: { code: 'valence', message, details: [{ path: '', message, atom: 5, position: 8, token: 'Br' }] },
+        },
+      }));
+      renderWithProviders(<Harness />);
+      fireEvent.change(screen.getByLabelText('SMILES or molfile'), { target: { value: 'C1=NC=CBr=C1' } });
+      const alert = await screen.findByRole('alert', {}, { timeout: 3000 });
+      expect(alert).toHaveTextContent(message);
+      expect(alert).toHaveTextContent('Where: character 8, atom 5 (Br).');
+      expect(alert.querySelector('mark')).toHaveTextContent('B');
+      expect(
+        within(screen.getByRole('complementary', { name: 'Structure check' })).getByRole('status'),
+      ).toHaveTextContent('Not accepted');
+    },
+  );
 
   it('when the server accepts, then it shows the formula, weight and classes and hands the parse to the form', async () => {
     const server = parseServer(() => ({ status: 200, body: aspirin }));
@@ -104,7 +129,9 @@ describe('StructureInput', () => {
     expect(await screen.findByLabelText('C9H8O4', {}, { timeout: 3000 })).toBeInTheDocument();
     expect(screen.getByText('180.16')).toBeInTheDocument();
     expect(screen.getByRole('list', { name: 'Compound classes' })).toHaveTextContent(/Ester.*Carboxylic acid/);
-    expect(within(screen.getByRole('complementary', { name: 'Structure check' })).getByRole('status')).toHaveTextContent('Accepted');
+    expect(
+      within(screen.getByRole('complementary', { name: 'Structure check' })).getByRole('status'),
+    ).toHaveTextContent('Accepted');
     expect(server.sent).toEqual(['CC(=O)Oc1ccccc1C(=O)O']);
     await waitFor(() => expect(onChange).toHaveBeenLastCalledWith('  CC(=O)Oc1ccccc1C(=O)O \n', aspirin));
   });
@@ -112,14 +139,23 @@ describe('StructureInput', () => {
   it('when a two-record SDF is dropped, then its first record is used, data items included, and the user is told', async () => {
     const server = parseServer(() => ({ status: 200, body: { ...aspirin, formula: 'C2H6O' } }));
     renderWithProviders(<Harness />);
-    const ethanol = ['ethanol', '  hand-written', '', '  3  2  0  0  0  0  0  0  0  0999 V2000',
+    const ethanol = [
+      'ethanol',
+      '  hand-written',
+      '',
+      '  3  2  0  0  0  0  0  0  0  0999 V2000',
       '    0.0000    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
       '    1.2990    0.7500    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
       '    2.5981    0.0000    0.0000 O   0  0  0  0  0  0  0  0  0  0  0  0',
-      '  1  2  1  0  0  0  0', '  2  3  1  0  0  0  0', 'M  END'].join('\n');
+      '  1  2  1  0  0  0  0',
+      '  2  3  1  0  0  0  0',
+      'M  END',
+    ].join('\n');
     const sdf = `${ethanol}\n> <NAME>\nethanol\n\n$$$$\nmethanol\n\n\n  1  0  0  0  0  0  0  0  0  0999 V2000\nM  END\n$$$$\n`;
     const file = new File([sdf], 'two.sdf', { type: 'chemical/x-mdl-sdfile' });
-    fireEvent.drop(screen.getByRole('group', { name: /Structure/ }).querySelector('.mt-1')!, { dataTransfer: { files: [file], getData: () => '' } });
+    fireEvent.drop(screen.getByRole('group', { name: /Structure/ }).querySelector('.mt-1')!, {
+      dataTransfer: { files: [file], getData: () => '' },
+    });
     const first = `${ethanol}\n> <NAME>\nethanol\n\n`;
     await waitFor(() => expect(screen.getByLabelText('SMILES or molfile')).toHaveValue(first));
     expect(screen.getByText('First record of two.sdf used; the file holds more')).toBeInTheDocument();

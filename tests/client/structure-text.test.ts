@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { firstSdfRecord, firstSmiles, looksLikeMolfile, structureToSend } from '../../src/components/structure-input/structure-text';
+import {
+  firstSdfRecord,
+  firstSmiles,
+  looksLikeMolfile,
+  structureToSend,
+} from '../../src/components/structure-input/structure-text';
 
 // Molfile and SDF layout: the header block of three lines, the counts line ending in V2000, `M  END`,
 // data items as `> <NAME>`, records ended by `$$$$` (MDL CTfile formats, the open standard).

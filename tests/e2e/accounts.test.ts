@@ -7,7 +7,11 @@ const baseUrl = inject('baseUrl');
 let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 
-const invitee = { email: `e2e-${randomUUID().slice(0, 8)}@example.org`, name: 'Noor Fraction-Collector', password: 'amber lantern over quiet fjords' };
+const invitee = {
+  email: `e2e-${randomUUID().slice(0, 8)}@example.org`,
+  name: 'Noor Fraction-Collector',
+  password: 'amber lantern over quiet fjords',
+};
 
 beforeAll(async () => {
   browser = await openBrowser();
@@ -34,12 +38,15 @@ async function linkFromInbox(to: string, path: string): Promise<string> {
 }
 
 describe('accounts in the browser', () => {
-  it.each(['admin', 'curator', 'member', 'viewer'])('the demo %s signs in and the account menu shows that role', async (role) => {
-    await signIn(page, baseUrl, `${role}@example.org`);
-    await expect(page.locator('summary[aria-label="Account"]').textContent()).resolves.toContain(role);
-    await shot(page, `accounts-demo-${role}`);
-    await signOut();
-  });
+  it.each(['admin', 'curator', 'member', 'viewer'])(
+    'the demo %s signs in and the account menu shows that role',
+    async (role) => {
+      await signIn(page, baseUrl, `${role}@example.org`);
+      await expect(page.locator('summary[aria-label="Account"]').textContent()).resolves.toContain(role);
+      await shot(page, `accounts-demo-${role}`);
+      await signOut();
+    },
+  );
 
   it('an admin invites a new member; the invitee follows the mailed link, sets name and password, and signs in', async () => {
     await signIn(page, baseUrl, 'admin@example.org');

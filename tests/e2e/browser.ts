@@ -7,7 +7,12 @@ export const screenshotDir = join(process.cwd(), 'test-results', 'screenshots');
 export const DEMO_PASSWORD = process.env.RFOLIO_DEMO_PASSWORD ?? 'rfolio-demo-2026';
 
 /** A phone held at the bench: 390 × 844 CSS px, touch, mobile viewport rules. */
-export const PHONE = { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2 } as const;
+export const PHONE = {
+  viewport: { width: 390, height: 844 },
+  isMobile: true,
+  hasTouch: true,
+  deviceScaleFactor: 2,
+} as const;
 
 export interface OpenBrowser {
   context: BrowserContext;
@@ -28,7 +33,15 @@ export async function openBrowser(options: { phone?: boolean } = {}): Promise<Op
     executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
     headless: true,
     ...(options.phone ? PHONE : { viewport: { width: 1280, height: 900 } }),
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const consoleErrors: string[] = [];
   const allowed: RegExp[] = [];
@@ -73,12 +86,16 @@ export async function signIn(page: Page, baseUrl: string, email: string, passwor
  * (inline among other text) is exempt, and so is a visually hidden control whose visible label is the target
  * (the label is measured instead).
  */
-export async function measureLayout(page: Page): Promise<{ scrollWidth: number; viewportWidth: number; smallTargets: string[]; targets: number }> {
+export async function measureLayout(
+  page: Page,
+): Promise<{ scrollWidth: number; viewportWidth: number; smallTargets: string[]; targets: number }> {
   return page.evaluate(`(() => {
     const hidden = (el) => { const b = el.getBoundingClientRect(); return b.width <= 1 && b.height <= 1; };
     const inSentence = (el) => getComputedStyle(el).display === 'inline' && el.parentElement &&
       Array.from(el.parentElement.childNodes).some((node) => node !== el && node.nodeType === 3 && node.textContent.trim().length > 0);
-    const controls = Array.from(document.querySelectorAll('a[href], button, input:not([type=hidden]), select, textarea, summary, [role=button], [role=tab]'));
+    const controls = Array.from(
+      document.querySelectorAll('a[href], button, input:not([type=hidden]), select, textarea, summary, [role=button], [role=tab]'),
+    );
     const small = [];
     let targets = 0;
     for (const control of controls) {
@@ -95,7 +112,8 @@ export async function measureLayout(page: Page): Promise<{ scrollWidth: number; 
       targets += 1;
       if (inSentence(el)) continue;
       if (box.width < 23.5 || box.height < 23.5) {
-        const name = (el.getAttribute('aria-label') || el.innerText || el.getAttribute('name') || '').trim().replace(/\\s+/g, ' ').slice(0, 40);
+        const name = (el.getAttribute('aria-label') || el.innerText || el.getAttribute('name') || '')
+          .trim().replace(/\\s+/g, ' ').slice(0, 40);
         small.push(el.tagName.toLowerCase() + ' "' + name + '" ' + Math.round(box.width) + '×' + Math.round(box.height));
       }
     }

@@ -15,7 +15,12 @@ afterAll(() => browser?.close());
 
 /** A record as the API answers it, read with the page's own session. */
 const apiRecord = (id: number) =>
-  page.evaluate(async (recordId) => (await fetch(`/api/records/${recordId}`)).json(), id) as Promise<{ status: string; mergedIntoId: number | null; notebookRef: string | null; spots: { role: string; rf: number }[] }>;
+  page.evaluate(async (recordId) => (await fetch(`/api/records/${recordId}`)).json(), id) as Promise<{
+    status: string;
+    mergedIntoId: number | null;
+    notebookRef: string | null;
+    spots: { role: string; rf: number }[];
+  }>;
 
 describe('curation in the browser', () => {
   let ids: number[] = [];
@@ -28,7 +33,9 @@ describe('curation in the browser', () => {
     await group.waitFor();
     await expect(group.textContent()).resolves.toMatch(/Target Rf within 0.05/);
     await expect(group.textContent()).resolves.toMatch(/how sure (0\.\d+|1) · (high|medium|low)/);
-    await expect(page.getByRole('article').filter({ hasText: 'One structure entered as several compounds' }).count()).resolves.toBeGreaterThan(0);
+    await expect(
+      page.getByRole('article').filter({ hasText: 'One structure entered as several compounds' }).count(),
+    ).resolves.toBeGreaterThan(0);
     await shot(page, 'curation-queue');
     const href = await group.getByRole('link', { name: /Compare and merge/ }).getAttribute('href');
     ids = new URL(href!, baseUrl).searchParams.get('ids')!.split(',').map(Number).slice(0, 2);
@@ -62,14 +69,17 @@ describe('curation in the browser', () => {
   it('unmerges from the history, and both records are back as they were', async () => {
     const [survivor, merged] = ids;
     await page.goto(`${baseUrl}/curation`);
-    const row = page.getByRole('row', { name: /^Merge \d+$/ }).filter({ has: page.getByRole('link', { name: `#${merged}` }) }).first();
+    const row = page
+      .getByRole('row', { name: /^Merge \d+$/ })
+      .filter({ has: page.getByRole('link', { name: `#${merged}` }) })
+      .first();
     await row.getByRole('button', { name: 'Unmerge' }).click();
     await row.getByRole('button', { name: /Confirm unmerge/ }).click();
     await row.getByText(/undone/).waitFor();
     await shot(page, 'curation-unmerged');
     const restored = await Promise.all([apiRecord(survivor), apiRecord(merged)]);
-    expect(restored.map((record) => [record.status, record.mergedIntoId, record.notebookRef, record.spots.length])).toEqual(
-      before.map((record) => [record.status, record.mergedIntoId, record.notebookRef, record.spots.length]),
-    );
+    expect(
+      restored.map((record) => [record.status, record.mergedIntoId, record.notebookRef, record.spots.length]),
+    ).toEqual(before.map((record) => [record.status, record.mergedIntoId, record.notebookRef, record.spots.length]));
   });
 });

@@ -39,21 +39,30 @@ export async function carbonPositions(page: Page): Promise<{ x: number; y: numbe
   await page.getByRole('tab', { name: 'Paste or file' }).click();
   const molfile = await page.getByLabel('SMILES or molfile').inputValue();
   await openDrawTab(page);
-  const atoms = molfile.split('\n').filter((line) => / C /.test(line)).map((line) => line.trim().split(/\s+/).slice(0, 2).map(Number));
+  const atoms = molfile
+    .split('\n')
+    .filter((line) => / C /.test(line))
+    .map((line) => line.trim().split(/\s+/).slice(0, 2).map(Number));
   const area = canvases(page)[1];
   const box = (await area.boundingBox())!;
-  const { data, info } = await sharp(await area.screenshot()).raw().toBuffer({ resolveWithObject: true });
+  const { data, info } = await sharp(await area.screenshot())
+    .raw()
+    .toBuffer({ resolveWithObject: true });
   let [left, top, right] = [Infinity, Infinity, -1];
   for (let y = 0; y < info.height; y++) {
     for (let x = 0; x < info.width; x++) {
       const at = (y * info.width + x) * info.channels;
-      if (data[at] < 120 && data[at + 1] < 120 && data[at + 2] < 120) [left, top, right] = [Math.min(left, x), Math.min(top, y), Math.max(right, x)];
+      if (data[at] < 120 && data[at + 1] < 120 && data[at + 2] < 120)
+        [left, top, right] = [Math.min(left, x), Math.min(top, y), Math.max(right, x)];
     }
   }
   const xs = atoms.map(([x]) => x);
   const ys = atoms.map(([, y]) => y);
   const scale = (right - left) / (Math.max(...xs) - Math.min(...xs));
-  return atoms.map(([x, y]) => ({ x: box.x + left + (x - Math.min(...xs)) * scale, y: box.y + top + (Math.max(...ys) - y) * scale }));
+  return atoms.map(([x, y]) => ({
+    x: box.x + left + (x - Math.min(...xs)) * scale,
+    y: box.y + top + (Math.max(...ys) - y) * scale,
+  }));
 }
 
 /**

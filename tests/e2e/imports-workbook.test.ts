@@ -19,11 +19,43 @@ async function workbook(): Promise<Buffer> {
       name: 'TLC log',
       rows: [
         [{ value: `TLC log ${tag}`, columnSpan: 7 }, null, null, null, null, null, null],
-        [{ value: 'Compound', columnSpan: 2 }, null, { value: 'Plate', columnSpan: 4 }, null, null, null, { value: 'Who', columnSpan: 1 }],
+        [
+          { value: 'Compound', columnSpan: 2 },
+          null,
+          { value: 'Plate', columnSpan: 4 },
+          null,
+          null,
+          null,
+          { value: 'Who', columnSpan: 1 },
+        ],
         ['Name', 'SMILES', 'Eluent', 'Rf', 'Plate', 'Stain', 'Chemist'],
-        ['3-phenylpropanol', 'OCCCc1ccccc1', 'EtOAc/hexanes 1:3', 0.27, 'Si gel 60 F254', 'KMnO4 (weak)', `R. Ndlovu ${tag}`],
-        ['4-methoxyacetophenone', 'COc1ccc(C(C)=O)cc1', 'EtOAc/hexanes 1:4', { formula: 'D4+0.1', cached: 0.37 }, 'SiO2 (Merck 60)', '2,4-DNP', `R. Ndlovu ${tag}`],
-        ['2-phenylethanol', 'OCCc1ccccc1', 'EtOAc/hexanes 1:3', '0,24', 'silica glitter', 'vanillin dip, 120 °C', `R. Ndlovu ${tag}`],
+        [
+          '3-phenylpropanol',
+          'OCCCc1ccccc1',
+          'EtOAc/hexanes 1:3',
+          0.27,
+          'Si gel 60 F254',
+          'KMnO4 (weak)',
+          `R. Ndlovu ${tag}`,
+        ],
+        [
+          '4-methoxyacetophenone',
+          'COc1ccc(C(C)=O)cc1',
+          'EtOAc/hexanes 1:4',
+          { formula: 'D4+0.1', cached: 0.37 },
+          'SiO2 (Merck 60)',
+          '2,4-DNP',
+          `R. Ndlovu ${tag}`,
+        ],
+        [
+          '2-phenylethanol',
+          'OCCc1ccccc1',
+          'EtOAc/hexanes 1:3',
+          '0,24',
+          'silica glitter',
+          'vanillin dip, 120 °C',
+          `R. Ndlovu ${tag}`,
+        ],
         ['broken', 'C1CC(', 'EtOAc/hexanes 1:3', 0.3, 'silica', 'UV', `R. Ndlovu ${tag}`],
       ],
     },
@@ -43,12 +75,18 @@ describe('importing an Excel workbook in the browser (issue 24)', () => {
     await page.goto(`${baseUrl}/imports`);
     await page.getByRole('heading', { name: 'Import', exact: true }).waitFor();
     await page.locator('input[type=file]').setInputFiles({
-      name: 'tlc-log.xlsx', mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', buffer: await workbook(),
+      name: 'tlc-log.xlsx',
+      mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+      buffer: await workbook(),
     });
     await page.getByTestId('preview-counts').waitFor();
     await expect(page.getByLabel('Sheet').inputValue()).resolves.toBe('TLC log');
-    await expect(page.getByTestId('table-choice').textContent()).resolves.toContain('Header found on sheet row 3 of “TLC log”.');
-    await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe('3 would be added (1 with warnings) · 1 rejected · 0 duplicates');
+    await expect(page.getByTestId('table-choice').textContent()).resolves.toContain(
+      'Header found on sheet row 3 of “TLC log”.',
+    );
+    await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe(
+      '3 would be added (1 with warnings) · 1 rejected · 0 duplicates',
+    );
     await expect(page.getByTestId('row-warnings').first().textContent()).resolves.toContain('"glitter" not recognised');
     await page.getByRole('button', { name: 'Import 3 of 4 rows (1 rejected)' }).waitFor();
     await shot(page, 'imports-workbook-preview');
@@ -64,7 +102,9 @@ describe('importing an Excel workbook in the browser (issue 24)', () => {
   it('commits it; the counts say what came in, and the warnings download names the column', async () => {
     await page.getByRole('button', { name: 'Import 3 of 4 rows (1 rejected)' }).click();
     await page.getByText('Import finished: tlc-log.xlsx').waitFor();
-    await expect(page.getByTestId('import-counts').first().textContent()).resolves.toMatch(/^3 added, 1 rejected, 0 duplicates of 4 rows.*1 came in with warnings/);
+    await expect(page.getByTestId('import-counts').first().textContent()).resolves.toMatch(
+      /^3 added, 1 rejected, 0 duplicates of 4 rows.*1 came in with warnings/,
+    );
     const download = page.waitForEvent('download');
     await page.getByRole('link', { name: 'Download 1 warning' }).first().click();
     const [head, ...rows] = parse(readFileSync((await (await download).path())!, 'utf8'), { bom: true }) as string[][];

@@ -37,7 +37,9 @@ beforeAll(async () => {
 afterAll(() => browser?.close());
 
 async function chooseFile(name: string, content: string) {
-  await page.locator('input[type=file]').setInputFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(content, 'utf8') });
+  await page
+    .locator('input[type=file]')
+    .setInputFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(content, 'utf8') });
   await page.getByTestId('preview-counts').waitFor();
 }
 
@@ -48,19 +50,25 @@ describe('importing a messy spreadsheet in the browser', () => {
     await page.goto(`${baseUrl}/imports`);
     await page.getByRole('heading', { name: 'Import', exact: true }).waitFor();
     await chooseFile('group-history.csv', messy);
-    await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe('3 would be added · 3 rejected · 0 duplicates');
+    await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe(
+      '3 would be added · 3 rejected · 0 duplicates',
+    );
     await expect(page.getByLabel('Field for column "Solvent system"').inputValue()).resolves.toBe('eluent');
     const rejected = page.locator('tr[data-result=rejected]');
     await expect(rejected.count()).resolves.toBe(3);
     await expect(rejected.nth(1).textContent()).resolves.toContain('1.4 is outside (0, 1]');
-    await expect(rejected.nth(2).textContent()).resolves.toContain('Unknown solvent or additive "hexxanes". Did you mean "hexanes"?');
+    await expect(rejected.nth(2).textContent()).resolves.toContain(
+      'Unknown solvent or additive "hexxanes". Did you mean "hexanes"?',
+    );
     await shot(page, 'imports-preview');
   });
 
   it('commits it and sees the counts; the rejected rows are listed with their reasons in the download', async () => {
     await page.getByRole('button', { name: 'Import 3 of 6 rows (3 rejected)' }).click();
     await page.getByText('Import finished: group-history.csv').waitFor();
-    await expect(page.getByTestId('import-counts').textContent()).resolves.toMatch(/^3 added, 3 rejected, 0 duplicates of 6 rows/);
+    await expect(page.getByTestId('import-counts').textContent()).resolves.toMatch(
+      /^3 added, 3 rejected, 0 duplicates of 6 rows/,
+    );
     importId = Number(await page.locator('tr[data-import-id]').first().getAttribute('data-import-id'));
     await shot(page, 'imports-finished');
   });
@@ -79,18 +87,26 @@ describe('importing a messy spreadsheet in the browser', () => {
       return copy.join(';');
     });
     await chooseFile('group-history-rejected-rows.csv', [head.join(';'), ...fixed].join('\n'));
-    await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe('3 would be added · 0 rejected · 0 duplicates');
+    await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe(
+      '3 would be added · 0 rejected · 0 duplicates',
+    );
     await expect(page.getByLabel('Field for column "reason"').inputValue()).resolves.toBe('ignore');
     await page.getByRole('button', { name: 'Import 3 of 3 rows' }).click();
     await page.getByText('Import finished: group-history-rejected-rows.csv').waitFor();
-    await expect(page.getByTestId('import-counts').textContent()).resolves.toMatch(/^3 added, 0 rejected, 0 duplicates of 3 rows/);
+    await expect(page.getByTestId('import-counts').textContent()).resolves.toMatch(
+      /^3 added, 0 rejected, 0 duplicates of 3 rows/,
+    );
     await shot(page, 'imports-fixed-rows');
   });
 
   it('importing the first file again adds nothing: its good rows are duplicates', async () => {
     await chooseFile('group-history.csv', messy);
-    await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe('0 would be added · 3 rejected · 3 duplicates');
-    const history = (await page.evaluate(async () => (await fetch('/api/imports')).json())) as { items: { id: number; accepted: number }[] };
+    await expect(page.getByTestId('preview-counts').textContent()).resolves.toBe(
+      '0 would be added · 3 rejected · 3 duplicates',
+    );
+    const history = (await page.evaluate(async () => (await fetch('/api/imports')).json())) as {
+      items: { id: number; accepted: number }[];
+    };
     expect(history.items.find((item) => item.id === importId)?.accepted).toBe(3);
   });
 });

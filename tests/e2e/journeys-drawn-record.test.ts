@@ -102,7 +102,12 @@ describe('a member contributes a drawn structure, finds it three ways, and bookm
     await page.getByRole('button', { name, pressed: true }).waitFor({ state: 'detached' });
     await page.reload();
     // The list has loaded when it shows a bookmark (the member may keep others) or says there are none.
-    await page.getByRole('button', { name: /^Bookmark /, pressed: true }).first().or(page.getByText('No bookmarks yet')).first().waitFor();
+    await page
+      .getByRole('button', { name: /^Bookmark /, pressed: true })
+      .first()
+      .or(page.getByText('No bookmarks yet'))
+      .first()
+      .waitFor();
     await expect(page.getByRole('button', { name, pressed: true }).count()).resolves.toBe(0);
     await shot(page, 'journey-unbookmarked');
   });

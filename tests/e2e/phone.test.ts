@@ -9,7 +9,19 @@ import { measureLayout, openBrowser, shot, signIn, type OpenBrowser } from './br
  */
 const baseUrl = inject('baseUrl');
 
-const everyone = ['/', '/search', '/search?q=KMnO4', '/records', '/records?group=compound', '/scout', '/tools', '/classes', '/bookmarks', '/account', '/cautions'];
+const everyone = [
+  '/',
+  '/search',
+  '/search?q=KMnO4',
+  '/records',
+  '/records?group=compound',
+  '/scout',
+  '/tools',
+  '/classes',
+  '/bookmarks',
+  '/account',
+  '/cautions',
+];
 const pagesOf: Record<string, string[]> = {
   viewer: everyone,
   member: [...everyone, '/contribute'],
@@ -19,14 +31,26 @@ const pagesOf: Record<string, string[]> = {
 
 /** Words of the code, not of the bench: none may reach a rendered page (see issue 27). */
 const internalWords = [
-  /from-memory/, /\(heuristic\)/, /\bprep_tlc\b/, /\btlc, /, /% strong\b/, /Isocratic: Isocratic/i, /\(isocratic\): Isocratic/i,
-  /mergedRecords|mergedIntoId|photoIds/, /ΜM/, /\bundefined\b/, /\bNaN\b/, /\[object Object\]/,
+  /from-memory/,
+  /\(heuristic\)/,
+  /\bprep_tlc\b/,
+  /\btlc, /,
+  /% strong\b/,
+  /Isocratic: Isocratic/i,
+  /\(isocratic\): Isocratic/i,
+  /mergedRecords|mergedIntoId|photoIds/,
+  /ΜM/,
+  /\bundefined\b/,
+  /\bNaN\b/,
+  /\[object Object\]/,
 ];
 
 async function firstHref(browser: OpenBrowser, path: string, pattern: RegExp): Promise<string> {
   await browser.page.goto(`${baseUrl}${path}`);
   for (let tries = 0; tries < 60; tries += 1) {
-    const hrefs = await browser.page.locator('a[href]').evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));
+    const hrefs = await browser.page
+      .locator('a[href]')
+      .evaluateAll((links) => links.map((link) => link.getAttribute('href') ?? ''));
     const found = hrefs.find((href) => pattern.test(href));
     if (found) return found;
     await browser.page.waitForTimeout(250);
@@ -38,7 +62,11 @@ async function check(browser: OpenBrowser, path: string) {
   const { page } = browser;
   await page.goto(`${baseUrl}${path}`);
   await page.waitForLoadState('networkidle');
-  await page.locator('[role=status]:has-text("Loading")').first().waitFor({ state: 'detached', timeout: 15_000 }).catch(() => undefined);
+  await page
+    .locator('[role=status]:has-text("Loading")')
+    .first()
+    .waitFor({ state: 'detached', timeout: 15_000 })
+    .catch(() => undefined);
   const layout = await measureLayout(page);
   const text = await page.evaluate(() => document.body.innerText);
   return { path, ...layout, words: internalWords.filter((word) => word.test(text)).map(String) };
@@ -97,7 +125,9 @@ describe('contributing from a phone', () => {
 
     const camera = page.locator('input[type=file][capture=environment]');
     expect(await camera.getAttribute('accept')).toBe('image/*');
-    const photo = await sharp({ create: { width: 360, height: 800, channels: 3, background: '#ecefe6' } }).jpeg().toBuffer();
+    const photo = await sharp({ create: { width: 360, height: 800, channels: 3, background: '#ecefe6' } })
+      .jpeg()
+      .toBuffer();
     await camera.setInputFiles({ name: 'plate-under-uv.jpg', mimeType: 'image/jpeg', buffer: photo });
     const preview = page.getByRole('img', { name: 'Preview of plate-under-uv.jpg' });
     await preview.waitFor();
@@ -115,7 +145,11 @@ describe('contributing from a phone', () => {
     await saved.waitFor({ state: 'attached' });
     await saved.scrollIntoViewIfNeeded();
     await saved.waitFor();
-    await page.getByText('hexanes : EtOAc 3 : 1', { exact: false }).first().waitFor().catch(() => undefined);
+    await page
+      .getByText('hexanes : EtOAc 3 : 1', { exact: false })
+      .first()
+      .waitFor()
+      .catch(() => undefined);
     expect((await measureLayout(page)).scrollWidth).toBeLessThanOrEqual(390);
     await shot(page, 'phone-record');
 

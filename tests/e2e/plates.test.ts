@@ -26,7 +26,9 @@ describe('a member reads a plate photo while contributing', () => {
     await page.getByLabel('SMILES or molfile').fill(smiles);
     await page.getByText('C8H8O2').first().waitFor({ timeout: 20_000 });
     await page.getByLabel('Compound name').fill(compoundName);
-    await page.locator('input[type=file][accept*="image/png"]').setInputFiles({ name: 'plate.jpg', mimeType: photo.contentType, buffer: photo.bytes });
+    await page
+      .locator('input[type=file][accept*="image/png"]')
+      .setInputFiles({ name: 'plate.jpg', mimeType: photo.contentType, buffer: photo.bytes });
     await page.getByRole('button', { name: 'Read the plate from the photo' }).click();
     const overlay = page.getByTestId('plate-overlay');
     const spots = overlay.locator('g[data-rf]');
@@ -51,7 +53,9 @@ describe('a member reads a plate photo while contributing', () => {
 
     await page.getByRole('button', { name: 'Use these Rf values for the spots' }).click();
     const rfInputs = page.locator('input[aria-label$=" Rf"]');
-    await expect.poll(async () => Promise.all((await rfInputs.all()).map((input) => input.inputValue()))).toContain(String(after));
+    await expect
+      .poll(async () => Promise.all((await rfInputs.all()).map((input) => input.inputValue())))
+      .toContain(String(after));
     await page.getByRole('button', { name: 'Save record' }).click();
     await page.waitForURL(/\/records\/\d+$/, { timeout: 30_000 });
     await page.getByRole('heading', { level: 1, name: compoundName }).waitFor();

@@ -28,8 +28,12 @@ describe('a member records a purification in the browser', () => {
     await page.getByLabel('Spot 1 Rf').fill('0.31');
     await page.getByRole('button', { name: 'KMnO4' }).click();
     await page.getByLabel('Notebook reference').fill('E2E-01 p. 7');
-    const photo = await sharp({ create: { width: 300, height: 700, channels: 3, background: '#e9eee4' } }).png().toBuffer();
-    await page.locator('input[type=file][accept*="image/png"]').setInputFiles({ name: 'plate.png', mimeType: 'image/png', buffer: photo });
+    const photo = await sharp({ create: { width: 300, height: 700, channels: 3, background: '#e9eee4' } })
+      .png()
+      .toBuffer();
+    await page
+      .locator('input[type=file][accept*="image/png"]')
+      .setInputFiles({ name: 'plate.png', mimeType: 'image/png', buffer: photo });
     await shot(page, 'records-contribute-filled');
     await page.getByRole('button', { name: 'Save record' }).click();
     await page.waitForURL(/\/records\/\d+$/, { timeout: 30_000 });

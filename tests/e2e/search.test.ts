@@ -42,21 +42,25 @@ describe('a member searches the demo group’s records', () => {
     await shot(page, 'search-text');
   });
 
-  it('finds records by a substructure drawn in the editor (a benzene ring with one atom made N): pyridines, not plain benzenes', async () => {
-    await page.goto(`${baseUrl}/search`);
-    await page.getByText('Substructure', { exact: true }).click();
-    await drawPyridine();
-    await page.getByText('Pyridine-like nitrogen').first().waitFor({ timeout: 20_000 }); // the server read the drawing
-    await shot(page, 'search-drawn-pyridine');
-    await page.getByRole('button', { name: 'Search', exact: true }).click();
-    await page.waitForURL(/mode=substructure/);
-    const names = await resultNames();
-    expect(names).toContain('quinoline');
-    expect(names).toContain('2-bromopyridine');
-    expect(names).not.toContain('benzyl alcohol');
-    expect(names).not.toContain('toluene');
-    await shot(page, 'search-substructure');
-  });
+  it(
+    'finds records by a substructure drawn in the editor (a benzene ring with one atom made N): ' +
+      'pyridines, not plain benzenes',
+    async () => {
+      await page.goto(`${baseUrl}/search`);
+      await page.getByText('Substructure', { exact: true }).click();
+      await drawPyridine();
+      await page.getByText('Pyridine-like nitrogen').first().waitFor({ timeout: 20_000 }); // the server read the drawing
+      await shot(page, 'search-drawn-pyridine');
+      await page.getByRole('button', { name: 'Search', exact: true }).click();
+      await page.waitForURL(/mode=substructure/);
+      const names = await resultNames();
+      expect(names).toContain('quinoline');
+      expect(names).toContain('2-bromopyridine');
+      expect(names).not.toContain('benzyl alcohol');
+      expect(names).not.toContain('toluene');
+      await shot(page, 'search-substructure');
+    },
+  );
 
   it('finds records by similarity, the closest first with its Tanimoto score, and shows them as a grid of depictions', async () => {
     await page.goto(`${baseUrl}/search`);
@@ -113,7 +117,12 @@ describe('bookmarks and class pages', () => {
     const histogram = page.getByRole('img', { name: /^Eluent strength used for Ester\./ });
     await histogram.waitFor();
     expect(await histogram.locator('[data-part="bar"]').count()).toBeGreaterThan(0);
-    expect(await page.getByRole('img', { name: /^Target Rf against eluent composition/ }).locator('[data-part="point"]').count()).toBeGreaterThan(0);
+    expect(
+      await page
+        .getByRole('img', { name: /^Target Rf against eluent composition/ })
+        .locator('[data-part="point"]')
+        .count(),
+    ).toBeGreaterThan(0);
     await shot(page, 'class-ester');
   });
 });

@@ -8,7 +8,10 @@ import type { Role } from '../../shared/schemas/auth';
 export const TEST_PASSWORD = 'correct-horse-battery-42';
 
 /** A real user row of the given role with a unique e-mail (each test file isolates its data this way). */
-export async function createUser(role: Role, overrides: Partial<{ email: string; name: string; password: string }> = {}) {
+export async function createUser(
+  role: Role,
+  overrides: Partial<{ email: string; name: string; password: string }> = {},
+) {
   const email = overrides.email ?? `${role}-${randomUUID().slice(0, 8)}@test.invalid`;
   return User.create({
     email,

@@ -13,19 +13,38 @@ export async function recordId(agent: Agent, overrides: Record<string, unknown> 
 }
 
 /** A plate photo row with blob rows of its own (bytes are not an image; nothing here decodes them). */
-export async function addPhotoRow(recordId: number, uploadedBy: number, caption: string | null = null): Promise<number> {
+export async function addPhotoRow(
+  recordId: number,
+  uploadedBy: number,
+  caption: string | null = null,
+): Promise<number> {
   const bytes = Buffer.from(`plate ${randomUUID()}`);
   const key = `test/${randomUUID()}`;
   const thumb = `${key}-thumb`;
   for (const blob of [key, thumb]) {
-    await sequelize.query("INSERT INTO stored_blobs (key, bytes, content_type, byte_size) VALUES (:blob, :bytes, 'image/png', :size)", {
-      replacements: { blob, bytes, size: bytes.length },
-    });
+    await sequelize.query(
+      "INSERT INTO stored_blobs (key, bytes, content_type, byte_size) VALUES (:blob, :bytes, 'image/png', :size)",
+      {
+        replacements: { blob, bytes, size: bytes.length },
+      },
+    );
   }
   const [row] = await sequelize.query<{ id: number }>(
-    `INSERT INTO record_photos (record_id, origin_record_id, uploaded_by, blob_key, thumb_key, content_type, byte_size, width, height, sha256, caption)
+    `INSERT INTO record_photos (record_id, origin_record_id, uploaded_by, blob_key, thumb_key, content_type,
+      byte_size, width, height, sha256, caption)
      VALUES (:recordId, :recordId, :uploadedBy, :key, :thumb, 'image/png', :size, 10, 30, :sha, :caption) RETURNING id`,
-    { replacements: { recordId, uploadedBy, key, thumb, size: bytes.length, sha: createHash('sha256').update(bytes).digest('hex'), caption }, type: QueryTypes.SELECT },
+    {
+      replacements: {
+        recordId,
+        uploadedBy,
+        key,
+        thumb,
+        size: bytes.length,
+        sha: createHash('sha256').update(bytes).digest('hex'),
+        caption,
+      },
+      type: QueryTypes.SELECT,
+    },
   );
   return row.id;
 }
@@ -48,8 +67,13 @@ export type Dump = Record<string, Record<string, unknown>[]>;
 export async function dumpAffected(ids: number[]): Promise<Dump> {
   const dump: Dump = {};
   const tables: [string, string][] = [
-    ['condition_records', 'id'], ['record_spots', 'record_id'], ['record_visualisations', 'record_id'], ['record_photos', 'record_id'],
-    ['record_contributors', 'record_id'], ['record_revisions', 'record_id'], ['bookmarks', 'record_id'],
+    ['condition_records', 'id'],
+    ['record_spots', 'record_id'],
+    ['record_visualisations', 'record_id'],
+    ['record_photos', 'record_id'],
+    ['record_contributors', 'record_id'],
+    ['record_revisions', 'record_id'],
+    ['bookmarks', 'record_id'],
   ];
   for (const [table, column] of tables) {
     const rows = await sequelize.query<{ row: Record<string, unknown> }>(
@@ -62,4 +86,5 @@ export async function dumpAffected(ids: number[]): Promise<Dump> {
 }
 
 /** Sends a JSON POST with the agent's CSRF token. */
-export const post = (agent: Agent, path: string, body: Record<string, unknown> = {}) => agent.post(path).set('X-CSRF-Token', agent.csrf).send(body);
+export const post = (agent: Agent, path: string, body: Record<string, unknown> = {}) =>
+  agent.post(path).set('X-CSRF-Token', agent.csrf).send(body);

@@ -5,7 +5,11 @@ import type { ImportDto } from '../../shared/schemas/import';
 import type { Agent } from './agent';
 
 /** Uploads a file to POST /api/imports (multipart field `file`); `query` e.g. "dryRun=1". */
-export function upload(agent: Agent, content: string | Buffer, options: { name?: string; query?: string; mapping?: Record<string, string> } = {}) {
+export function upload(
+  agent: Agent,
+  content: string | Buffer,
+  options: { name?: string; query?: string; mapping?: Record<string, string> } = {},
+) {
   const request = agent
     .post(`/api/imports${options.query ? `?${options.query}` : ''}`)
     .set('X-CSRF-Token', agent.csrf)
@@ -19,13 +23,18 @@ export async function settled(agent: Agent, id: number, timeoutMs = 60_000): Pro
   for (;;) {
     const res = await agent.get(`/api/imports/${id}`);
     if (res.status === 200 && res.body.status !== 'running') return res.body as ImportDto;
-    if (Date.now() > deadline) throw new Error(`import ${id} still ${res.status === 200 ? res.body.status : res.status} after ${timeoutMs} ms`);
+    if (Date.now() > deadline)
+      throw new Error(`import ${id} still ${res.status === 200 ? res.body.status : res.status} after ${timeoutMs} ms`);
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
 }
 
 /** Uploads, waits for the end and checks that no row went unaccounted for. */
-export async function importFile(agent: Agent, content: string | Buffer, options: { name?: string; mapping?: Record<string, string> } = {}): Promise<ImportDto> {
+export async function importFile(
+  agent: Agent,
+  content: string | Buffer,
+  options: { name?: string; mapping?: Record<string, string> } = {},
+): Promise<ImportDto> {
   const res = await upload(agent, content, options);
   if (![201, 202].includes(res.status)) throw new Error(`upload failed: ${res.status} ${JSON.stringify(res.body)}`);
   const done = await settled(agent, res.body.id);

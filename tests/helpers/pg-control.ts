@@ -20,5 +20,14 @@ export function startPostgres() {
   const port = process.env.RFOLIO_PG_PORT ?? '54339';
   const socket = process.env.RFOLIO_PG_SOCKET ?? '/tmp';
   const logFile = join(process.env.RFOLIO_PGDATA!, '..', 'server.log');
-  pgCtl(['-l', logFile, '-w', '-t', '60', '-o', `-c listen_addresses=127.0.0.1 -p ${port} -k ${socket} -c fsync=off -c max_connections=200`, 'start']);
+  pgCtl([
+    '-l',
+    logFile,
+    '-w',
+    '-t',
+    '60',
+    '-o',
+    `-c listen_addresses=127.0.0.1 -p ${port} -k ${socket} -c fsync=off -c max_connections=200`,
+    'start',
+  ]);
 }

@@ -6,7 +6,13 @@ export function exampleRecordBody(overrides: Record<string, unknown> = {}) {
     structure: 'OCc1ccccc1',
     technique: 'tlc',
     stationaryPhase: 'silica',
-    eluent: { components: [{ solvent: 'EtOAc', parts: 1 }, { solvent: 'hexanes', parts: 4 }], additives: [] },
+    eluent: {
+      components: [
+        { solvent: 'EtOAc', parts: 1 },
+        { solvent: 'hexanes', parts: 4 },
+      ],
+      additives: [],
+    },
     spots: [{ role: 'target', rf: 0.28 }],
     visualisation: ['UV 254', 'KMnO4'],
     outcome: 'clean',

@@ -20,7 +20,8 @@ function join(prefix: string, path: string): string {
 function pathsOf(raw: Layer['rawPath'] | string | string[], where: string): string[] {
   const list = Array.isArray(raw) ? raw : [raw ?? '/'];
   return list.map((p) => {
-    if (typeof p !== 'string') throw new Error(`route-table: a RegExp path under ${where} cannot be probed; use a string path`);
+    if (typeof p !== 'string')
+      throw new Error(`route-table: a RegExp path under ${where} cannot be probed; use a string path`);
     return p;
   });
 }
@@ -55,5 +56,8 @@ export function routeTable(app: Express): RouteEntry[] {
 
 /** A concrete URL for a route path: parameters become 999999999, wildcards "x", optional groups are kept. */
 export function probeUrl(path: string): string {
-  return path.replace(/[{}]/g, '').replace(/:(\w+)/g, '999999999').replace(/\*(\w+)/g, 'x');
+  return path
+    .replace(/[{}]/g, '')
+    .replace(/:(\w+)/g, '999999999')
+    .replace(/\*(\w+)/g, 'x');
 }

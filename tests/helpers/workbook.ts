@@ -1,7 +1,13 @@
 import { strFromU8, strToU8, unzipSync, zipSync } from 'fflate';
 import writeExcelFile from 'write-excel-file/node';
 
-export type FixtureCell = string | number | Date | null | { value: string | number | Date; type?: unknown; format?: string; columnSpan?: number } | { formula: string; cached: number };
+export type FixtureCell =
+  | string
+  | number
+  | Date
+  | null
+  | { value: string | number | Date; type?: unknown; format?: string; columnSpan?: number }
+  | { formula: string; cached: number };
 
 /**
  * Builds an .xlsx in memory with write-excel-file (the reader's sibling library), as a spreadsheet program saves
@@ -30,7 +36,10 @@ export async function buildWorkbook(sheets: { name: string; rows: FixtureCell[][
   const files = unzipSync(new Uint8Array(bytes));
   let index = 0;
   for (const name of Object.keys(files).filter((file) => /^xl\/worksheets\/sheet\d+\.xml$/.test(file))) {
-    const xml = strFromU8(files[name]).replace(/<f>=?([^<]*)<\/f>/g, (_match, formula: string) => `<f>${formula}</f><v>${cached[index++]}</v>`);
+    const xml = strFromU8(files[name]).replace(
+      /<f>=?([^<]*)<\/f>/g,
+      (_match, formula: string) => `<f>${formula}</f><v>${cached[index++]}</v>`,
+    );
     files[name] = strToU8(xml);
   }
   return Buffer.from(zipSync(files));

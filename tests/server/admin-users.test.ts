@@ -30,7 +30,10 @@ describe('PATCH /api/admin/users/:id', () => {
   it('when an admin changes a role, then the person has the new role on their next request and it is audited', async () => {
     const admin = await agentFor(app, 'admin');
     const member = await agentFor(app, 'member');
-    const res = await admin.patch(`/api/admin/users/${member.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ role: 'curator' });
+    const res = await admin
+      .patch(`/api/admin/users/${member.user!.id}`)
+      .set('X-CSRF-Token', admin.csrf)
+      .send({ role: 'curator' });
     expect(res.status).toBe(200);
     expect(res.body.role).toBe('curator');
     expect((await member.get('/api/auth/me')).body.user.role).toBe('curator');
@@ -43,21 +46,38 @@ describe('PATCH /api/admin/users/:id', () => {
     const admin = await agentFor(app, 'admin');
     const member = await agentFor(app, 'member');
     expect((await member.get('/api/auth/me')).body.firstSignIn).toBe(true);
-    const off = await admin.patch(`/api/admin/users/${member.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ status: 'disabled' });
+    const off = await admin
+      .patch(`/api/admin/users/${member.user!.id}`)
+      .set('X-CSRF-Token', admin.csrf)
+      .send({ status: 'disabled' });
     expect(off.body.status).toBe('disabled');
     expect((await member.get('/api/auth/me')).body.user).toBeNull();
     const retry = await agentFor(app);
-    const login = await retry.post('/api/auth/login').set('X-CSRF-Token', retry.csrf).send({ email: member.user!.email, password: 'correct-horse-battery-42' });
+    const login = await retry
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', retry.csrf)
+      .send({ email: member.user!.email, password: 'correct-horse-battery-42' });
     expect(login.status).toBe(403);
     expect(login.body.error).toMatchObject({ code: 'account_disabled', message: expect.stringMatching(/disabled/) });
-    const wrong = await retry.post('/api/auth/login').set('X-CSRF-Token', retry.csrf).send({ email: member.user!.email, password: 'not-the-password-at-all' });
+    const wrong = await retry
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', retry.csrf)
+      .send({ email: member.user!.email, password: 'not-the-password-at-all' });
     expect(wrong.status).toBe(401);
-    const on = await admin.patch(`/api/admin/users/${member.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ status: 'active' });
+    const on = await admin
+      .patch(`/api/admin/users/${member.user!.id}`)
+      .set('X-CSRF-Token', admin.csrf)
+      .send({ status: 'active' });
     expect(on.body.status).toBe('active');
-    const back = await retry.post('/api/auth/login').set('X-CSRF-Token', retry.csrf).send({ email: member.user!.email, password: 'correct-horse-battery-42' });
+    const back = await retry
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', retry.csrf)
+      .send({ email: member.user!.email, password: 'correct-horse-battery-42' });
     expect(back.status).toBe(200);
     expect((await retry.get('/api/auth/me')).body.firstSignIn).toBe(false);
-    const actions = (await AuditEntry.findAll({ where: { subjectType: 'user', subjectId: String(member.user!.id) } })).map((a) => a.action);
+    const actions = (
+      await AuditEntry.findAll({ where: { subjectType: 'user', subjectId: String(member.user!.id) } })
+    ).map((a) => a.action);
     expect(actions).toEqual(expect.arrayContaining(['user.disable', 'user.enable']));
   });
 
@@ -67,14 +87,23 @@ describe('PATCH /api/admin/users/:id', () => {
     const others = await User.findAll({ where: { role: 'admin', status: 'active', id: { [Op.ne]: admin.user!.id } } });
     await User.update({ status: 'disabled' }, { where: { id: others.map((o) => o.id) } });
     try {
-      const demote = await admin.patch(`/api/admin/users/${admin.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ role: 'curator' });
+      const demote = await admin
+        .patch(`/api/admin/users/${admin.user!.id}`)
+        .set('X-CSRF-Token', admin.csrf)
+        .send({ role: 'curator' });
       expect(demote.status).toBe(409);
-      const disable = await admin.patch(`/api/admin/users/${admin.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ status: 'disabled' });
+      const disable = await admin
+        .patch(`/api/admin/users/${admin.user!.id}`)
+        .set('X-CSRF-Token', admin.csrf)
+        .send({ status: 'disabled' });
       expect(disable.status).toBe(409);
       expect((await User.findByPk(admin.user!.id))!.role).toBe('admin');
 
       const second = await createUser('admin');
-      const demoteSecond = await admin.patch(`/api/admin/users/${second.id}`).set('X-CSRF-Token', admin.csrf).send({ role: 'member' });
+      const demoteSecond = await admin
+        .patch(`/api/admin/users/${second.id}`)
+        .set('X-CSRF-Token', admin.csrf)
+        .send({ role: 'member' });
       expect(demoteSecond.status).toBe(200);
     } finally {
       await User.update({ status: 'active' }, { where: { id: others.map((o) => o.id) } });
@@ -84,7 +113,9 @@ describe('PATCH /api/admin/users/:id', () => {
   it('when two admins demote each other at the same moment, then exactly one change goes through', async () => {
     const a = await agentFor(app, 'admin');
     const b = await agentFor(app, 'admin');
-    const others = await User.findAll({ where: { role: 'admin', status: 'active', id: { [Op.notIn]: [a.user!.id, b.user!.id] } } });
+    const others = await User.findAll({
+      where: { role: 'admin', status: 'active', id: { [Op.notIn]: [a.user!.id, b.user!.id] } },
+    });
     await User.update({ status: 'disabled' }, { where: { id: others.map((o) => o.id) } });
     try {
       const [ra, rb] = await Promise.all([
@@ -104,8 +135,15 @@ describe('PATCH /api/admin/users/:id', () => {
   it('when the body has neither role nor status, or an unknown role, then 400; an unknown id is 404', async () => {
     const admin = await agentFor(app, 'admin');
     const target = await createUser('viewer');
-    expect((await admin.patch(`/api/admin/users/${target.id}`).set('X-CSRF-Token', admin.csrf).send({})).status).toBe(400);
-    expect((await admin.patch(`/api/admin/users/${target.id}`).set('X-CSRF-Token', admin.csrf).send({ role: 'owner' })).status).toBe(400);
-    expect((await admin.patch('/api/admin/users/999999999').set('X-CSRF-Token', admin.csrf).send({ role: 'viewer' })).status).toBe(404);
+    expect((await admin.patch(`/api/admin/users/${target.id}`).set('X-CSRF-Token', admin.csrf).send({})).status).toBe(
+      400,
+    );
+    expect(
+      (await admin.patch(`/api/admin/users/${target.id}`).set('X-CSRF-Token', admin.csrf).send({ role: 'owner' }))
+        .status,
+    ).toBe(400);
+    expect(
+      (await admin.patch('/api/admin/users/999999999').set('X-CSRF-Token', admin.csrf).send({ role: 'viewer' })).status,
+    ).toBe(404);
   });
 });

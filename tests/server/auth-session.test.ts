@@ -16,8 +16,14 @@ describe('sign-in and sessions', () => {
   it('when the password is wrong or the e-mail unknown, then the same generic 401', async () => {
     const user = await createUser('viewer');
     const anon = await agentFor(app);
-    const wrong = await anon.post('/api/auth/login').set('X-CSRF-Token', anon.csrf).send({ email: user.email, password: 'not-the-password-1' });
-    const unknown = await anon.post('/api/auth/login').set('X-CSRF-Token', anon.csrf).send({ email: 'nobody@test.invalid', password: TEST_PASSWORD });
+    const wrong = await anon
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ email: user.email, password: 'not-the-password-1' });
+    const unknown = await anon
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ email: 'nobody@test.invalid', password: TEST_PASSWORD });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body).toEqual(unknown.body);

@@ -10,14 +10,21 @@ let viewer: Agent;
 let otherViewer: Agent;
 let record: Awaited<ReturnType<typeof createRecord>>;
 
-const post = (agent: Agent, body: unknown) => agent.post('/api/bookmarks').set('X-CSRF-Token', agent.csrf).send(body as object);
+const post = (agent: Agent, body: unknown) =>
+  agent
+    .post('/api/bookmarks')
+    .set('X-CSRF-Token', agent.csrf)
+    .send(body as object);
 const list = async (agent: Agent) => bookmarkListSchema.parse((await agent.get('/api/bookmarks')).body).items;
 
 beforeAll(async () => {
   member = await agentFor(app, 'member');
   viewer = await agentFor(app, 'viewer');
   otherViewer = await agentFor(app, 'viewer');
-  record = await createRecord(member, { structure: 'CCCCCCCCCCCCCCCCCCCCCC(=O)O', name: 'behenic acid (bookmarks test)' });
+  record = await createRecord(member, {
+    structure: 'CCCCCCCCCCCCCCCCCCCCCC(=O)O',
+    name: 'behenic acid (bookmarks test)',
+  });
 });
 afterAll(close);
 
@@ -63,24 +70,33 @@ describe('POST /api/bookmarks', () => {
 describe('GET, PATCH and DELETE /api/bookmarks', () => {
   it('when another user lists bookmarks, then they see only their own (none)', async () => {
     expect(await list(otherViewer)).toEqual([]);
-    expect((await list(viewer)).map((item) => item.recordId ?? item.compoundId)).toEqual([record.compound.id, record.id]);
+    expect((await list(viewer)).map((item) => item.recordId ?? item.compoundId)).toEqual([
+      record.compound.id,
+      record.id,
+    ]);
   });
 
   it('when the note is changed, then the list shows the new note', async () => {
     const [bookmark] = (await list(viewer)).filter((item) => item.recordId === record.id);
-    const res = await viewer.patch(`/api/bookmarks/${bookmark.id}`).set('X-CSRF-Token', viewer.csrf).send({ note: 'worked twice' });
+    const res = await viewer
+      .patch(`/api/bookmarks/${bookmark.id}`)
+      .set('X-CSRF-Token', viewer.csrf)
+      .send({ note: 'worked twice' });
     expect(res.status).toBe(200);
     expect((await list(viewer)).find((item) => item.id === bookmark.id)?.note).toBe('worked twice');
   });
 
   it('when another user tries to remove someone’s bookmark, then 404 and it stays', async () => {
     const [bookmark] = await list(viewer);
-    expect((await otherViewer.delete(`/api/bookmarks/${bookmark.id}`).set('X-CSRF-Token', otherViewer.csrf)).status).toBe(404);
+    expect(
+      (await otherViewer.delete(`/api/bookmarks/${bookmark.id}`).set('X-CSRF-Token', otherViewer.csrf)).status,
+    ).toBe(404);
     expect((await list(viewer)).map((item) => item.id)).toContain(bookmark.id);
   });
 
   it('when a bookmark is removed by its target, then 204 and it is gone; removing again is 404', async () => {
-    const remove = () => viewer.delete('/api/bookmarks').query({ compoundId: record.compound.id }).set('X-CSRF-Token', viewer.csrf);
+    const remove = () =>
+      viewer.delete('/api/bookmarks').query({ compoundId: record.compound.id }).set('X-CSRF-Token', viewer.csrf);
     expect((await remove()).status).toBe(204);
     expect((await list(viewer)).some((item) => item.compoundId === record.compound.id)).toBe(false);
     expect((await remove()).status).toBe(404);
@@ -90,7 +106,10 @@ describe('GET, PATCH and DELETE /api/bookmarks', () => {
     await viewer.post('/api/auth/logout').set('X-CSRF-Token', viewer.csrf);
     expect((await viewer.get('/api/bookmarks')).status).toBe(401);
     const csrf = (await viewer.get('/api/auth/csrf')).body.token as string;
-    const login = await viewer.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: viewer.user!.email, password: 'correct-horse-battery-42' });
+    const login = await viewer
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', csrf)
+      .send({ email: viewer.user!.email, password: 'correct-horse-battery-42' });
     expect(login.status).toBe(200);
     expect((await list(viewer)).map((item) => item.recordId)).toContain(record.id);
   });

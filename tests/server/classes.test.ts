@@ -12,7 +12,10 @@ let before: ReturnType<typeof classIndexSchema.parse>;
 const made: Record<string, number> = {};
 
 const eluent = (strong: number, weak: number, additives: unknown[] = []) => ({
-  components: [{ solvent: 'EtOAc', parts: strong }, { solvent: 'hexanes', parts: weak }],
+  components: [
+    { solvent: 'EtOAc', parts: strong },
+    { solvent: 'hexanes', parts: weak },
+  ],
   additives,
 });
 
@@ -20,12 +23,36 @@ beforeAll(async () => {
   member = await agentFor(app, 'member');
   viewer = await agentFor(app, 'viewer');
   before = classIndexSchema.parse((await viewer.get('/api/classes')).body);
-  made.lean = (await createRecord(member, { structure: 'N#CCCCCCCCCCCCCCCCCCCCC', eluent: eluent(1, 4), spots: [{ role: 'target', rf: 0.2 }] })).id;
-  made.rich = (await createRecord(member, { structure: 'N#CCCCCCCCCCCCCCCCCCCCC', eluent: eluent(1, 1), spots: [{ role: 'target', rf: 0.45 }] })).id;
-  made.basic = (await createRecord(member, {
-    structure: 'N#CCCCCCCCCCCCCCCCCCCCCN', eluent: eluent(1, 1, [{ additive: 'Et3N', percent: 1 }]), visualisation: ['ninhydrin'], outcome: 'partial',
-  })).id;
-  made.failed = (await createRecord(member, { structure: 'N#CCCCCCCCCCCCCCCCCCCCCN', eluent: eluent(1, 1), visualisation: ['ninhydrin'], outcome: 'failed' })).id;
+  made.lean = (
+    await createRecord(member, {
+      structure: 'N#CCCCCCCCCCCCCCCCCCCCC',
+      eluent: eluent(1, 4),
+      spots: [{ role: 'target', rf: 0.2 }],
+    })
+  ).id;
+  made.rich = (
+    await createRecord(member, {
+      structure: 'N#CCCCCCCCCCCCCCCCCCCCC',
+      eluent: eluent(1, 1),
+      spots: [{ role: 'target', rf: 0.45 }],
+    })
+  ).id;
+  made.basic = (
+    await createRecord(member, {
+      structure: 'N#CCCCCCCCCCCCCCCCCCCCCN',
+      eluent: eluent(1, 1, [{ additive: 'Et3N', percent: 1 }]),
+      visualisation: ['ninhydrin'],
+      outcome: 'partial',
+    })
+  ).id;
+  made.failed = (
+    await createRecord(member, {
+      structure: 'N#CCCCCCCCCCCCCCCCCCCCCN',
+      eluent: eluent(1, 1),
+      visualisation: ['ninhydrin'],
+      outcome: 'failed',
+    })
+  ).id;
 });
 afterAll(close);
 
@@ -51,26 +78,34 @@ describe('GET /api/classes/:key', () => {
   });
 
   it('when a class is opened, then the solvent pair used lists its records and % strong solvent span (20–50 % EtOAc)', () => {
-    const pair = detail.solventPairs.find((item) => item.solvents.join() === ['ethyl-acetate', 'hexanes'].sort().join());
+    const pair = detail.solventPairs.find(
+      (item) => item.solvents.join() === ['ethyl-acetate', 'hexanes'].sort().join(),
+    );
     expect(pair?.records).toBeGreaterThanOrEqual(4);
     expect(pair?.strongPercent?.[0]).toBeLessThanOrEqual(20);
     expect(pair?.strongPercent?.[1]).toBeGreaterThanOrEqual(50);
   });
 
-  it('when eluent strengths are shown, then each lies between the pure solvents’ ε° on silica and the richer mixture is stronger (Snyder’s mixing rule)', () => {
-    const epsilon = (id: number) => detail.strength.points.find((point) => point.recordId === id)!.epsilon;
-    const weak = requireSolvent('hexanes').strength.silica!.value;
-    const strong = requireSolvent('ethyl-acetate').strength.silica!.value;
-    for (const id of [made.lean, made.rich]) {
-      expect(epsilon(id)).toBeGreaterThan(weak);
-      expect(epsilon(id)).toBeLessThan(strong);
-    }
-    expect(epsilon(made.rich)).toBeGreaterThan(epsilon(made.lean));
-    expect(detail.strength.source).toMatch(/Snyder/);
-  });
+  it(
+    'when eluent strengths are shown, then each lies between the pure solvents’ ε° on silica and the ' +
+      'richer mixture is stronger (Snyder’s mixing rule)',
+    () => {
+      const epsilon = (id: number) => detail.strength.points.find((point) => point.recordId === id)!.epsilon;
+      const weak = requireSolvent('hexanes').strength.silica!.value;
+      const strong = requireSolvent('ethyl-acetate').strength.silica!.value;
+      for (const id of [made.lean, made.rich]) {
+        expect(epsilon(id)).toBeGreaterThan(weak);
+        expect(epsilon(id)).toBeLessThan(strong);
+      }
+      expect(epsilon(made.rich)).toBeGreaterThan(epsilon(made.lean));
+      expect(detail.strength.source).toMatch(/Snyder/);
+    },
+  );
 
   it('when Rf is plotted against % strong solvent, then the richer eluent’s record is there with its Rf', () => {
-    expect(detail.rf?.points).toEqual(expect.arrayContaining([expect.objectContaining({ recordId: made.rich, rf: 0.45, strongPercent: 50 })]));
+    expect(detail.rf?.points).toEqual(
+      expect.arrayContaining([expect.objectContaining({ recordId: made.rich, rf: 0.45, strongPercent: 50 })]),
+    );
   });
 
   it('when stains and additives are counted, then failed records do not count as worked', () => {

@@ -28,22 +28,38 @@ function freePort(): Promise<number> {
   });
 }
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON answers of several routes, read field by field
-interface Answer { status: number; headers: Record<string, string | string[] | undefined>; body: Record<string, any> }
+interface Answer {
+  status: number;
+  headers: Record<string, string | string[] | undefined>;
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- JSON answers of several routes, read field by field
+  body: Record<string, any>;
+}
 
 /** One request on a fresh connection (no keep-alive), as a browser behind the TLS proxy sends it. */
 function send(method: string, path: string, headers: Record<string, string> = {}, body?: unknown): Promise<Answer> {
   return new Promise((resolve, reject) => {
     const payload = body === undefined ? undefined : JSON.stringify(body);
-    const req = httpRequest(base + path, {
-      method, agent: false,
-      headers: { 'x-forwarded-proto': 'https', accept: 'application/json', ...(payload ? { 'content-type': 'application/json' } : {}), ...headers },
-    }, (res) => {
-      let text = '';
-      res.setEncoding('utf8');
-      res.on('data', (chunk) => (text += chunk));
-      res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: text ? JSON.parse(text) : null }));
-    });
+    const req = httpRequest(
+      base + path,
+      {
+        method,
+        agent: false,
+        headers: {
+          'x-forwarded-proto': 'https',
+          accept: 'application/json',
+          ...(payload ? { 'content-type': 'application/json' } : {}),
+          ...headers,
+        },
+      },
+      (res) => {
+        let text = '';
+        res.setEncoding('utf8');
+        res.on('data', (chunk) => (text += chunk));
+        res.on('end', () =>
+          resolve({ status: res.statusCode ?? 0, headers: res.headers, body: text ? JSON.parse(text) : null }),
+        );
+      },
+    );
     req.on('error', reject);
     req.end(payload);
   });
@@ -59,13 +75,28 @@ beforeAll(async () => {
   base = `http://127.0.0.1:${port}`;
   child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: root,
-    env: { ...process.env, NODE_ENV: 'production', RFOLIO_WORKERS: '2', SESSION_SECRET: randomBytes(32).toString('hex'), HOST: '127.0.0.1', PORT: String(port), LOG_LEVEL: 'silent', TRUST_PROXY: 'loopback' },
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      RFOLIO_WORKERS: '2',
+      SESSION_SECRET: randomBytes(32).toString('hex'),
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      LOG_LEVEL: 'silent',
+      TRUST_PROXY: 'loopback',
+    },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   const deadline = Date.now() + 90_000;
   for (;;) {
     if (child.exitCode !== null) throw new Error(`the app exited with code ${child.exitCode}`);
-    if (await send('GET', '/api/health').then((res) => res.status === 200, () => false)) break;
+    if (
+      await send('GET', '/api/health').then(
+        (res) => res.status === 200,
+        () => false,
+      )
+    )
+      break;
     if (Date.now() > deadline) throw new Error('the app did not become healthy');
     await new Promise((resolve) => setTimeout(resolve, 250));
   }
@@ -82,7 +113,9 @@ afterAll(async () => {
 describe('RFOLIO_WORKERS=2', () => {
   it('when it has started, then the primary runs two worker processes', () => {
     // Children running the app itself (tsx may also have an esbuild helper of its own).
-    const children = execFileSync('ps', ['-o', 'pid=,args=', '--ppid', String(child.pid)], { encoding: 'utf8' }).trim().split('\n');
+    const children = execFileSync('ps', ['-o', 'pid=,args=', '--ppid', String(child.pid)], { encoding: 'utf8' })
+      .trim()
+      .split('\n');
     const workers = children.filter((line) => line.includes('server/index.ts'));
     expect(workers, children.join('\n')).toHaveLength(2);
   });
@@ -91,17 +124,33 @@ describe('RFOLIO_WORKERS=2', () => {
     const user = await createUser('member');
     const csrf = await send('GET', '/api/auth/csrf');
     let cookie = cookieOf(csrf);
-    const login = await send('POST', '/api/auth/login', { cookie, 'x-csrf-token': csrf.body.token }, { email: user.email, password: TEST_PASSWORD });
+    const login = await send(
+      'POST',
+      '/api/auth/login',
+      { cookie, 'x-csrf-token': csrf.body.token },
+      { email: user.email, password: TEST_PASSWORD },
+    );
     expect(login.status).toBe(200);
     cookie = cookieOf(login, cookie);
     const token = login.body.csrfToken as string;
 
-    const created = await send('POST', '/api/records', { cookie, 'x-csrf-token': token }, exampleRecordBody({ notes: 'before the edit' }));
+    const created = await send(
+      'POST',
+      '/api/records',
+      { cookie, 'x-csrf-token': token },
+      exampleRecordBody({ notes: 'before the edit' }),
+    );
     expect(created.status).toBe(201);
     const id = created.body.id as number;
-    for (let i = 0; i < 6; i++) expect((await send('GET', `/api/records/${id}`, { cookie })).body.notes).toBe('before the edit');
+    for (let i = 0; i < 6; i++)
+      expect((await send('GET', `/api/records/${id}`, { cookie })).body.notes).toBe('before the edit');
 
-    const edited = await send('PATCH', `/api/records/${id}`, { cookie, 'x-csrf-token': token }, { notes: 'after the edit' });
+    const edited = await send(
+      'PATCH',
+      `/api/records/${id}`,
+      { cookie, 'x-csrf-token': token },
+      { notes: 'after the edit' },
+    );
     expect(edited.status).toBe(200);
     for (let i = 0; i < 6; i++) {
       const read = await send('GET', `/api/records/${id}`, { cookie });

@@ -15,11 +15,12 @@ let rdkit: RDKitModule;
 beforeAll(async () => {
   member = await agentFor(app, 'member');
   viewer = await agentFor(app, 'viewer');
-  rdkit = (await (initRDKitModule as unknown as () => Promise<RDKitModule>)());
+  rdkit = await (initRDKitModule as unknown as () => Promise<RDKitModule>)();
 });
 afterAll(close);
 
-const parse = (agent: Agent, structure: string) => agent.post('/api/structures/parse').set('X-CSRF-Token', agent.csrf).send({ structure });
+const parse = (agent: Agent, structure: string) =>
+  agent.post('/api/structures/parse').set('X-CSRF-Token', agent.csrf).send({ structure });
 
 describe('POST /api/structures/parse', () => {
   it.each([
@@ -28,18 +29,21 @@ describe('POST /api/structures/parse', () => {
     ['indole', 'c1ccc2[nH]ccc2c1'],
     ['N-Boc-glycine', 'CC(C)(C)OC(=O)NCC(=O)O'],
     ['4-bromoanisole', 'COc1ccc(Br)cc1'],
-  ])('when a viewer parses %s, then MW, exact mass and TPSA agree with RDKit MinimalLib (independent implementation)', async (_name, smiles) => {
-    const res = await parse(viewer, smiles);
-    expect(res.status).toBe(200);
-    const result = structureParseResultSchema.parse(res.body);
-    const mol = rdkit.get_mol(smiles);
-    const reference = JSON.parse(mol.get_descriptors()) as { amw: number; exactmw: number; tpsa: number };
-    mol.delete();
-    expect(result.mw).toBeCloseTo(reference.amw, 1);
-    expect(result.exactMass).toBeCloseTo(reference.exactmw, 3);
-    expect(Math.abs(result.tpsa - reference.tpsa)).toBeLessThan(0.5);
-    expect(result.svg).toMatch(/^<svg/);
-  });
+  ])(
+    'when a viewer parses %s, then MW, exact mass and TPSA agree with RDKit MinimalLib (independent implementation)',
+    async (_name, smiles) => {
+      const res = await parse(viewer, smiles);
+      expect(res.status).toBe(200);
+      const result = structureParseResultSchema.parse(res.body);
+      const mol = rdkit.get_mol(smiles);
+      const reference = JSON.parse(mol.get_descriptors()) as { amw: number; exactmw: number; tpsa: number };
+      mol.delete();
+      expect(result.mw).toBeCloseTo(reference.amw, 1);
+      expect(result.exactMass).toBeCloseTo(reference.exactmw, 3);
+      expect(Math.abs(result.tpsa - reference.tpsa)).toBeLessThan(0.5);
+      expect(result.svg).toMatch(/^<svg/);
+    },
+  );
 
   it('when benzyl alcohol is parsed, then its formula is C7H8O (handbook) and it carries the alcohol class', async () => {
     const result = (await parse(viewer, 'OCc1ccccc1')).body;
@@ -106,7 +110,9 @@ describe('GET /api/compounds and /api/compounds/:id', () => {
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(String(res.body)).toMatch(/<svg/);
     expect(res.headers['cache-control']).toMatch(/max-age/);
-    const again = await viewer.get(`/api/compounds/${record.body.compound.id}/svg`).set('If-None-Match', res.headers.etag);
+    const again = await viewer
+      .get(`/api/compounds/${record.body.compound.id}/svg`)
+      .set('If-None-Match', res.headers.etag);
     expect(again.status).toBe(304);
   });
 

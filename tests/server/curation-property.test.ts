@@ -24,19 +24,30 @@ const text = fc.stringMatching(/^[A-Za-z0-9]([A-Za-z0-9 ,.;:%()-]{0,29}[A-Za-z0-
 const recordArb = fc.record({
   author: fc.integer({ min: 0, max: 1 }),
   targetRf: fc.integer({ min: 5, max: 95 }).map((n) => n / 100),
-  otherSpots: fc.array(fc.record({ role: fc.constantFrom('starting_material', 'by_product', 'unknown'), rf: fc.integer({ min: 5, max: 100 }).map((n) => n / 100) }), { maxLength: 3 }),
+  otherSpots: fc.array(
+    fc.record({
+      role: fc.constantFrom('starting_material', 'by_product', 'unknown'),
+      rf: fc.integer({ min: 5, max: 100 }).map((n) => n / 100),
+    }),
+    { maxLength: 3 },
+  ),
   visualisation: fc.subarray(['UV 254', 'KMnO4', 'CAM', 'iodine', 'vanillin']),
   outcome: fc.constantFrom('clean', 'partial', 'failed'),
   notes: fc.option(text, { nil: null }),
   diameterMm: fc.option(fc.constantFrom(10, 20, 40), { nil: null }),
   photos: fc.integer({ min: 0, max: 2 }),
-  bookmarks: fc.uniqueArray(fc.record({ reader: fc.integer({ min: 0, max: 2 }), note: fc.option(text, { nil: null }) }), { maxLength: 3, selector: (item) => item.reader }),
+  bookmarks: fc.uniqueArray(
+    fc.record({ reader: fc.integer({ min: 0, max: 2 }), note: fc.option(text, { nil: null }) }),
+    { maxLength: 3, selector: (item) => item.reader },
+  ),
   edits: fc.array(fc.record({ by: fc.constantFrom('author', 'curator'), notebookRef: text }), { maxLength: 2 }),
 });
 const scenarioArb = fc.record({
   records: fc.array(recordArb, { minLength: 2, maxLength: 4 }),
   survivor: fc.nat(),
-  choices: fc.array(fc.tuple(fc.constantFrom(...mergeableFields.filter((field) => field !== 'compound')), fc.nat()), { maxLength: 5 }),
+  choices: fc.array(fc.tuple(fc.constantFrom(...mergeableFields.filter((field) => field !== 'compound')), fc.nat()), {
+    maxLength: 5,
+  }),
 });
 type Scenario = typeof scenarioArb extends fc.Arbitrary<infer T> ? T : never;
 
@@ -45,14 +56,21 @@ async function build(scenario: Scenario): Promise<number[]> {
   for (const spec of scenario.records) {
     const author = authors[spec.author];
     const id = await recordId(author, {
-      structure, outcome: spec.outcome, notes: spec.notes, visualisation: spec.visualisation,
-      spots: [{ role: 'target', rf: spec.targetRf }, ...spec.otherSpots], column: spec.diameterMm ? { diameterMm: spec.diameterMm } : null,
+      structure,
+      outcome: spec.outcome,
+      notes: spec.notes,
+      visualisation: spec.visualisation,
+      spots: [{ role: 'target', rf: spec.targetRf }, ...spec.otherSpots],
+      column: spec.diameterMm ? { diameterMm: spec.diameterMm } : null,
     });
     for (let n = 0; n < spec.photos; n++) await addPhotoRow(id, author.user!.id, `plate ${n + 1}`);
     for (const bookmark of spec.bookmarks) await addBookmarkRow(readers[bookmark.reader].user!.id, id, bookmark.note);
     for (const edit of spec.edits) {
       const editor = edit.by === 'author' ? author : curator;
-      const res = await editor.patch(`/api/records/${id}`).set('X-CSRF-Token', editor.csrf).send({ notebookRef: edit.notebookRef });
+      const res = await editor
+        .patch(`/api/records/${id}`)
+        .set('X-CSRF-Token', editor.csrf)
+        .send({ notebookRef: edit.notebookRef });
       expect(res.status).toBe(200);
     }
     ids.push(id);
@@ -60,7 +78,8 @@ async function build(scenario: Scenario): Promise<number[]> {
   return ids;
 }
 
-const omit = (rows: Record<string, unknown>[], keys: string[]) => rows.map((row) => Object.fromEntries(Object.entries(row).filter(([key]) => !keys.includes(key))));
+const omit = (rows: Record<string, unknown>[], keys: string[]) =>
+  rows.map((row) => Object.fromEntries(Object.entries(row).filter(([key]) => !keys.includes(key))));
 const rowsOf = (dump: Dump, table: string, recordId: number) => dump[table].filter((row) => row.record_id === recordId);
 const users = (rows: Record<string, unknown>[]) => new Set(rows.map((row) => row.user_id));
 
@@ -76,7 +95,9 @@ function expectNothingDropped(before: Dump, during: Dump, survivorId: number, id
   }
   const stains = rowsOf(during, 'record_visualisations', survivorId).map((row) => `${row.method}|${row.note ?? ''}`);
   expect(new Set(stains).size).toBe(stains.length);
-  expect(new Set(before.record_visualisations.map((row) => `${row.method}|${row.note ?? ''}`)).size).toBe(stains.length);
+  expect(new Set(before.record_visualisations.map((row) => `${row.method}|${row.note ?? ''}`)).size).toBe(
+    stains.length,
+  );
   const targets = rowsOf(during, 'record_spots', survivorId).filter((row) => row.role === 'target').length;
   expect(targets).toBe(before.record_spots.some((row) => row.role === 'target') ? 1 : 0);
   expect(during.record_revisions.length).toBe(before.record_revisions.length + ids.length);
@@ -85,9 +106,12 @@ function expectNothingDropped(before: Dump, during: Dump, survivorId: number, id
     const kept = rowsOf(during, 'bookmarks', survivorId).find((row) => row.user_id === bookmark.user_id);
     expect(String(kept?.note)).toContain(String(bookmark.note));
   }
-  expect([...users(rowsOf(during, 'record_contributors', survivorId))].sort()).toEqual([...users(before.record_contributors)].sort());
+  expect([...users(rowsOf(during, 'record_contributors', survivorId))].sort()).toEqual(
+    [...users(before.record_contributors)].sort(),
+  );
   const survivor = during.condition_records.find((row) => row.id === survivorId)!;
-  for (const record of before.condition_records.filter((row) => row.notes)) expect(String(survivor.notes)).toContain(String(record.notes));
+  for (const record of before.condition_records.filter((row) => row.notes))
+    expect(String(survivor.notes)).toContain(String(record.notes));
   for (const record of during.condition_records.filter((row) => row.id !== survivorId)) {
     expect(record).toMatchObject({ status: 'merged', merged_into_id: survivorId });
   }
@@ -95,8 +119,12 @@ function expectNothingDropped(before: Dump, during: Dump, survivorId: number, id
 
 /** Every row as it was; the only differences are history moving on (revision +2, updated_at, two new revisions each). */
 function expectRestored(before: Dump, after: Dump, ids: number[]) {
-  expect(omit(after.condition_records, ['revision', 'updated_at'])).toEqual(omit(before.condition_records, ['revision', 'updated_at']));
-  after.condition_records.forEach((row, index) => expect(row.revision).toBe((before.condition_records[index].revision as number) + 2));
+  expect(omit(after.condition_records, ['revision', 'updated_at'])).toEqual(
+    omit(before.condition_records, ['revision', 'updated_at']),
+  );
+  after.condition_records.forEach((row, index) =>
+    expect(row.revision).toBe((before.condition_records[index].revision as number) + 2),
+  );
   for (const table of ['record_spots', 'record_visualisations', 'record_photos', 'record_contributors', 'bookmarks']) {
     expect(after[table]).toEqual(before[table]);
   }
@@ -106,24 +134,29 @@ function expectRestored(before: Dump, after: Dump, ids: number[]) {
 }
 
 describe('merge then unmerge over random sets of records (fast-check)', () => {
-  it('when random records are merged and the merge undone, then nothing is dropped in between and every row comes back as it was', async () => {
-    await fc.assert(
-      fc.asyncProperty(scenarioArb, async (scenario) => {
-        const ids = await build(scenario);
-        const survivorId = ids[scenario.survivor % ids.length];
-        const mergedIds = ids.filter((id) => id !== survivorId);
-        const fields = Object.fromEntries(scenario.choices.map(([field, pick]) => [field, ids[pick % ids.length]]));
-        const before = await dumpAffected(ids);
+  it(
+    'when random records are merged and the merge undone, then nothing is dropped in between and ' +
+      'every row comes back as it was',
+    async () => {
+      await fc.assert(
+        fc.asyncProperty(scenarioArb, async (scenario) => {
+          const ids = await build(scenario);
+          const survivorId = ids[scenario.survivor % ids.length];
+          const mergedIds = ids.filter((id) => id !== survivorId);
+          const fields = Object.fromEntries(scenario.choices.map(([field, pick]) => [field, ids[pick % ids.length]]));
+          const before = await dumpAffected(ids);
 
-        const merged = await post(curator, '/api/curation/merge', { survivorId, mergedIds, fields });
-        expect(merged.status, JSON.stringify(merged.body)).toBe(201);
-        expectNothingDropped(before, await dumpAffected(ids), survivorId, ids);
+          const merged = await post(curator, '/api/curation/merge', { survivorId, mergedIds, fields });
+          expect(merged.status, JSON.stringify(merged.body)).toBe(201);
+          expectNothingDropped(before, await dumpAffected(ids), survivorId, ids);
 
-        const undone = await post(curator, `/api/curation/unmerge/${merged.body.mergeId}`);
-        expect(undone.status, JSON.stringify(undone.body)).toBe(200);
-        expectRestored(before, await dumpAffected(ids), ids);
-      }),
-      { numRuns: 15 },
-    );
-  }, 240_000);
+          const undone = await post(curator, `/api/curation/unmerge/${merged.body.mergeId}`);
+          expect(undone.status, JSON.stringify(undone.body)).toBe(200);
+          expectRestored(before, await dumpAffected(ids), ids);
+        }),
+        { numRuns: 15 },
+      );
+    },
+    240_000,
+  );
 });

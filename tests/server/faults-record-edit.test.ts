@@ -16,9 +16,14 @@ afterAll(close);
 
 /** What a half-written edit would disturb: the record row, its spots, its revision counter and its revisions. */
 async function persisted(db: pg.Client, id: number) {
-  const record = await db.query('SELECT revision, outcome, outcome_reason, notes, target_rf FROM condition_records WHERE id = $1', [id]);
+  const record = await db.query(
+    'SELECT revision, outcome, outcome_reason, notes, target_rf FROM condition_records WHERE id = $1',
+    [id],
+  );
   const spots = await db.query('SELECT role, rf FROM record_spots WHERE record_id = $1 ORDER BY position, id', [id]);
-  const revisions = await db.query('SELECT number, action FROM record_revisions WHERE record_id = $1 ORDER BY number', [id]);
+  const revisions = await db.query('SELECT number, action FROM record_revisions WHERE record_id = $1 ORDER BY number', [
+    id,
+  ]);
   return { record: record.rows[0], spots: spots.rows, revisions: revisions.rows };
 }
 
@@ -46,7 +51,10 @@ async function waitForRecovery() {
 const edit = {
   outcome: 'partial',
   outcomeReason: 'The by-product tailed into the last fractions.',
-  spots: [{ role: 'target', rf: 0.33 }, { role: 'by_product', rf: 0.41 }],
+  spots: [
+    { role: 'target', rf: 0.33 },
+    { role: 'by_product', rf: 0.41 },
+  ],
   notes: 'Edited while the database went away.',
 };
 const patchRecord = (id: number) => member.patch(`/api/records/${id}`).set('X-CSRF-Token', member.csrf).send(edit);
@@ -72,8 +80,13 @@ async function stopDuringEdit(lock: (side: pg.Client, id: number) => Promise<voi
   await lock(side, id);
 
   const pending = patchRecord(id).then((res) => res);
-  const waiting = `SELECT count(*)::int AS n FROM pg_stat_activity WHERE wait_event_type = 'Lock' AND datname = current_database() AND query LIKE $1`;
-  await waitFor(async () => (await observer.query(waiting, [`${waitingStatement}%`])).rows[0].n > 0, `the PATCH waits at ${waitingStatement}`);
+  const waiting =
+    `SELECT count(*)::int AS n FROM pg_stat_activity WHERE wait_event_type = 'Lock' AND ` +
+    `datname = current_database() AND query LIKE $1`;
+  await waitFor(
+    async () => (await observer.query(waiting, [`${waitingStatement}%`])).rows[0].n > 0,
+    `the PATCH waits at ${waitingStatement}`,
+  );
 
   stopPostgres();
   try {
@@ -108,14 +121,18 @@ async function editLandsWhole(id: number, revisionBefore: number) {
 }
 
 describe('when PostgreSQL stops in the middle of a record edit (PATCH /api/records/:id)', () => {
-  it('while the edit waits for the record row: 503 meanwhile, nothing written, and the edit succeeds once the database is back', async () => {
-    const { id, before, after } = await stopDuringEdit(async (side, recordId) => {
-      await side.query('BEGIN');
-      await side.query('SELECT id FROM condition_records WHERE id = $1 FOR UPDATE', [recordId]);
-    }, 'SELECT');
-    expect(after).toEqual(before);
-    await editLandsWhole(id, before.record.revision);
-  });
+  it(
+    'while the edit waits for the record row: 503 meanwhile, nothing written, and the edit succeeds ' +
+      'once the database is back',
+    async () => {
+      const { id, before, after } = await stopDuringEdit(async (side, recordId) => {
+        await side.query('BEGIN');
+        await side.query('SELECT id FROM condition_records WHERE id = $1 FOR UPDATE', [recordId]);
+      }, 'SELECT');
+      expect(after).toEqual(before);
+      await editLandsWhole(id, before.record.revision);
+    },
+  );
 
   it('after the record row and its spots are written, before its revision: the open transaction is lost whole, never half', async () => {
     const { id, before, after } = await stopDuringEdit(async (side) => {

@@ -30,22 +30,31 @@ beforeAll(async () => {
 afterAll(close);
 
 /** The session id inside the signed cookie value `rfolio.sid=s%3A<sid>.<signature>`. */
-const sidOf = (cookie: string) => decodeURIComponent(/rfolio\.sid=([^;]+)/.exec(cookie)![1]).replace(/^s:/, '').split('.')[0];
+const sidOf = (cookie: string) =>
+  decodeURIComponent(/rfolio\.sid=([^;]+)/.exec(cookie)![1])
+    .replace(/^s:/, '')
+    .split('.')[0];
 
 describe('secrets never reach the log (issue 23 point 1)', () => {
-  it('when a signed-in curator makes reads and a write, then neither the session cookie nor the CSRF token appears in any log line', async () => {
-    expect(sessionCookie).toMatch(/rfolio\.sid=/);
-    captured.lines.length = 0;
-    expect((await curator.get('/api/records')).status).toBe(200);
-    expect((await curator.post('/api/bookmarks').set('X-CSRF-Token', curator.csrf).send({ recordId: 999_999_999 })).status).toBeGreaterThanOrEqual(400);
-    expect((await curator.get('/api/no-such-route')).status).toBe(404);
-    const log = captured.lines.join('');
-    expect(captured.lines.length).toBeGreaterThanOrEqual(3);
-    expect(log).toContain('/api/records');
-    expect(log).not.toContain(sidOf(sessionCookie));
-    expect(log).not.toContain(curator.csrf);
-    expect(log).not.toMatch(/rfolio\.sid/);
-  });
+  it(
+    'when a signed-in curator makes reads and a write, then neither the session cookie nor the CSRF ' +
+      'token appears in any log line',
+    async () => {
+      expect(sessionCookie).toMatch(/rfolio\.sid=/);
+      captured.lines.length = 0;
+      expect((await curator.get('/api/records')).status).toBe(200);
+      expect(
+        (await curator.post('/api/bookmarks').set('X-CSRF-Token', curator.csrf).send({ recordId: 999_999_999 })).status,
+      ).toBeGreaterThanOrEqual(400);
+      expect((await curator.get('/api/no-such-route')).status).toBe(404);
+      const log = captured.lines.join('');
+      expect(captured.lines.length).toBeGreaterThanOrEqual(3);
+      expect(log).toContain('/api/records');
+      expect(log).not.toContain(sidOf(sessionCookie));
+      expect(log).not.toContain(curator.csrf);
+      expect(log).not.toMatch(/rfolio\.sid/);
+    },
+  );
 
   it('when a script calls with a Bearer token, then the token is in no log line', async () => {
     const minted = await curator.post('/api/tokens').set('X-CSRF-Token', curator.csrf).send({ name: 'log check' });
@@ -59,19 +68,25 @@ describe('secrets never reach the log (issue 23 point 1)', () => {
     expect(captured.lines.join('')).not.toContain(token);
   });
 
-  it('when a password-reset link is requested and opened, then its token is in no log line (the URL is logged as /password-reset/[redacted])', async () => {
-    const user = await createUser('member');
-    const since = lastMailId();
-    const anon = await agentFor(app);
-    expect((await anon.post('/api/auth/password-reset').set('X-CSRF-Token', anon.csrf).send({ email: user.email })).status).toBe(202);
-    const { token } = await mailedLink(user.email, '/password-reset/', since);
-    captured.lines.length = 0;
-    expect((await request(app).get(`/api/auth/password-reset/${token}`)).status).toBe(200);
-    expect((await request(app).get(`/password-reset/${token}`)).status).toBeLessThan(500);
-    const log = captured.lines.join('');
-    expect(log).toContain('/password-reset/[redacted]');
-    expect(log).not.toContain(token);
-  });
+  it(
+    'when a password-reset link is requested and opened, then its token is in no log line (the URL ' +
+      'is logged as /password-reset/[redacted])',
+    async () => {
+      const user = await createUser('member');
+      const since = lastMailId();
+      const anon = await agentFor(app);
+      expect(
+        (await anon.post('/api/auth/password-reset').set('X-CSRF-Token', anon.csrf).send({ email: user.email })).status,
+      ).toBe(202);
+      const { token } = await mailedLink(user.email, '/password-reset/', since);
+      captured.lines.length = 0;
+      expect((await request(app).get(`/api/auth/password-reset/${token}`)).status).toBe(200);
+      expect((await request(app).get(`/password-reset/${token}`)).status).toBeLessThan(500);
+      const log = captured.lines.join('');
+      expect(log).toContain('/password-reset/[redacted]');
+      expect(log).not.toContain(token);
+    },
+  );
 });
 
 describe('a 500 is logged once (issue 19 point 4)', () => {
@@ -85,7 +100,11 @@ describe('a 500 is logged once (issue 19 point 4)', () => {
     const stack = (broken as unknown as { router: { stack: { name: string }[] } }).router.stack;
     broken.use('/api', boom);
     const added = stack.pop()!;
-    stack.splice(stack.findIndex((layer) => layer.name === 'apiNotFound'), 0, added);
+    stack.splice(
+      stack.findIndex((layer) => layer.name === 'apiNotFound'),
+      0,
+      added,
+    );
     captured.lines.length = 0;
     const res = await request(broken).get('/api/boom');
     await closeBroken();

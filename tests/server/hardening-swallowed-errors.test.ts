@@ -5,7 +5,13 @@ const captured = vi.hoisted(() => ({ lines: [] as string[] }));
 vi.mock('../../server/http/logger', async (importOriginal) => {
   const original = await importOriginal<typeof import('../../server/http/logger')>();
   const { default: pino } = await import('pino');
-  return { ...original, logger: pino({ ...original.loggerOptions, level: 'trace' }, { write: (line: string) => void captured.lines.push(line) }) };
+  return {
+    ...original,
+    logger: pino(
+      { ...original.loggerOptions, level: 'trace' },
+      { write: (line: string) => void captured.lines.push(line) },
+    ),
+  };
 });
 // Pruning that fails, as it would with the database away; the rest of the change log is the real one.
 vi.mock('../../server/features/search/change-log', async (importOriginal) => ({
@@ -22,7 +28,10 @@ const waitFor = async (check: () => boolean) => {
   for (let i = 0; i < 200 && !check(); i++) await new Promise((resolve) => setTimeout(resolve, 25));
   return check();
 };
-const logged = (text: string) => captured.lines.filter((line) => line.includes(text)).map((line) => JSON.parse(line) as { level: number; msg: string });
+const logged = (text: string) =>
+  captured.lines
+    .filter((line) => line.includes(text))
+    .map((line) => JSON.parse(line) as { level: number; msg: string });
 
 const indexes = new SearchIndexes();
 afterAll(() => indexes.stop());
@@ -51,6 +60,8 @@ describe('failures that used to vanish', () => {
     const { pool } = sessionMiddleware();
     pool.emit('error', new Error('session-pool-failure-for-the-test'), undefined as never);
     await pool.end();
-    expect(logged('session-pool-failure-for-the-test')).toEqual([expect.objectContaining({ level: 40, msg: 'session store connection failed' })]);
+    expect(logged('session-pool-failure-for-the-test')).toEqual([
+      expect.objectContaining({ level: 40, msg: 'session store connection failed' }),
+    ]);
   });
 });

@@ -4,7 +4,14 @@ import { sniffDelimiter } from '../../server/features/imports/csv-source';
 
 describe('cells of a spreadsheet', () => {
   it.each([
-    ['0.35', 0.35], ['0,35', 0.35], ['~0.3', 0.3], ['ca. 0.3', 0.3], [' 0.4 ', 0.4], ['.5', 0.5], ['1.2e-1', 0.12], ['', null],
+    ['0.35', 0.35],
+    ['0,35', 0.35],
+    ['~0.3', 0.3],
+    ['ca. 0.3', 0.3],
+    [' 0.4 ', 0.4],
+    ['.5', 0.5],
+    ['1.2e-1', 0.12],
+    ['', null],
   ])('reads the number "%s" as %s', (cell, value) => {
     expect(readNumber(cell, 'Rf')).toEqual({ ok: true, value });
   });
@@ -18,20 +25,32 @@ describe('cells of a spreadsheet', () => {
   });
 
   it.each([
-    ['UV, KMnO4', ['UV', 'KMnO4']], ['UV 254 + CAM', ['UV 254', 'CAM']], ['iodine; PMA', ['iodine', 'PMA']],
-    ['UV and anisaldehyde', ['UV', 'anisaldehyde']], ['UV 254/365', ['UV 254', 'UV 365']], ['KMnO4 dip (heat)', ['KMnO4']],
-    ["Hanessian's stain", ["Hanessian's stain"]], ['UV/ninhydrin', ['UV', 'ninhydrin']],
+    ['UV, KMnO4', ['UV', 'KMnO4']],
+    ['UV 254 + CAM', ['UV 254', 'CAM']],
+    ['iodine; PMA', ['iodine', 'PMA']],
+    ['UV and anisaldehyde', ['UV', 'anisaldehyde']],
+    ['UV 254/365', ['UV 254', 'UV 365']],
+    ['KMnO4 dip (heat)', ['KMnO4']],
+    ["Hanessian's stain", ["Hanessian's stain"]],
+    ['UV/ninhydrin', ['UV', 'ninhydrin']],
   ])('splits the visualisation cell "%s" into %j', (cell, parts) => {
     expect(splitVisualisations(cell)).toEqual(parts);
   });
 
   it('reads outcomes and techniques from the words people write, and names the allowed ones otherwise', () => {
     expect(['Pure', 'mixed', 'no separation'].map((cell) => readOutcome(cell))).toEqual([
-      { ok: true, value: 'clean' }, { ok: true, value: 'partial' }, { ok: true, value: 'failed' },
+      { ok: true, value: 'clean' },
+      { ok: true, value: 'partial' },
+      { ok: true, value: 'failed' },
     ]);
-    expect(readOutcome('meh')).toEqual({ ok: false, message: 'Unknown outcome "meh" (expected clean, partial or failed).' });
+    expect(readOutcome('meh')).toEqual({
+      ok: false,
+      message: 'Unknown outcome "meh" (expected clean, partial or failed).',
+    });
     expect(['TLC', 'column', 'prep TLC'].map((cell) => readTechnique(cell))).toEqual([
-      { ok: true, value: 'tlc' }, { ok: true, value: 'flash' }, { ok: true, value: 'prep_tlc' },
+      { ok: true, value: 'tlc' },
+      { ok: true, value: 'flash' },
+      { ok: true, value: 'prep_tlc' },
     ]);
   });
 });

@@ -28,9 +28,26 @@ const rows = {
   amine: `benzylamine;NCc1ccccc1;DCM/MeOH 9:1 + 1% Et3N;0,25;ninhydrin;SiO2;NB-9;"${tag} streaks; needs base\nsecond line"`,
   percent: `methyl benzoate;COC(=O)c1ccccc1;20% EtOAc in hexanes;0,45;uv;Silica Gel;NB-10;${tag}`,
 };
-const messyCsv = ['\uFEFF' + header, '', rows.good, ';;;;;;;', rows.badStructure, rows.rfTooHigh, rows.noRf, rows.noEluent, rows.unknownSolvent, rows.unknownPhase, rows.unknownStain, rows.amine, rows.good, rows.percent, ''].join('\r\n');
+const messyCsv = [
+  '\uFEFF' + header,
+  '',
+  rows.good,
+  ';;;;;;;',
+  rows.badStructure,
+  rows.rfTooHigh,
+  rows.noRf,
+  rows.noEluent,
+  rows.unknownSolvent,
+  rows.unknownPhase,
+  rows.unknownStain,
+  rows.amine,
+  rows.good,
+  rows.percent,
+  '',
+].join('\r\n');
 
-const taggedRecords = (status = 'active') => ConditionRecord.count({ where: { notes: { [Op.like]: `%${tag}%` }, status } });
+const taggedRecords = (status = 'active') =>
+  ConditionRecord.count({ where: { notes: { [Op.like]: `%${tag}%` }, status } });
 
 beforeAll(async () => {
   curator = await agentFor(app, 'curator');
@@ -44,31 +61,74 @@ describe('POST /api/imports with a messy spreadsheet', () => {
     expect(res.status).toBe(200);
     const preview = importPreviewSchema.parse(res.body);
     expect(preview.delimiter).toBe(';');
-    expect(preview.mapping).toMatchObject({ 'Compound Name': 'name', SMILES: 'structure', 'Solvent System': 'eluent', 'Rf value': 'rf', 'TLC Stain': 'stain', Phase: 'phase', 'NB ref': 'notebook', Comments: 'notes' });
+    expect(preview.mapping).toMatchObject({
+      'Compound Name': 'name',
+      SMILES: 'structure',
+      'Solvent System': 'eluent',
+      'Rf value': 'rf',
+      'TLC Stain': 'stain',
+      Phase: 'phase',
+      'NB ref': 'notebook',
+      Comments: 'notes',
+    });
     expect(preview.total).toBe(11);
     expect(preview.blankRows).toBe(1);
-    expect(preview.rows.map((row) => row.result)).toEqual(['accepted', 'rejected', 'rejected', 'rejected', 'rejected', 'rejected', 'accepted', 'accepted', 'accepted', 'duplicate', 'accepted']);
+    expect(preview.rows.map((row) => row.result)).toEqual([
+      'accepted',
+      'rejected',
+      'rejected',
+      'rejected',
+      'rejected',
+      'rejected',
+      'accepted',
+      'accepted',
+      'accepted',
+      'duplicate',
+      'accepted',
+    ]);
     expect(preview).toMatchObject({ checked: 11, accepted: 5, rejected: 5, duplicates: 1, warned: 2 });
     expect(preview.rows[6].warnings.join(' ')).toMatch(/Stationary phase \(column "Phase"\): .*"gold" not recognised/);
-    expect(preview.rows[7].warnings.join(' ')).toMatch(/Visualisation \(column "TLC Stain"\): "sparkle dust" not recognised/);
+    expect(preview.rows[7].warnings.join(' ')).toMatch(
+      /Visualisation \(column "TLC Stain"\): "sparkle dust" not recognised/,
+    );
     expect(preview.rows[0].record).toMatchObject({ name: 'benzyl alcohol', rf: 0.28 });
     expect({ imports: await Import.count(), records: await taggedRecords() }).toEqual(before);
   });
 
   it('when committed, then accepted + rejected + duplicates = total and every rejection names its reason and column', async () => {
     const done = importDtoSchema.parse(await importFile(curator, messyCsv, { name: 'messy.csv' }));
-    expect(done).toMatchObject({ status: 'completed', total: 11, processed: 11, accepted: 5, rejected: 5, duplicates: 1, warned: 2, blankRows: 1, format: 'csv' });
+    expect(done).toMatchObject({
+      status: 'completed',
+      total: 11,
+      processed: 11,
+      accepted: 5,
+      rejected: 5,
+      duplicates: 1,
+      warned: 2,
+      blankRows: 1,
+      format: 'csv',
+    });
     expect(await taggedRecords()).toBe(5);
-    const reasons = (await ImportRow.findAll({ where: { importId: done.id, kind: 'rejected' }, order: [['rowNumber', 'ASC']] })).map((row) => row.reason);
+    const reasons = (
+      await ImportRow.findAll({ where: { importId: done.id, kind: 'rejected' }, order: [['rowNumber', 'ASC']] })
+    ).map((row) => row.reason);
     expect(reasons).toHaveLength(5);
     expect(reasons[0]).toMatch(/^Bad structure \(column "SMILES"\): /);
     expect(reasons[1]).toBe('Rf (column "Rf value") 1.2 is outside (0, 1].');
     expect(reasons[2]).toBe('Missing Rf: the "Rf value" column is empty.');
     expect(reasons[3]).toBe('Missing eluent: the "Solvent System" column is empty.');
-    expect(reasons[4]).toBe('Unknown solvent or additive "hexxanes". Did you mean "hexanes"? (column "Solvent System")');
-    const warnings = await ImportRow.findAll({ where: { importId: done.id, kind: 'warning' }, order: [['rowNumber', 'ASC']] });
+    expect(reasons[4]).toBe(
+      'Unknown solvent or additive "hexxanes". Did you mean "hexanes"? (column "Solvent System")',
+    );
+    const warnings = await ImportRow.findAll({
+      where: { importId: done.id, kind: 'warning' },
+      order: [['rowNumber', 'ASC']],
+    });
     expect(warnings.map((row) => row.cells['Compound Name'])).toEqual(['benzaldehyde', 'cinnamyl alcohol']);
-    const kept = await ConditionRecord.findAll({ where: { importId: done.id, notebookRef: ['NB-7', 'NB-8'] }, order: [['notebookRef', 'ASC']] });
+    const kept = await ConditionRecord.findAll({
+      where: { importId: done.id, notebookRef: ['NB-7', 'NB-8'] },
+      order: [['notebookRef', 'ASC']],
+    });
     expect(kept.map((record) => [record.stationaryPhase, record.sourceTexts])).toEqual([
       ['silica-tlc-f254', { phase: 'silica gold' }],
       ['silica-tlc-f254', { stain: 'sparkle dust' }],
@@ -87,7 +147,7 @@ const fixes: Record<string, [string, string]> = {
 };
 
 describe('GET /api/imports/:id/rejected.csv, then fixing and importing only those rows', () => {
-  it('gives back the original rows, cell for cell, with the reason added, in the file\'s own delimiter', async () => {
+  it("gives back the original rows, cell for cell, with the reason added, in the file's own delimiter", async () => {
     const res = await curator.get(`/api/imports/${firstImportId}/rejected.csv`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv/);
@@ -123,23 +183,40 @@ describe('GET /api/imports/:id/rejected.csv, then fixing and importing only thos
 });
 
 describe('DELETE /api/imports/:id', () => {
-  it('retires what the import added (kept, with the reason "import N undone"), leaves other imports alone, and refuses a second undo', async () => {
-    const res = await curator.delete(`/api/imports/${firstImportId}`).set('X-CSRF-Token', curator.csrf);
-    expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ status: 'undone', retiredRecords: 5 });
-    const retired = await ConditionRecord.findAll({ where: { importId: firstImportId } });
-    expect(retired.map((record) => [record.status, record.retiredReason])).toEqual(retired.map(() => ['retired', `import ${firstImportId} undone`]));
-    const record = await curator.get(`/api/records/${retired[0].id}`);
-    expect(record.body.status).toBe('retired');
-    const history = await curator.get(`/api/records/${retired[0].id}/history`);
-    expect(history.body.revisions.map((revision: { action: string; number: number }) => [revision.number, revision.action])).toEqual([[2, 'retire'], [1, 'import']]);
-    // The retire revision's snapshot is the record as the records service reads it back.
-    const retireRevision = await RecordRevision.findOne({ where: { recordId: retired[0].id, number: 2 }, rejectOnEmpty: true });
-    expect(retireRevision.snapshot).toEqual(JSON.parse(JSON.stringify(await loadRecordState(retired[0].id))));
-    expect(await taggedRecords()).toBe(5);
-    const again = await curator.delete(`/api/imports/${firstImportId}`).set('X-CSRF-Token', curator.csrf);
-    expect(again.status).toBe(409);
-  });
+  it(
+    'retires what the import added (kept, with the reason "import N undone"), leaves other imports ' +
+      'alone, and refuses a second undo',
+    async () => {
+      const res = await curator.delete(`/api/imports/${firstImportId}`).set('X-CSRF-Token', curator.csrf);
+      expect(res.status).toBe(200);
+      expect(res.body).toMatchObject({ status: 'undone', retiredRecords: 5 });
+      const retired = await ConditionRecord.findAll({ where: { importId: firstImportId } });
+      expect(retired.map((record) => [record.status, record.retiredReason])).toEqual(
+        retired.map(() => ['retired', `import ${firstImportId} undone`]),
+      );
+      const record = await curator.get(`/api/records/${retired[0].id}`);
+      expect(record.body.status).toBe('retired');
+      const history = await curator.get(`/api/records/${retired[0].id}/history`);
+      expect(
+        history.body.revisions.map((revision: { action: string; number: number }) => [
+          revision.number,
+          revision.action,
+        ]),
+      ).toEqual([
+        [2, 'retire'],
+        [1, 'import'],
+      ]);
+      // The retire revision's snapshot is the record as the records service reads it back.
+      const retireRevision = await RecordRevision.findOne({
+        where: { recordId: retired[0].id, number: 2 },
+        rejectOnEmpty: true,
+      });
+      expect(retireRevision.snapshot).toEqual(JSON.parse(JSON.stringify(await loadRecordState(retired[0].id))));
+      expect(await taggedRecords()).toBe(5);
+      const again = await curator.delete(`/api/imports/${firstImportId}`).set('X-CSRF-Token', curator.csrf);
+      expect(again.status).toBe(409);
+    },
+  );
 
   it('when the undone file is imported again, then its rows come back as new records', async () => {
     const done = await importFile(curator, messyCsv, { name: 'messy-third.csv' });
@@ -159,7 +236,15 @@ describe('GET /api/imports', () => {
     const res = await curator.get('/api/imports');
     expect(res.status).toBe(200);
     const mine = res.body.items.find((item: { id: number }) => item.id === firstImportId);
-    expect(mine).toMatchObject({ fileName: 'messy.csv', user: { id: curator.user?.id }, status: 'undone', accepted: 5, rejected: 5, duplicates: 1, warned: 2 });
+    expect(mine).toMatchObject({
+      fileName: 'messy.csv',
+      user: { id: curator.user?.id },
+      status: 'undone',
+      accepted: 5,
+      rejected: 5,
+      duplicates: 1,
+      warned: 2,
+    });
     expect(mine.sha256).toMatch(/^[0-9a-f]{64}$/);
     expect(Date.parse(mine.createdAt)).toBeGreaterThan(Date.now() - 10 * 60_000);
   });

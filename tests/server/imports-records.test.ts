@@ -39,7 +39,10 @@ const notations: [string, Record<string, number>, { additive: string; percent: n
 
 describe('eluent notations found in lab spreadsheets', () => {
   it('when each notation of the issue is imported, then the stored eluent has the parts and additives it means', async () => {
-    const csv = ['SMILES,Eluent,Rf,NB', ...notations.map(([notation], index) => `Oc1ccc(cc1)C(C)(C)CC,${notation},0.3${index},${tag}-N${index}`)].join('\n');
+    const csv = [
+      'SMILES,Eluent,Rf,NB',
+      ...notations.map(([notation], index) => `Oc1ccc(cc1)C(C)(C)CC,${notation},0.3${index},${tag}-N${index}`),
+    ].join('\n');
     const done = await importFile(curator, csv, { name: 'notations.csv' });
     expect(done).toMatchObject({ accepted: notations.length, rejected: 0 });
     for (const [index, [notation, expected, additives]] of notations.entries()) {
@@ -53,7 +56,9 @@ describe('eluent notations found in lab spreadsheets', () => {
     const csv = `SMILES,Eluent,Rf\nOc1ccc(cc1)C(C)(C)CC,EtOAc/heptnae 1:3,0.4\nOc1ccc(cc1)C(C)(C)CC,toluol/EtOAc 4:1,0.4\n`;
     const done = await importFile(curator, csv, { name: 'misspelt.csv' });
     expect(done).toMatchObject({ accepted: 0, rejected: 2 });
-    const reasons = (await ImportRow.findAll({ where: { importId: done.id }, order: [['rowNumber', 'ASC']] })).map((row) => row.reason);
+    const reasons = (await ImportRow.findAll({ where: { importId: done.id }, order: [['rowNumber', 'ASC']] })).map(
+      (row) => row.reason,
+    );
     expect(reasons).toEqual([
       'Unknown solvent or additive "heptnae". Did you mean "heptane"? (column "Eluent")',
       'Unknown solvent or additive "toluol". Did you mean "toluene"? (column "Eluent")',
@@ -70,10 +75,16 @@ describe('eluent notations found in lab spreadsheets', () => {
 
 describe('an imported record and a contributed one', () => {
   const structure = 'O=C(OCc1ccccc1)c1ccc(F)cc1';
-  const row = (notes: string) => `SMILES,Eluent,Rf,Stain,Phase,Technique,Outcome,Notes\n${structure},EtOAc/hexanes 1:9,0.41,"UV 254, KMnO4",silica,TLC,clean,${notes}\n`;
+  const row = (notes: string) =>
+    `SMILES,Eluent,Rf,Stain,Phase,Technique,Outcome,Notes\n${structure},EtOAc/hexanes 1:9,0.41,"UV 254, KMnO4",silica,TLC,clean,${notes}\n`;
   // A TLC row on "silica" is a silica TLC plate (issue 24), so the contributed twin names the plate.
   const body = (notes: string) => ({
-    structure, eluent: 'EtOAc/hexanes 1:9', spots: [{ role: 'target', rf: 0.41 }], visualisation: ['UV 254', 'KMnO4'], notes, stationaryPhase: 'silica TLC plate',
+    structure,
+    eluent: 'EtOAc/hexanes 1:9',
+    spots: [{ role: 'target', rf: 0.41 }],
+    visualisation: ['UV 254', 'KMnO4'],
+    notes,
+    stationaryPhase: 'silica TLC plate',
   });
 
   it('when a row says what a contributed record says, then it counts as a duplicate (one content-hash definition)', async () => {
@@ -90,13 +101,23 @@ describe('an imported record and a contributed one', () => {
     const a = (await curator.get(`/api/records/${contributed.body.id}`)).body;
     const b = (await curator.get(`/api/records/${imported.id}`)).body;
     const comparable = (dto: Record<string, unknown>) => {
-      const { id: _id, notes: _notes, createdAt: _c, updatedAt: _u, importId: _import, spots, ...rest } = dto as Record<string, unknown> & { spots: { id: number }[] };
+      const {
+        id: _id,
+        notes: _notes,
+        createdAt: _c,
+        updatedAt: _u,
+        importId: _import,
+        spots,
+        ...rest
+      } = dto as Record<string, unknown> & { spots: { id: number }[] };
       return { ...rest, spots: spots.map(({ id: _spotId, ...spot }) => spot) };
     };
     expect(comparable(b)).toEqual(comparable(a));
     expect([a.importId, b.importId]).toEqual([null, done.id]);
     const history = (await curator.get(`/api/records/${imported.id}/history`)).body;
-    expect(history.revisions.map((revision: { number: number; action: string }) => [revision.number, revision.action])).toEqual([[1, 'import']]);
+    expect(
+      history.revisions.map((revision: { number: number; action: string }) => [revision.number, revision.action]),
+    ).toEqual([[1, 'import']]);
   });
 });
 
@@ -104,7 +125,8 @@ describe('compounds an import creates', () => {
   it('get their fingerprint once each, equal to one computed independently on this thread', async () => {
     const smiles = ['CCCCCCCCCCCCCCCCCCCCCCCCCCCCN', 'CCCCCCCCCCCCCCCCCCCCCCCCCCCCCN'];
     const lines = ['SMILES,Eluent,Rf,NB'];
-    for (let i = 0; i < 450; i++) lines.push(`${smiles[i % 2]},DCM/MeOH 9:1 + 1% Et3N,${(0.1 + (i % 80) / 100).toFixed(2)},${tag}-F${i}`);
+    for (let i = 0; i < 450; i++)
+      lines.push(`${smiles[i % 2]},DCM/MeOH 9:1 + 1% Et3N,${(0.1 + (i % 80) / 100).toFixed(2)},${tag}-F${i}`);
     const done = await importFile(curator, lines.join('\n'), { name: 'amines.csv' });
     expect(done).toMatchObject({ accepted: 450, newCompounds: 2, batchesCommitted: 3 });
     const compounds = await Compound.findAll({ where: { inputStructure: { [Op.in]: smiles } } });

@@ -40,49 +40,71 @@ describe('POST /api/auth/invitations', () => {
     expect(first.res.status).toBe(409);
     const email = address();
     const { admin } = await invite(email);
-    const again = await admin.post('/api/auth/invitations').set('X-CSRF-Token', admin.csrf).send({ email: email.toUpperCase(), role: 'viewer' });
+    const again = await admin
+      .post('/api/auth/invitations')
+      .set('X-CSRF-Token', admin.csrf)
+      .send({ email: email.toUpperCase(), role: 'viewer' });
     expect(again.status).toBe(409);
     expect(again.body.error.details[0].invitationId).toEqual(expect.any(Number));
   });
 
   it('when a curator tries to invite, then 403', async () => {
     const curator = await agentFor(app, 'curator');
-    const res = await curator.post('/api/auth/invitations').set('X-CSRF-Token', curator.csrf).send({ email: address(), role: 'viewer' });
+    const res = await curator
+      .post('/api/auth/invitations')
+      .set('X-CSRF-Token', curator.csrf)
+      .send({ email: address(), role: 'viewer' });
     expect(res.status).toBe(403);
   });
 });
 
 describe('accepting an invitation through the mailed link', () => {
-  it('when the invitee opens the link, sets name and password, then they are signed in with the invited role and can sign in again', async () => {
-    const email = address();
-    const { res, before } = await invite(email, 'viewer');
-    const { token } = await mailedLink(email, '/invitations/', before);
-    const anon = await agentFor(app);
-    const preview = await anon.get(`/api/auth/invitations/${token}`);
-    expect(preview.status).toBe(200);
-    expect(preview.body).toMatchObject({ email, role: 'viewer', inviterName: 'Test admin' });
+  it(
+    'when the invitee opens the link, sets name and password, then they are signed in with the invited ' +
+      'role and can sign in again',
+    async () => {
+      const email = address();
+      const { res, before } = await invite(email, 'viewer');
+      const { token } = await mailedLink(email, '/invitations/', before);
+      const anon = await agentFor(app);
+      const preview = await anon.get(`/api/auth/invitations/${token}`);
+      expect(preview.status).toBe(200);
+      expect(preview.body).toMatchObject({ email, role: 'viewer', inviterName: 'Test admin' });
 
-    const accepted = await anon.post(`/api/auth/invitations/${token}/accept`).set('X-CSRF-Token', anon.csrf).send({ name: 'Ines Accepting', password: GOOD_PASSWORD });
-    expect(accepted.status).toBe(201);
-    expect(accepted.body.user).toMatchObject({ email, role: 'viewer', name: 'Ines Accepting' });
-    const me = await anon.get('/api/auth/me');
-    expect(me.body.user.email).toBe(email);
+      const accepted = await anon
+        .post(`/api/auth/invitations/${token}/accept`)
+        .set('X-CSRF-Token', anon.csrf)
+        .send({ name: 'Ines Accepting', password: GOOD_PASSWORD });
+      expect(accepted.status).toBe(201);
+      expect(accepted.body.user).toMatchObject({ email, role: 'viewer', name: 'Ines Accepting' });
+      const me = await anon.get('/api/auth/me');
+      expect(me.body.user.email).toBe(email);
 
-    const fresh = await agentFor(app);
-    const login = await fresh.post('/api/auth/login').set('X-CSRF-Token', fresh.csrf).send({ email, password: GOOD_PASSWORD });
-    expect(login.status).toBe(200);
-    const audit = await AuditEntry.findAll({ where: { subjectType: 'invitation', subjectId: String(res.body.id) } });
-    expect(audit.map((a) => a.action).sort()).toEqual(['invitation.accept', 'invitation.create']);
-  });
+      const fresh = await agentFor(app);
+      const login = await fresh
+        .post('/api/auth/login')
+        .set('X-CSRF-Token', fresh.csrf)
+        .send({ email, password: GOOD_PASSWORD });
+      expect(login.status).toBe(200);
+      const audit = await AuditEntry.findAll({ where: { subjectType: 'invitation', subjectId: String(res.body.id) } });
+      expect(audit.map((a) => a.action).sort()).toEqual(['invitation.accept', 'invitation.create']);
+    },
+  );
 
   it('when the link is used a second time, then 410 and no second account', async () => {
     const email = address();
     const { before } = await invite(email);
     const { token } = await mailedLink(email, '/invitations/', before);
     const anon = await agentFor(app);
-    await anon.post(`/api/auth/invitations/${token}/accept`).set('X-CSRF-Token', anon.csrf).send({ name: 'Once', password: GOOD_PASSWORD });
+    await anon
+      .post(`/api/auth/invitations/${token}/accept`)
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ name: 'Once', password: GOOD_PASSWORD });
     const other = await agentFor(app);
-    const again = await other.post(`/api/auth/invitations/${token}/accept`).set('X-CSRF-Token', other.csrf).send({ name: 'Twice', password: GOOD_PASSWORD });
+    const again = await other
+      .post(`/api/auth/invitations/${token}/accept`)
+      .set('X-CSRF-Token', other.csrf)
+      .send({ name: 'Twice', password: GOOD_PASSWORD });
     expect(again.status).toBe(410);
     expect(again.body.error.code).toBe('invitation_used');
   });
@@ -94,12 +116,18 @@ describe('accepting an invitation through the mailed link', () => {
     const anon = await agentFor(app);
     // "qwerty123456" is in the NCSC 100k most-used list (SecLists); "short" is under 12 characters.
     for (const password of ['qwerty123456', 'short']) {
-      const res = await anon.post(`/api/auth/invitations/${token}/accept`).set('X-CSRF-Token', anon.csrf).send({ name: 'Weak', password });
+      const res = await anon
+        .post(`/api/auth/invitations/${token}/accept`)
+        .set('X-CSRF-Token', anon.csrf)
+        .send({ name: 'Weak', password });
       expect(res.status).toBe(400);
       expect(res.body.error.details[0].path).toBe('body.password');
     }
     const local = email.split('@')[0];
-    const named = await anon.post(`/api/auth/invitations/${token}/accept`).set('X-CSRF-Token', anon.csrf).send({ name: 'Named', password: `${local}-2026!` });
+    const named = await anon
+      .post(`/api/auth/invitations/${token}/accept`)
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ name: 'Named', password: `${local}-2026!` });
     expect(named.status).toBe(400);
     expect((await anon.get(`/api/auth/invitations/${token}`)).status).toBe(200);
   });
@@ -147,7 +175,9 @@ describe('resend, revoke and list', () => {
     expect(open.body.items.map((i: { email: string }) => i.email)).not.toContain(email);
     const all = await admin.get('/api/auth/invitations?status=all');
     expect(all.body.items.find((i: { email: string }) => i.email === email).status).toBe('revoked');
-    const actions = (await AuditEntry.findAll({ where: { subjectType: 'invitation', subjectId: String(res.body.id) } })).map((a) => a.action);
+    const actions = (
+      await AuditEntry.findAll({ where: { subjectType: 'invitation', subjectId: String(res.body.id) } })
+    ).map((a) => a.action);
     expect(actions).toContain('invitation.revoke');
   });
 });

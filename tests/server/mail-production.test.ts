@@ -27,7 +27,10 @@ describe('mail in production', () => {
   });
 
   it('when no SMTP_HOST is configured, then sending fails with 503 mail_unavailable and no local catcher is started', async () => {
-    await expect(sendMail({ to: 'a@test.invalid', subject: 's', text: 't' })).rejects.toMatchObject({ status: 503, code: 'mail_unavailable' });
+    await expect(sendMail({ to: 'a@test.invalid', subject: 's', text: 't' })).rejects.toMatchObject({
+      status: 503,
+      code: 'mail_unavailable',
+    });
     expect(mailCatcherPort()).toBeNull();
   });
 });

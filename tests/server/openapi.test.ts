@@ -140,28 +140,32 @@ describe('documented GETs answer as documented (real answers validated against t
     expect(ok, `${path}: ${JSON.stringify(validate.errors?.slice(0, 3))}`).toBe(true);
   };
 
-  it('when records exist, then GET /api/records, /api/records/{id}, /api/overview, /api/classes, /api/search and /api/tokens match their schemas', async () => {
-    const { id } = await createRecord(member, { notes: 'openapi check' });
-    await member.post('/api/tokens').set('X-CSRF-Token', member.csrf).send({ name: 'doc check', readOnly: true });
-    const answers: [string, string][] = [
-      ['/api/records', '/api/records'],
-      ['/api/records/{id}', `/api/records/${id}`],
-      ['/api/records/{id}/history', `/api/records/${id}/history`],
-      ['/api/overview', '/api/overview'],
-      ['/api/classes', '/api/classes'],
-      ['/api/search', '/api/search?q=openapi'],
-      ['/api/auth/me', '/api/auth/me'],
-      ['/api/health', '/api/health'],
-    ];
-    for (const [path, url] of answers) {
-      const res = await viewer.get(url);
-      expect(res.status, url).toBe(200);
-      check(path, res.body);
-    }
-    const tokens = await member.get('/api/tokens');
-    expect(tokens.body.items.length).toBe(1);
-    check('/api/tokens', tokens.body);
-  });
+  it(
+    'when records exist, then GET /api/records, /api/records/{id}, /api/overview, /api/classes, ' +
+      '/api/search and /api/tokens match their schemas',
+    async () => {
+      const { id } = await createRecord(member, { notes: 'openapi check' });
+      await member.post('/api/tokens').set('X-CSRF-Token', member.csrf).send({ name: 'doc check', readOnly: true });
+      const answers: [string, string][] = [
+        ['/api/records', '/api/records'],
+        ['/api/records/{id}', `/api/records/${id}`],
+        ['/api/records/{id}/history', `/api/records/${id}/history`],
+        ['/api/overview', '/api/overview'],
+        ['/api/classes', '/api/classes'],
+        ['/api/search', '/api/search?q=openapi'],
+        ['/api/auth/me', '/api/auth/me'],
+        ['/api/health', '/api/health'],
+      ];
+      for (const [path, url] of answers) {
+        const res = await viewer.get(url);
+        expect(res.status, url).toBe(200);
+        check(path, res.body);
+      }
+      const tokens = await member.get('/api/tokens');
+      expect(tokens.body.items.length).toBe(1);
+      check('/api/tokens', tokens.body);
+    },
+  );
 
   it('when an answer drifts from the document (a required field missing, a wrong type), then the check fails', async () => {
     const res = await viewer.get('/api/overview');

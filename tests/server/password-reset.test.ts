@@ -17,7 +17,9 @@ async function requestReset(email: string) {
 }
 
 async function sessionRowsOf(userId: number): Promise<number> {
-  const [rows] = await sequelize.query(`SELECT sid FROM sessions WHERE (sess -> 'passport' ->> 'user') = :id`, { replacements: { id: String(userId) } });
+  const [rows] = await sequelize.query(`SELECT sid FROM sessions WHERE (sess -> 'passport' ->> 'user') = :id`, {
+    replacements: { id: String(userId) },
+  });
   return rows.length;
 }
 
@@ -36,7 +38,10 @@ describe('POST /api/auth/password-reset', () => {
   it('when the mailed link is followed, then the new password works, the old does not, and every session has ended', async () => {
     const user = await createUser('member');
     const signedIn = await agentFor(app);
-    await signedIn.post('/api/auth/login').set('X-CSRF-Token', signedIn.csrf).send({ email: user.email, password: TEST_PASSWORD });
+    await signedIn
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', signedIn.csrf)
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect((await signedIn.get('/api/auth/me')).body.user.id).toBe(user.id);
     expect(await sessionRowsOf(user.id)).toBe(1);
 
@@ -49,16 +54,27 @@ describe('POST /api/auth/password-reset', () => {
 
     const anon = await agentFor(app);
     expect((await anon.get(`/api/auth/password-reset/${token}`)).status).toBe(200);
-    const set = await anon.post(`/api/auth/password-reset/${token}`).set('X-CSRF-Token', anon.csrf).send({ password: NEW_PASSWORD });
+    const set = await anon
+      .post(`/api/auth/password-reset/${token}`)
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ password: NEW_PASSWORD });
     expect(set.status).toBe(204);
 
     expect(await sessionRowsOf(user.id)).toBe(0);
     expect((await signedIn.get('/api/auth/me')).body.user).toBeNull();
-    const oldLogin = await anon.post('/api/auth/login').set('X-CSRF-Token', anon.csrf).send({ email: user.email, password: TEST_PASSWORD });
+    const oldLogin = await anon
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(oldLogin.status).toBe(401);
-    const newLogin = await anon.post('/api/auth/login').set('X-CSRF-Token', anon.csrf).send({ email: user.email, password: NEW_PASSWORD });
+    const newLogin = await anon
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ email: user.email, password: NEW_PASSWORD });
     expect(newLogin.status).toBe(200);
-    const actions = (await AuditEntry.findAll({ where: { subjectType: 'user', subjectId: String(user.id) } })).map((a) => a.action);
+    const actions = (await AuditEntry.findAll({ where: { subjectType: 'user', subjectId: String(user.id) } })).map(
+      (a) => a.action,
+    );
     expect(actions).toEqual(expect.arrayContaining(['user.password_reset_request', 'user.password_reset']));
   });
 
@@ -68,8 +84,14 @@ describe('POST /api/auth/password-reset', () => {
     await requestReset(user.email);
     const { token } = await mailedLink(user.email, '/password-reset/', before);
     const anon = await agentFor(app);
-    await anon.post(`/api/auth/password-reset/${token}`).set('X-CSRF-Token', anon.csrf).send({ password: NEW_PASSWORD });
-    const again = await anon.post(`/api/auth/password-reset/${token}`).set('X-CSRF-Token', anon.csrf).send({ password: 'another fine passphrase 8' });
+    await anon
+      .post(`/api/auth/password-reset/${token}`)
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ password: NEW_PASSWORD });
+    const again = await anon
+      .post(`/api/auth/password-reset/${token}`)
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ password: 'another fine passphrase 8' });
     expect(again.status).toBe(410);
   });
 
@@ -84,10 +106,20 @@ describe('POST /api/auth/password-reset', () => {
     expect(second.token).not.toBe(first.token);
     expect((await agentFor(app).then((a) => a.get(`/api/auth/password-reset/${first.token}`))).status).toBe(410);
     const anon = await agentFor(app);
-    const old = await anon.post(`/api/auth/password-reset/${first.token}`).set('X-CSRF-Token', anon.csrf).send({ password: NEW_PASSWORD });
+    const old = await anon
+      .post(`/api/auth/password-reset/${first.token}`)
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ password: NEW_PASSWORD });
     expect(old.status).toBe(410);
     expect(old.body.error.code).toBe('reset_invalid');
-    expect((await anon.post(`/api/auth/password-reset/${second.token}`).set('X-CSRF-Token', anon.csrf).send({ password: NEW_PASSWORD })).status).toBe(204);
+    expect(
+      (
+        await anon
+          .post(`/api/auth/password-reset/${second.token}`)
+          .set('X-CSRF-Token', anon.csrf)
+          .send({ password: NEW_PASSWORD })
+      ).status,
+    ).toBe(204);
   });
 
   it('when the link is older than an hour, then 410 and the password is unchanged', async () => {
@@ -97,9 +129,15 @@ describe('POST /api/auth/password-reset', () => {
     const { token } = await mailedLink(user.email, '/password-reset/', before);
     await PasswordReset.update({ expiresAt: new Date(Date.now() - 1) }, { where: { userId: user.id } });
     const anon = await agentFor(app);
-    const res = await anon.post(`/api/auth/password-reset/${token}`).set('X-CSRF-Token', anon.csrf).send({ password: NEW_PASSWORD });
+    const res = await anon
+      .post(`/api/auth/password-reset/${token}`)
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ password: NEW_PASSWORD });
     expect(res.status).toBe(410);
-    const login = await anon.post('/api/auth/login').set('X-CSRF-Token', anon.csrf).send({ email: user.email, password: TEST_PASSWORD });
+    const login = await anon
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(login.status).toBe(200);
   });
 
@@ -110,7 +148,10 @@ describe('POST /api/auth/password-reset', () => {
     const { token } = await mailedLink(user.email, '/password-reset/', before);
     const anon = await agentFor(app);
     // "1qaz2wsx3edc" is in the NCSC 100k most-used list (SecLists).
-    const res = await anon.post(`/api/auth/password-reset/${token}`).set('X-CSRF-Token', anon.csrf).send({ password: '1qaz2wsx3edc' });
+    const res = await anon
+      .post(`/api/auth/password-reset/${token}`)
+      .set('X-CSRF-Token', anon.csrf)
+      .send({ password: '1qaz2wsx3edc' });
     expect(res.status).toBe(400);
     expect((await anon.get(`/api/auth/password-reset/${token}`)).status).toBe(200);
   });

@@ -13,34 +13,60 @@ let recordId: number;
 
 /** A real image of a plate-like strip, encoded by sharp (libvips) — not a fixture file. */
 function plateImage(format: 'png' | 'jpeg' | 'webp', width = 240, height = 640) {
-  return sharp({ create: { width, height, channels: 3, background: { r: 236, g: 240, b: 232 } } })[format]().toBuffer();
+  return sharp({ create: { width, height, channels: 3, background: { r: 236, g: 240, b: 232 } } })
+    [format]()
+    .toBuffer();
 }
 
 const upload = (agent: Agent, id: number, bytes: Buffer, filename: string, contentType = 'image/png') =>
-  agent.post(`/api/records/${id}/photos`).set('X-CSRF-Token', agent.csrf).attach('photo', bytes, { filename, contentType });
+  agent
+    .post(`/api/records/${id}/photos`)
+    .set('X-CSRF-Token', agent.csrf)
+    .attach('photo', bytes, { filename, contentType });
 
 beforeAll(async () => {
-  [owner, otherMember, curator, viewer] = await Promise.all([agentFor(app, 'member'), agentFor(app, 'member'), agentFor(app, 'curator'), agentFor(app, 'viewer')]);
+  [owner, otherMember, curator, viewer] = await Promise.all([
+    agentFor(app, 'member'),
+    agentFor(app, 'member'),
+    agentFor(app, 'curator'),
+    agentFor(app, 'viewer'),
+  ]);
   recordId = (await postRecord(owner)).body.id;
 });
 afterAll(close);
 
 describe('POST /api/records/:id/photos', () => {
-  it.each(['png', 'jpeg', 'webp'] as const)('when the author uploads a %s, then 201 with its size, dimensions and URLs', async (format) => {
-    const bytes = await plateImage(format);
-    const res = await upload(owner, recordId, bytes, `plate.${format}`, `image/${format}`);
-    expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ contentType: `image/${format}`, width: 240, height: 640, byteSize: bytes.length });
-    expect(res.body.thumbUrl).toBe(`/api/photos/${res.body.id}?size=thumb`);
-  });
+  it.each(['png', 'jpeg', 'webp'] as const)(
+    'when the author uploads a %s, then 201 with its size, dimensions and URLs',
+    async (format) => {
+      const bytes = await plateImage(format);
+      const res = await upload(owner, recordId, bytes, `plate.${format}`, `image/${format}`);
+      expect(res.status).toBe(201);
+      expect(res.body).toMatchObject({
+        contentType: `image/${format}`,
+        width: 240,
+        height: 640,
+        byteSize: bytes.length,
+      });
+      expect(res.body.thumbUrl).toBe(`/api/photos/${res.body.id}?size=thumb`);
+    },
+  );
 
   it('when a text file is named .png and declared image/png, then 415 (the content decides)', async () => {
-    const res = await upload(owner, recordId, Buffer.from('this is not an image\n'.repeat(20)), 'plate.png', 'image/png');
+    const res = await upload(
+      owner,
+      recordId,
+      Buffer.from('this is not an image\n'.repeat(20)),
+      'plate.png',
+      'image/png',
+    );
     expect(res.status).toBe(415);
   });
 
   it('when a real image of another format is sent (GIF), then 415', async () => {
-    const gif = await sharp({ create: { width: 10, height: 10, channels: 3, background: '#fff' } }).gif().toBuffer();
+    const gif = await sharp({ create: { width: 10, height: 10, channels: 3, background: '#fff' } })
+      .gif()
+      .toBuffer();
     expect((await upload(owner, recordId, gif, 'plate.jpg', 'image/jpeg')).status).toBe(415);
   });
 
@@ -66,7 +92,10 @@ describe('POST /api/records/:id/photos', () => {
     const record = (await viewer.get(`/api/records/${recordId}`)).body;
     expect(record.photos.map((photo: { id: number }) => photo.id)).toContain(res.body.id);
     const history = (await viewer.get(`/api/records/${recordId}/history`)).body;
-    expect(history.revisions[0]).toMatchObject({ action: 'photo-add', changes: [{ field: 'photos', from: null, to: res.body.id }] });
+    expect(history.revisions[0]).toMatchObject({
+      action: 'photo-add',
+      changes: [{ field: 'photos', from: null, to: res.body.id }],
+    });
   });
 });
 
@@ -100,14 +129,21 @@ describe('GET /api/photos/:id', () => {
 });
 
 describe('DELETE /api/photos/:id', () => {
-  it('when another member removes it, then 403; when the author does, then 204 and it is gone from the record but kept in history', async () => {
-    const { id } = (await upload(owner, recordId, await plateImage('png'), 'gone.png')).body;
-    expect((await otherMember.delete(`/api/photos/${id}`).set('X-CSRF-Token', otherMember.csrf)).status).toBe(403);
-    expect((await owner.delete(`/api/photos/${id}`).set('X-CSRF-Token', owner.csrf)).status).toBe(204);
-    expect((await viewer.get(`/api/photos/${id}`)).status).toBe(404);
-    const record = (await viewer.get(`/api/records/${recordId}`)).body;
-    expect(record.photos.map((photo: { id: number }) => photo.id)).not.toContain(id);
-    const history = (await viewer.get(`/api/records/${recordId}/history`)).body;
-    expect(history.revisions[0]).toMatchObject({ action: 'photo-remove', changes: [{ field: 'photos', from: id, to: null }] });
-  });
+  it(
+    'when another member removes it, then 403; when the author does, then 204 and it is gone from ' +
+      'the record but kept in history',
+    async () => {
+      const { id } = (await upload(owner, recordId, await plateImage('png'), 'gone.png')).body;
+      expect((await otherMember.delete(`/api/photos/${id}`).set('X-CSRF-Token', otherMember.csrf)).status).toBe(403);
+      expect((await owner.delete(`/api/photos/${id}`).set('X-CSRF-Token', owner.csrf)).status).toBe(204);
+      expect((await viewer.get(`/api/photos/${id}`)).status).toBe(404);
+      const record = (await viewer.get(`/api/records/${recordId}`)).body;
+      expect(record.photos.map((photo: { id: number }) => photo.id)).not.toContain(id);
+      const history = (await viewer.get(`/api/records/${recordId}/history`)).body;
+      expect(history.revisions[0]).toMatchObject({
+        action: 'photo-remove',
+        changes: [{ field: 'photos', from: id, to: null }],
+      });
+    },
+  );
 });

@@ -12,19 +12,53 @@ let viewer: Agent;
 let photoId: number;
 
 const annotation = (rf: number): PlateAnnotation => ({
-  plates: [{
-    corners: [[10, 10], [110, 10], [110, 310], [10, 310]], origin: [[10, 280], [110, 280]], front: [[10, 30], [110, 30]],
-    lanes: [{ x: 60, label: 'RM', role: 'mixture', spots: [{ x: 60, y: 280 - rf * 250, rf, kind: 'spot', role: 'target' }] }],
-  }],
+  plates: [
+    {
+      corners: [
+        [10, 10],
+        [110, 10],
+        [110, 310],
+        [10, 310],
+      ],
+      origin: [
+        [10, 280],
+        [110, 280],
+      ],
+      front: [
+        [10, 30],
+        [110, 30],
+      ],
+      lanes: [
+        {
+          x: 60,
+          label: 'RM',
+          role: 'mixture',
+          spots: [{ x: 60, y: 280 - rf * 250, rf, kind: 'spot', role: 'target' }],
+        },
+      ],
+    },
+  ],
   monitoring: ['New spot at Rf 0.30.'],
 });
-const put = (agent: Agent, body: object) => agent.put(`/api/plates/photos/${photoId}/annotation`).set('X-CSRF-Token', agent.csrf).send(body);
+const put = (agent: Agent, body: object) =>
+  agent.put(`/api/plates/photos/${photoId}/annotation`).set('X-CSRF-Token', agent.csrf).send(body);
 
 beforeAll(async () => {
-  [author, other, viewer] = await Promise.all([agentFor(app, 'member'), agentFor(app, 'member'), agentFor(app, 'viewer')]);
+  [author, other, viewer] = await Promise.all([
+    agentFor(app, 'member'),
+    agentFor(app, 'member'),
+    agentFor(app, 'viewer'),
+  ]);
   const recordId = (await postRecord(author)).body.id;
-  const bytes = await sharp({ create: { width: 120, height: 320, channels: 3, background: { r: 236, g: 236, b: 230 } } }).png().toBuffer();
-  const upload = await author.post(`/api/records/${recordId}/photos`).set('X-CSRF-Token', author.csrf).attach('photo', bytes, { filename: 'plate.png', contentType: 'image/png' });
+  const bytes = await sharp({
+    create: { width: 120, height: 320, channels: 3, background: { r: 236, g: 236, b: 230 } },
+  })
+    .png()
+    .toBuffer();
+  const upload = await author
+    .post(`/api/records/${recordId}/photos`)
+    .set('X-CSRF-Token', author.csrf)
+    .attach('photo', bytes, { filename: 'plate.png', contentType: 'image/png' });
   photoId = upload.body.id;
 });
 afterAll(close);
@@ -59,6 +93,13 @@ describe('plate annotations on a record photo', () => {
   });
 
   it('when the photo does not exist, then 404', async () => {
-    expect((await author.put('/api/plates/photos/99999999/annotation').set('X-CSRF-Token', author.csrf).send(annotation(0.3))).status).toBe(404);
+    expect(
+      (
+        await author
+          .put('/api/plates/photos/99999999/annotation')
+          .set('X-CSRF-Token', author.csrf)
+          .send(annotation(0.3))
+      ).status,
+    ).toBe(404);
   });
 });

@@ -18,7 +18,8 @@ let otherMember: Agent;
 let viewer: Agent;
 let other: pg.Client;
 
-const patch = (agent: Agent, id: number, body: Record<string, unknown>) => agent.patch(`/api/records/${id}`).set('X-CSRF-Token', agent.csrf).send(body);
+const patch = (agent: Agent, id: number, body: Record<string, unknown>) =>
+  agent.patch(`/api/records/${id}`).set('X-CSRF-Token', agent.csrf).send(body);
 
 beforeAll(async () => {
   author = await agentFor(app, 'member');
@@ -54,11 +55,16 @@ describe('content stamp', () => {
     await other.query('UPDATE condition_records SET notebook_ref = $1 WHERE id = $2', [`NB-${word}`, id]);
     const afterSql = await contentStamp();
     expect(afterSql).not.toBe(afterCreate);
-    await other.query(`UPDATE compounds SET name = name WHERE id = (SELECT compound_id FROM condition_records WHERE id = $1)`, [id]);
+    await other.query(
+      `UPDATE compounds SET name = name WHERE id = (SELECT compound_id FROM condition_records WHERE id = $1)`,
+      [id],
+    );
     const afterCompound = await contentStamp();
     expect(afterCompound).not.toBe(afterSql);
     const { rows } = await other.query<{ id: number }>(
-      `INSERT INTO users (email, name, role, password_hash) VALUES ($1, 'Stamp Check', 'viewer', 'x') RETURNING id`, [`stamp-${word}@example.org`]);
+      `INSERT INTO users (email, name, role, password_hash) VALUES ($1, 'Stamp Check', 'viewer', 'x') RETURNING id`,
+      [`stamp-${word}@example.org`],
+    );
     const afterUser = await contentStamp();
     expect(afterUser).not.toBe(afterCompound);
     await other.query(`UPDATE users SET name = 'Stamp Checked' WHERE id = $1`, [rows[0].id]);
@@ -68,32 +74,45 @@ describe('content stamp', () => {
   it('when a transaction is rolled back, then neither its data nor a new content stamp is seen', async () => {
     const before = await contentStamp();
     await other.query('BEGIN');
-    await other.query(`UPDATE condition_records SET notebook_ref = 'rolled back' WHERE id = (SELECT min(id) FROM condition_records)`);
+    await other.query(
+      `UPDATE condition_records SET notebook_ref = 'rolled back' WHERE id = (SELECT min(id) FROM condition_records)`,
+    );
     await other.query('ROLLBACK');
     expect(await contentStamp()).toBe(before);
   });
 
-  it('when a member bookmarks a record, someone signs in, or a session is written, then the data stamp moves but the content stamp does not, and kept answers are reused', async () => {
-    const { id } = await createRecord(author, { notes: `bookmark ${uniqueWord()}` });
-    const page = await viewer.get(`/api/records/${id}`);
-    const content = await contentStamp();
-    const data = await dataStamp();
-    expect((await viewer.post('/api/bookmarks').set('X-CSRF-Token', viewer.csrf).send({ recordId: id })).status).toBe(201);
-    await other.query(`UPDATE users SET last_sign_in_at = now() WHERE id = (SELECT min(id) FROM users)`);
-    await other.query(`UPDATE sessions SET expire = expire WHERE sid = (SELECT min(sid) FROM sessions)`);
-    expect(await dataStamp()).not.toBe(data);
-    expect(await contentStamp()).toBe(content);
-    const again = await viewer.get(`/api/records/${id}`);
-    expect(again.headers.etag).toBe(page.headers.etag);
-  });
+  it(
+    'when a member bookmarks a record, someone signs in, or a session is written, then the data stamp ' +
+      'moves but the content stamp does not, and kept answers are reused',
+    async () => {
+      const { id } = await createRecord(author, { notes: `bookmark ${uniqueWord()}` });
+      const page = await viewer.get(`/api/records/${id}`);
+      const content = await contentStamp();
+      const data = await dataStamp();
+      expect((await viewer.post('/api/bookmarks').set('X-CSRF-Token', viewer.csrf).send({ recordId: id })).status).toBe(
+        201,
+      );
+      await other.query(`UPDATE users SET last_sign_in_at = now() WHERE id = (SELECT min(id) FROM users)`);
+      await other.query(`UPDATE sessions SET expire = expire WHERE sid = (SELECT min(sid) FROM sessions)`);
+      expect(await dataStamp()).not.toBe(data);
+      expect(await contentStamp()).toBe(content);
+      const again = await viewer.get(`/api/records/${id}`);
+      expect(again.headers.etag).toBe(page.headers.etag);
+    },
+  );
 
   it('every table of the schema is either watched for content changes or listed as not content (a new table must choose)', async () => {
     const { rows } = await other.query<{ tablename: string; watched: boolean }>(`
-      SELECT t.tablename, EXISTS (SELECT 1 FROM pg_trigger g JOIN pg_class c ON c.oid = g.tgrelid WHERE c.relname = t.tablename AND g.tgname = 'content_changed') AS watched
+      SELECT t.tablename, EXISTS (SELECT 1 FROM pg_trigger g JOIN pg_class c ON c.oid = g.tgrelid
+        WHERE c.relname = t.tablename AND g.tgname = 'content_changed') AS watched
         FROM pg_tables t WHERE t.schemaname = current_schema() ORDER BY t.tablename`);
     const unwatched = rows.filter((row) => !row.watched).map((row) => row.tablename);
-    expect(unwatched.sort()).toEqual([...NOT_CONTENT].filter((name) => rows.some((row) => row.tablename === name)).sort());
-    expect(rows.filter((row) => row.watched).map((row) => row.tablename)).toEqual(expect.arrayContaining(['compounds', 'condition_records', 'record_spots', 'users']));
+    expect(unwatched.sort()).toEqual(
+      [...NOT_CONTENT].filter((name) => rows.some((row) => row.tablename === name)).sort(),
+    );
+    expect(rows.filter((row) => row.watched).map((row) => row.tablename)).toEqual(
+      expect.arrayContaining(['compounds', 'condition_records', 'record_spots', 'users']),
+    );
   });
 });
 
@@ -123,7 +142,8 @@ describe('kept answers follow every write', () => {
   it('when another connection changes a record with plain SQL, then the next records list and record page show it', async () => {
     const { id } = await createRecord(author, {});
     const query = { sort: 'createdAt', order: 'desc', pageSize: 100 };
-    const listed = (res: { body: { items: { id: number; notebookRef: string | null }[] } }) => res.body.items.find((item) => item.id === id);
+    const listed = (res: { body: { items: { id: number; notebookRef: string | null }[] } }) =>
+      res.body.items.find((item) => item.id === id);
     expect(listed(await viewer.get('/api/records').query(query))?.notebookRef).toBeNull();
     expect((await viewer.get(`/api/records/${id}`)).body.notebookRef).toBeNull();
     const ref = `NB-${uniqueWord()}`;

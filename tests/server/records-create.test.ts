@@ -24,7 +24,10 @@ describe('POST /api/records', () => {
     expect(record.status).toBe('active');
     expect(res.headers.location).toBe(`/api/records/${record.id}`);
     // Names and abbreviations are stored as catalogue keys.
-    expect(record.eluent.components).toEqual([{ solvent: 'ethyl-acetate', parts: 1 }, { solvent: 'hexanes', parts: 4 }]);
+    expect(record.eluent.components).toEqual([
+      { solvent: 'ethyl-acetate', parts: 1 },
+      { solvent: 'hexanes', parts: 4 },
+    ]);
     expect(record.stationaryPhase).toBe('silica-gel');
     expect(record.visualisations.map((item) => item.method)).toEqual(['uv-254', 'kmno4']);
     // 1 part EtOAc in 5 parts = 20 % v/v; EtOAc is the stronger solvent on silica (Snyder ε° 0.48, Sadek p. 74, vs ~0.01 from memory).
@@ -60,30 +63,54 @@ describe('POST /api/records', () => {
 
   it('when a compoundId is given instead of a structure, then the record joins that compound', async () => {
     const first = await postRecord(member);
-    const res = await member.post('/api/records').set('X-CSRF-Token', member.csrf).send({ ...exampleRecordBody(), structure: undefined, compoundId: first.body.compound.id });
+    const res = await member
+      .post('/api/records')
+      .set('X-CSRF-Token', member.csrf)
+      .send({ ...exampleRecordBody(), structure: undefined, compoundId: first.body.compound.id });
     expect(res.status).toBe(201);
     expect(res.body.compound.id).toBe(first.body.compound.id);
   });
 
   it('when the structure is a molfile with a blank title line, then it is read as drawn (not trimmed away)', async () => {
     // MDL CTfile format: line 1 is the title and may be empty (common practice in drawn molfiles).
-    const molfile = ['', '  hand-written', '', '  3  2  0  0  0  0  0  0  0  0999 V2000',
+    const molfile = [
+      '',
+      '  hand-written',
+      '',
+      '  3  2  0  0  0  0  0  0  0  0999 V2000',
       '    0.0000    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
       '    1.2990    0.7500    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
       '    2.5981    0.0000    0.0000 O   0  0  0  0  0  0  0  0  0  0  0  0',
-      '  1  2  1  0  0  0  0', '  2  3  1  0  0  0  0', 'M  END'].join('\n');
-    const res = await member.post('/api/records').set('X-CSRF-Token', member.csrf).send({ ...exampleRecordBody(), structure: molfile });
+      '  1  2  1  0  0  0  0',
+      '  2  3  1  0  0  0  0',
+      'M  END',
+    ].join('\n');
+    const res = await member
+      .post('/api/records')
+      .set('X-CSRF-Token', member.csrf)
+      .send({ ...exampleRecordBody(), structure: molfile });
     expect(res.status).toBe(201);
     expect(res.body.compound.formula).toBe('C2H6O');
   });
 
   it('when the compoundId is unknown, then 422', async () => {
-    const res = await member.post('/api/records').set('X-CSRF-Token', member.csrf).send({ ...exampleRecordBody(), structure: undefined, compoundId: 999_999_999 });
+    const res = await member
+      .post('/api/records')
+      .set('X-CSRF-Token', member.csrf)
+      .send({ ...exampleRecordBody(), structure: undefined, compoundId: 999_999_999 });
     expect(res.status).toBe(422);
   });
 
   it('when a solvent name is unknown, then 400 naming the word and suggesting the closest known name', async () => {
-    const res = await postRecord(member, { eluent: { components: [{ solvent: 'EtOAcc', parts: 1 }, { solvent: 'hexanes', parts: 4 }], additives: [] } });
+    const res = await postRecord(member, {
+      eluent: {
+        components: [
+          { solvent: 'EtOAcc', parts: 1 },
+          { solvent: 'hexanes', parts: 4 },
+        ],
+        additives: [],
+      },
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toContain('"EtOAcc"');
     expect(res.body.error.message).toMatch(/Did you mean "EtOAc"\?/);
@@ -100,7 +127,13 @@ describe('POST /api/records', () => {
   it('when an additive is given by abbreviation, then it is stored by key with its % v/v', async () => {
     const res = await postRecord(member, {
       structure: 'NCc1ccccc1',
-      eluent: { components: [{ solvent: 'DCM', parts: 95 }, { solvent: 'MeOH', parts: 5 }], additives: [{ additive: 'Et3N', percent: 1 }] },
+      eluent: {
+        components: [
+          { solvent: 'DCM', parts: 95 },
+          { solvent: 'MeOH', parts: 5 },
+        ],
+        additives: [{ additive: 'Et3N', percent: 1 }],
+      },
     });
     expect(res.status).toBe(201);
     expect(res.body.eluent.additives).toEqual([{ additive: 'triethylamine', percent: 1 }]);

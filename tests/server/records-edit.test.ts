@@ -13,7 +13,11 @@ let viewer: Agent;
 
 beforeAll(async () => {
   [owner, otherMember, curator, admin, viewer] = await Promise.all([
-    agentFor(app, 'member'), agentFor(app, 'member'), agentFor(app, 'curator'), agentFor(app, 'admin'), agentFor(app, 'viewer'),
+    agentFor(app, 'member'),
+    agentFor(app, 'member'),
+    agentFor(app, 'curator'),
+    agentFor(app, 'admin'),
+    agentFor(app, 'viewer'),
   ]);
 });
 afterAll(close);
@@ -24,31 +28,45 @@ async function newRecordId(): Promise<number> {
   return res.body.id as number;
 }
 
-const patch = (agent: Agent, id: number, body: Record<string, unknown>) => agent.patch(`/api/records/${id}`).set('X-CSRF-Token', agent.csrf).send(body);
+const patch = (agent: Agent, id: number, body: Record<string, unknown>) =>
+  agent.patch(`/api/records/${id}`).set('X-CSRF-Token', agent.csrf).send(body);
 
 describe('PATCH /api/records/:id', () => {
-  it('when the author changes the ratio and outcome, then 200, the revision counter rises and the history lists each field changed', async () => {
-    const id = await newRecordId();
-    const res = await patch(owner, id, {
-      eluent: { components: [{ solvent: 'EtOAc', parts: 1 }, { solvent: 'hexanes', parts: 3 }] },
-      spots: [{ role: 'target', rf: 0.35 }],
-      outcome: 'partial',
-      outcomeReason: 'Co-eluted with the aldehyde.',
-    });
-    expect(res.status).toBe(200);
-    expect(res.body.revision).toBe(2);
-    expect(res.body.eluentSummary.strongPercent).toBeCloseTo(25, 10); // 1 part in 4 = 25 % v/v
-    expect(res.body.targetRf).toBe(0.35);
-    expect(res.body.notes).toBe('Benzyl alcohol ran as one tight spot.'); // untouched fields stay
+  it(
+    'when the author changes the ratio and outcome, then 200, the revision counter rises and the ' +
+      'history lists each field changed',
+    async () => {
+      const id = await newRecordId();
+      const res = await patch(owner, id, {
+        eluent: {
+          components: [
+            { solvent: 'EtOAc', parts: 1 },
+            { solvent: 'hexanes', parts: 3 },
+          ],
+        },
+        spots: [{ role: 'target', rf: 0.35 }],
+        outcome: 'partial',
+        outcomeReason: 'Co-eluted with the aldehyde.',
+      });
+      expect(res.status).toBe(200);
+      expect(res.body.revision).toBe(2);
+      expect(res.body.eluentSummary.strongPercent).toBeCloseTo(25, 10); // 1 part in 4 = 25 % v/v
+      expect(res.body.targetRf).toBe(0.35);
+      expect(res.body.notes).toBe('Benzyl alcohol ran as one tight spot.'); // untouched fields stay
 
-    const history = recordHistorySchema.parse((await owner.get(`/api/records/${id}/history`)).body);
-    expect(history.revisions.map((revision) => revision.action)).toEqual(['update', 'create']);
-    const [latest] = history.revisions;
-    expect(latest.author?.id).toBe(owner.user?.id);
-    const fields = latest.changes.map((change) => change.field).sort();
-    expect(fields).toEqual(['eluent', 'outcome', 'outcomeReason', 'spots']);
-    expect(latest.changes.find((change) => change.field === 'outcome')).toEqual({ field: 'outcome', from: 'clean', to: 'partial' });
-  });
+      const history = recordHistorySchema.parse((await owner.get(`/api/records/${id}/history`)).body);
+      expect(history.revisions.map((revision) => revision.action)).toEqual(['update', 'create']);
+      const [latest] = history.revisions;
+      expect(latest.author?.id).toBe(owner.user?.id);
+      const fields = latest.changes.map((change) => change.field).sort();
+      expect(fields).toEqual(['eluent', 'outcome', 'outcomeReason', 'spots']);
+      expect(latest.changes.find((change) => change.field === 'outcome')).toEqual({
+        field: 'outcome',
+        from: 'clean',
+        to: 'partial',
+      });
+    },
+  );
 
   it('when column details change, then the history names each column field separately', async () => {
     const id = await newRecordId();
@@ -81,16 +99,19 @@ describe('PATCH /api/records/:id', () => {
     expect((await patch(viewer, id, { notes: 'x' })).status).toBe(403);
   });
 
-  it.each([['curator'], ['admin']])('when a %s edits someone’s record, then 200 and they are credited as editor', async (role) => {
-    const id = await newRecordId();
-    const agent = role === 'curator' ? curator : admin;
-    const res = await patch(agent, id, { notebookRef: 'NB-12 p. 40' });
-    expect(res.status).toBe(200);
-    expect(res.body.contributors).toEqual([
-      { id: owner.user?.id, name: owner.user?.name, role: 'author' },
-      { id: agent.user?.id, name: agent.user?.name, role: 'editor' },
-    ]);
-  });
+  it.each([['curator'], ['admin']])(
+    'when a %s edits someone’s record, then 200 and they are credited as editor',
+    async (role) => {
+      const id = await newRecordId();
+      const agent = role === 'curator' ? curator : admin;
+      const res = await patch(agent, id, { notebookRef: 'NB-12 p. 40' });
+      expect(res.status).toBe(200);
+      expect(res.body.contributors).toEqual([
+        { id: owner.user?.id, name: owner.user?.name, role: 'author' },
+        { id: agent.user?.id, name: agent.user?.name, role: 'editor' },
+      ]);
+    },
+  );
 
   it('when expectedRevision is stale, then 409 and nothing changes', async () => {
     const id = await newRecordId();
@@ -113,7 +134,8 @@ describe('PATCH /api/records/:id', () => {
 });
 
 describe('retiring from the record (one endpoint: POST /api/records/:id/retire; nothing is hard-deleted)', () => {
-  const retire = (agent: Agent, id: number, reason = 'Wrong plate photographed.') => agent.post(`/api/records/${id}/retire`).set('X-CSRF-Token', agent.csrf).send({ reason });
+  const retire = (agent: Agent, id: number, reason = 'Wrong plate photographed.') =>
+    agent.post(`/api/records/${id}/retire`).set('X-CSRF-Token', agent.csrf).send({ reason });
 
   it('when the author retires, then the record is retired, still readable, and leaves the default list', async () => {
     const id = await newRecordId();

@@ -16,14 +16,38 @@ beforeAll(async () => {
   const bodies = {
     alcohol: {},
     ketone: {
-      structure: 'CC(=O)c1ccccc1', name: 'acetophenone', spots: [{ role: 'target', rf: 0.45 }], visualisation: ['UV 254', '2,4-DNP'],
-      eluent: { components: [{ solvent: 'EtOAc', parts: 1 }, { solvent: 'hexanes', parts: 9 }] }, notebookRef: 'ZX-LIST-7 p. 12',
+      structure: 'CC(=O)c1ccccc1',
+      name: 'acetophenone',
+      spots: [{ role: 'target', rf: 0.45 }],
+      visualisation: ['UV 254', '2,4-DNP'],
+      eluent: {
+        components: [
+          { solvent: 'EtOAc', parts: 1 },
+          { solvent: 'hexanes', parts: 9 },
+        ],
+      },
+      notebookRef: 'ZX-LIST-7 p. 12',
     },
     amine: {
-      structure: 'NCc1ccccc1', spots: [{ role: 'target', rf: 0.2 }], visualisation: ['ninhydrin'], outcome: 'failed', outcomeReason: 'Streaked from the origin.',
-      eluent: { components: [{ solvent: 'DCM', parts: 9 }, { solvent: 'MeOH', parts: 1 }], additives: [{ additive: 'Et3N', percent: 1 }] },
+      structure: 'NCc1ccccc1',
+      spots: [{ role: 'target', rf: 0.2 }],
+      visualisation: ['ninhydrin'],
+      outcome: 'failed',
+      outcomeReason: 'Streaked from the origin.',
+      eluent: {
+        components: [
+          { solvent: 'DCM', parts: 9 },
+          { solvent: 'MeOH', parts: 1 },
+        ],
+        additives: [{ additive: 'Et3N', percent: 1 }],
+      },
     },
-    flash: { technique: 'flash', stationaryPhase: 'alumina', spots: [{ role: 'target', rf: 0.31 }], column: { diameterMm: 30, silicaG: 40, yieldPercent: 82 } },
+    flash: {
+      technique: 'flash',
+      stationaryPhase: 'alumina',
+      spots: [{ role: 'target', rf: 0.31 }],
+      column: { diameterMm: 30, silicaG: 40, yieldPercent: 82 },
+    },
   };
   for (const [key, body] of Object.entries(bodies)) {
     const res = await postRecord(author, body);
@@ -105,7 +129,11 @@ describe('GET /api/records', () => {
 
   it('when rows are listed, then each carries its spots, eluent notation with % strong solvent and visualisations', async () => {
     const [amine] = (await list('solvent=MeOH')).items;
-    expect(amine.eluentSummary).toEqual({ notation: 'DCM : MeOH 9 : 1 + 1% Et3N', strongSolvent: 'methanol', strongPercent: 10 });
+    expect(amine.eluentSummary).toEqual({
+      notation: 'DCM : MeOH 9 : 1 + 1% Et3N',
+      strongSolvent: 'methanol',
+      strongPercent: 10,
+    });
     expect(amine.spots).toHaveLength(1);
     expect(amine.visualisations[0]).toMatchObject({ method: 'ninhydrin', label: 'ninhydrin' });
   });

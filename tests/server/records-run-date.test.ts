@@ -40,7 +40,10 @@ describe('the date a plate was run', () => {
 
   it('when the date is corrected, then the history shows the change', async () => {
     const res = await postRecord(member, { runOn: '2026-03-17' });
-    const patch = await member.patch(`/api/records/${res.body.id}`).set('X-CSRF-Token', member.csrf).send({ runOn: '2026-03-16' });
+    const patch = await member
+      .patch(`/api/records/${res.body.id}`)
+      .set('X-CSRF-Token', member.csrf)
+      .send({ runOn: '2026-03-16' });
     expect(patch.status, JSON.stringify(patch.body)).toBe(200);
     const history = recordHistorySchema.parse((await member.get(`/api/records/${res.body.id}/history`)).body);
     expect(history.revisions[0].changes).toEqual([{ field: 'runOn', from: '2026-03-17', to: '2026-03-16' }]);

@@ -23,7 +23,8 @@ function expected(access: AccessLevel, caller: Caller): 'allowed' | 401 | 403 {
 
 async function send(agent: Agent, route: RouteEntry) {
   const url = probeUrl(route.path);
-  const method = (route.method === 'ALL' ? 'get' : route.method.toLowerCase()) as 'get' | 'post' | 'put' | 'patch' | 'delete';
+  const method = (route.method === 'ALL' ? 'get' : route.method.toLowerCase()) as
+    'get' | 'post' | 'put' | 'patch' | 'delete';
   const req = agent[method](url);
   return method === 'get' ? req : req.set('X-CSRF-Token', agent.csrf).send({});
 }
@@ -32,7 +33,13 @@ describe('the route table', () => {
   it('is read from nested routers, with full paths', () => {
     const keys = apiRoutes.map((r) => `${r.method} ${r.path}`);
     expect(keys).toEqual(
-      expect.arrayContaining(['GET /api/health', 'POST /api/auth/login', 'POST /api/auth/invitations/:token/accept', 'PATCH /api/admin/users/:id', 'GET /api/dev/mailbox']),
+      expect.arrayContaining([
+        'GET /api/health',
+        'POST /api/auth/login',
+        'POST /api/auth/invitations/:token/accept',
+        'PATCH /api/admin/users/:id',
+        'GET /api/dev/mailbox',
+      ]),
     );
   });
 
@@ -48,7 +55,9 @@ describe('the route table', () => {
     const api = apiRouter();
     api.use('/careless', careless);
     fresh.use('/api', api);
-    const undeclared = routeTable(fresh).filter((r) => r.access === undefined).map((r) => `${r.method} ${r.path}`);
+    const undeclared = routeTable(fresh)
+      .filter((r) => r.access === undefined)
+      .map((r) => `${r.method} ${r.path}`);
     expect(undeclared).toEqual(['GET /api/careless/forgotten', 'POST /api/careless/late']);
   });
 });
@@ -66,6 +75,7 @@ describe.each(callers)('the role × route matrix for %s', (caller) => {
     if (want === 'allowed') expect([401, 403], `${res.status} ${JSON.stringify(res.body)}`).not.toContain(res.status);
     else expect(res.status, JSON.stringify(res.body)).toBe(want);
     // A route such as POST /api/auth/logout ends the session: sign in again for the next route.
-    if (caller !== 'anonymous' && route.method !== 'GET' && !(await agent.get('/api/auth/me')).body.user) agent = await fresh();
+    if (caller !== 'anonymous' && route.method !== 'GET' && !(await agent.get('/api/auth/me')).body.user)
+      agent = await fresh();
   });
 });

@@ -20,24 +20,49 @@ let realId: number;
 beforeAll(async () => {
   const member = await agentFor(app, 'member');
   viewer = await agentFor(app, 'viewer');
-  const eluent = (etoac: number, hex: number) => ({ components: [{ solvent: 'EtOAc', parts: etoac }, { solvent: 'hexanes', parts: hex }], additives: [] });
-  const demo = await postRecord(member, { structure: 'N#CCCCCc1ccc(OC)cc1', eluent: eluent(1, 4), spots: [{ role: 'target', rf: 0.31 }], notes: null });
-  const real = await postRecord(member, { structure: 'N#CCCCCc1ccc(C)cc1', eluent: eluent(1, 4), spots: [{ role: 'target', rf: 0.36 }], notes: null });
+  const eluent = (etoac: number, hex: number) => ({
+    components: [
+      { solvent: 'EtOAc', parts: etoac },
+      { solvent: 'hexanes', parts: hex },
+    ],
+    additives: [],
+  });
+  const demo = await postRecord(member, {
+    structure: 'N#CCCCCc1ccc(OC)cc1',
+    eluent: eluent(1, 4),
+    spots: [{ role: 'target', rf: 0.31 }],
+    notes: null,
+  });
+  const real = await postRecord(member, {
+    structure: 'N#CCCCCc1ccc(C)cc1',
+    eluent: eluent(1, 4),
+    spots: [{ role: 'target', rf: 0.36 }],
+    notes: null,
+  });
   expect([demo.status, real.status]).toEqual([201, 201]);
   demoId = demo.body.id;
   realId = real.body.id;
-  await sequelize.query('UPDATE condition_records SET demo = true, updated_at = now() WHERE id = :id', { replacements: { id: demoId } });
+  await sequelize.query('UPDATE condition_records SET demo = true, updated_at = now() WHERE id = :id', {
+    replacements: { id: demoId },
+  });
 });
 afterAll(close);
 
 describe('demo records are marked as demo', () => {
-  it('when Scout cites a demo record among the neighbours, then that condition carries the demo flag and the real one does not', async () => {
-    const res = await viewer.post('/api/scout').set('X-CSRF-Token', viewer.csrf).send({ structure: 'N#CCCCCc1ccc(Cl)cc1' });
-    expect(res.status).toBe(200);
-    const conditions = scoutResultSchema.parse(res.body).neighbours.flatMap((item) => item.conditions);
-    expect(conditions.find((item) => item.recordId === demoId)?.demo).toBe(true);
-    expect(conditions.find((item) => item.recordId === realId)?.demo).toBe(false);
-  });
+  it(
+    'when Scout cites a demo record among the neighbours, then that condition carries the demo flag ' +
+      'and the real one does not',
+    async () => {
+      const res = await viewer
+        .post('/api/scout')
+        .set('X-CSRF-Token', viewer.csrf)
+        .send({ structure: 'N#CCCCCc1ccc(Cl)cc1' });
+      expect(res.status).toBe(200);
+      const conditions = scoutResultSchema.parse(res.body).neighbours.flatMap((item) => item.conditions);
+      expect(conditions.find((item) => item.recordId === demoId)?.demo).toBe(true);
+      expect(conditions.find((item) => item.recordId === realId)?.demo).toBe(false);
+    },
+  );
 
   it('when the home counts are read, then they say how many of the records are demo data', async () => {
     const overview = overviewSchema.parse((await viewer.get('/api/overview')).body);

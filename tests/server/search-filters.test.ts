@@ -21,13 +21,30 @@ beforeAll(async () => {
   viewer = await agentFor(app, 'viewer');
   const notes = `filter set ${word}`;
   made.silicaClean = (await createRecord(member, { structure: 'OCc1ccc(Cl)cc1', notes })).id;
-  made.aluminaPartial = (await createRecord(member, {
-    structure: 'OCc1ccc(Cl)cc1', notes, stationaryPhase: 'alumina-neutral', outcome: 'partial', visualisation: ['KMnO4'],
-  })).id;
-  made.dcmMethanolFailed = (await createRecord(otherMember, {
-    structure: 'NCc1ccccc1', notes, outcome: 'failed', visualisation: ['ninhydrin'],
-    eluent: { components: [{ solvent: 'MeOH', parts: 1 }, { solvent: 'DCM', parts: 19 }], additives: [] },
-  })).id;
+  made.aluminaPartial = (
+    await createRecord(member, {
+      structure: 'OCc1ccc(Cl)cc1',
+      notes,
+      stationaryPhase: 'alumina-neutral',
+      outcome: 'partial',
+      visualisation: ['KMnO4'],
+    })
+  ).id;
+  made.dcmMethanolFailed = (
+    await createRecord(otherMember, {
+      structure: 'NCc1ccccc1',
+      notes,
+      outcome: 'failed',
+      visualisation: ['ninhydrin'],
+      eluent: {
+        components: [
+          { solvent: 'MeOH', parts: 1 },
+          { solvent: 'DCM', parts: 19 },
+        ],
+        additives: [],
+      },
+    })
+  ).id;
   made.flash = (await createRecord(otherMember, { structure: 'OCc1ccc(Cl)cc1', notes, technique: 'flash' })).id;
   made.toRetire = (await createRecord(member, { structure: 'OCc1ccc(Br)cc1', notes })).id;
   made.survivor = (await createRecord(member, { structure: 'OCc1ccc(F)cc1', notes })).id;
@@ -36,7 +53,9 @@ beforeAll(async () => {
 afterAll(close);
 
 const ids = async (params: Record<string, string | number> = {}) =>
-  recordHits(await searchFor(viewer, { q: `filter set ${word}`, pageSize: 200, ...params })).map((hit) => hit.recordId).sort();
+  recordHits(await searchFor(viewer, { q: `filter set ${word}`, pageSize: 200, ...params }))
+    .map((hit) => hit.recordId)
+    .sort();
 const sorted = (...list: number[]) => [...list].sort();
 
 describe('GET /api/search filters', () => {
@@ -80,22 +99,38 @@ describe('GET /api/search filters', () => {
   });
 
   it('when filters are combined with a substructure, then both apply', async () => {
-    const hits = recordHits(await searchFor(viewer, { mode: 'substructure', structure: 'OCc1ccc(Cl)cc1', q: `filter set ${word}`, outcome: 'clean', pageSize: 200 }));
+    const hits = recordHits(
+      await searchFor(viewer, {
+        mode: 'substructure',
+        structure: 'OCc1ccc(Cl)cc1',
+        q: `filter set ${word}`,
+        outcome: 'clean',
+        pageSize: 200,
+      }),
+    );
     expect(hits.map((hit) => hit.recordId).sort()).toEqual(sorted(made.silicaClean, made.flash));
   });
 });
 
 describe('GET /api/search and curation', () => {
   it('when a record is retired, then no search returns it', async () => {
-    const retire = await member.post(`/api/records/${made.toRetire}/retire`).set('X-CSRF-Token', member.csrf).send({ reason: 'wrong compound drawn' });
+    const retire = await member
+      .post(`/api/records/${made.toRetire}/retire`)
+      .set('X-CSRF-Token', member.csrf)
+      .send({ reason: 'wrong compound drawn' });
     expect(retire.status).toBe(200);
     expect(await ids()).not.toContain(made.toRetire);
-    const bySubstructure = recordHits(await searchFor(viewer, { mode: 'substructure', structure: 'OCc1ccc(Br)cc1', pageSize: 200 }));
+    const bySubstructure = recordHits(
+      await searchFor(viewer, { mode: 'substructure', structure: 'OCc1ccc(Br)cc1', pageSize: 200 }),
+    );
     expect(bySubstructure.map((hit) => hit.recordId)).not.toContain(made.toRetire);
   });
 
   it('when a record is merged into another, then only the survivor is found', async () => {
-    const merge = await curator.post('/api/curation/merge').set('X-CSRF-Token', curator.csrf).send({ survivorId: made.survivor, mergedIds: [made.toMerge] });
+    const merge = await curator
+      .post('/api/curation/merge')
+      .set('X-CSRF-Token', curator.csrf)
+      .send({ survivorId: made.survivor, mergedIds: [made.toMerge] });
     expect(merge.status, JSON.stringify(merge.body)).toBe(201);
     const found = await ids();
     expect(found).toContain(made.survivor);

@@ -13,7 +13,15 @@ function index() {
       { id: 4, name: 'nicotinamide', synonyms: [], classNames: ['amide', 'pyridine-like nitrogen'] },
       { id: 5, name: 'Crème brûlée ester', synonyms: [], classNames: ['ester'] },
     ],
-    [{ id: 10, compoundId: 1, notes: 'Anisaldehyde dip gave a pink spot after heating.', notebookRef: 'QX-02 p. 42', outcomeReason: '' }],
+    [
+      {
+        id: 10,
+        compoundId: 1,
+        notes: 'Anisaldehyde dip gave a pink spot after heating.',
+        notebookRef: 'QX-02 p. 42',
+        outcomeReason: '',
+      },
+    ],
   );
   return text;
 }
@@ -55,10 +63,32 @@ describe('the text index', () => {
     // Stain and solvent names as the catalogue spells them (shared/catalogue); common practice names of the trade.
     const text = new TextIndex();
     const plain = { notes: '', notebookRef: '', outcomeReason: '' };
-    text.load([], [
-      { id: 21, compoundId: 1, ...plain, conditions: conditionWords({ eluent: { components: [{ solvent: 'hexanes' }, { solvent: 'ethyl-acetate' }] }, stains: [{ method: 'kmno4', note: null }] }) },
-      { id: 22, compoundId: 2, ...plain, conditions: conditionWords({ eluent: { components: [{ solvent: 'dichloromethane' }, { solvent: 'methanol' }], additives: [{ additive: 'triethylamine' }] }, stains: [{ method: 'dragendorff', note: null }] }) },
-    ]);
+    text.load(
+      [],
+      [
+        {
+          id: 21,
+          compoundId: 1,
+          ...plain,
+          conditions: conditionWords({
+            eluent: { components: [{ solvent: 'hexanes' }, { solvent: 'ethyl-acetate' }] },
+            stains: [{ method: 'kmno4', note: null }],
+          }),
+        },
+        {
+          id: 22,
+          compoundId: 2,
+          ...plain,
+          conditions: conditionWords({
+            eluent: {
+              components: [{ solvent: 'dichloromethane' }, { solvent: 'methanol' }],
+              additives: [{ additive: 'triethylamine' }],
+            },
+            stains: [{ method: 'dragendorff', note: null }],
+          }),
+        },
+      ],
+    );
     expect([...text.search('KMnO4').records.keys()]).toEqual([21]);
     expect([...text.search('permanganate').records.keys()]).toEqual([21]);
     expect([...text.search('Dragendorff').records.keys()]).toEqual([22]);

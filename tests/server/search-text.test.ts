@@ -14,7 +14,11 @@ let nitrile: { id: number };
 beforeAll(async () => {
   member = await agentFor(app, 'member');
   viewer = await agentFor(app, 'viewer');
-  ester = await createRecord(member, { structure: 'CCCCCCCCCCCCCCCC(=O)OCCc1ccccc1', name: `phenethyl zephyranoate ${word}`, notes: null });
+  ester = await createRecord(member, {
+    structure: 'CCCCCCCCCCCCCCCC(=O)OCCc1ccccc1',
+    name: `phenethyl zephyranoate ${word}`,
+    notes: null,
+  });
   noted = await createRecord(member, {
     structure: 'CCCCCCCCCCCCCCCCCCCCO',
     name: `icosanol ${word}`,
@@ -25,7 +29,8 @@ beforeAll(async () => {
 });
 afterAll(close);
 
-const ids = async (params: Record<string, string | number>) => recordHits(await searchFor(viewer, { pageSize: 200, ...params })).map((hit) => hit.recordId);
+const ids = async (params: Record<string, string | number>) =>
+  recordHits(await searchFor(viewer, { pageSize: 200, ...params })).map((hit) => hit.recordId);
 
 describe('GET /api/search (text)', () => {
   it('when the name is typed with two typos and words swapped, then the record is still found', async () => {
@@ -67,7 +72,10 @@ describe('GET /api/search (text)', () => {
 
   it('when a record’s notes are edited, then the next search finds the new words (the index follows writes)', async () => {
     const fresh = uniqueWord();
-    const res = await member.patch(`/api/records/${noted.id}`).set('X-CSRF-Token', member.csrf).send({ notes: `Re-run: ${fresh} ran clean.` });
+    const res = await member
+      .patch(`/api/records/${noted.id}`)
+      .set('X-CSRF-Token', member.csrf)
+      .send({ notes: `Re-run: ${fresh} ran clean.` });
     expect(res.status).toBe(200);
     expect(await ids({ q: fresh })).toEqual([noted.id]);
   });
@@ -88,8 +96,18 @@ describe('GET /api/search (text)', () => {
   it('when a stain or a solvent of the conditions is typed, then the record is found (Dragendorff, KMnO4, DCM)', async () => {
     const other = uniqueWord();
     const stained = await createRecord(member, {
-      structure: 'CCCCCCCCCCCCN(C)C', name: `dodecyldimethylamine ${other}`, notes: `batch ${other}`,
-      eluent: { mode: 'isocratic', components: [{ solvent: 'dichloromethane', parts: 95 }, { solvent: 'methanol', parts: 5 }], additives: [], steps: [] },
+      structure: 'CCCCCCCCCCCCN(C)C',
+      name: `dodecyldimethylamine ${other}`,
+      notes: `batch ${other}`,
+      eluent: {
+        mode: 'isocratic',
+        components: [
+          { solvent: 'dichloromethane', parts: 95 },
+          { solvent: 'methanol', parts: 5 },
+        ],
+        additives: [],
+        steps: [],
+      },
       visualisation: ['Dragendorff', 'KMnO4'],
     });
     expect(await ids({ q: `Dragendorff ${other}` })).toContain(stained.id);

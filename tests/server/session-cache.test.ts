@@ -26,7 +26,10 @@ describe('cached sessions and users', () => {
   it('when an admin makes a viewer a member, then the very next request of that person may contribute', async () => {
     const viewer = await agentFor(app, 'viewer');
     expect((await me(viewer)).body.user.role).toBe('viewer'); // now cached
-    const change = await admin.patch(`/api/admin/users/${viewer.user!.id}`).set('X-CSRF-Token', admin.csrf).send({ role: 'member' });
+    const change = await admin
+      .patch(`/api/admin/users/${viewer.user!.id}`)
+      .set('X-CSRF-Token', admin.csrf)
+      .send({ role: 'member' });
     expect(change.status).toBe(200);
     expect((await me(viewer)).body.user.role).toBe('member');
   });
@@ -44,7 +47,9 @@ describe('cached sessions and users', () => {
     const member = await agentFor(app, 'member');
     expect((await me(member)).body.user?.id).toBe(member.user!.id);
     expect((await me(member)).body.user?.id).toBe(member.user!.id); // kept
-    await sequelize.query(`DELETE FROM sessions WHERE (sess -> 'passport' ->> 'user') = :id`, { replacements: { id: String(member.user!.id) } });
+    await sequelize.query(`DELETE FROM sessions WHERE (sess -> 'passport' ->> 'user') = :id`, {
+      replacements: { id: String(member.user!.id) },
+    });
     expect((await me(member)).body.user).toBeNull();
   });
 
@@ -52,7 +57,9 @@ describe('cached sessions and users', () => {
     const member = await agentFor(app, 'member');
     expect((await me(member)).body.user?.id).toBe(member.user!.id);
     expect((await member.get('/api/records')).status).toBe(200);
-    await sequelize.query(`UPDATE users SET status = 'disabled' WHERE id = :id`, { replacements: { id: member.user!.id } });
+    await sequelize.query(`UPDATE users SET status = 'disabled' WHERE id = :id`, {
+      replacements: { id: member.user!.id },
+    });
     expect((await me(member)).body.user).toBeNull();
     expect((await member.get('/api/records')).status).toBe(401);
   });

@@ -39,41 +39,49 @@ async function mint(agent: Agent, body: Record<string, unknown> = { name: 'night
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': freshAddress() });
 
 describe('personal API tokens', () => {
-  it('when a member creates a token, then the secret is answered once, only its SHA-256 is stored, and the list shows it without the secret', async () => {
-    const member = await agentFor(app, 'member');
-    const created = await mint(member, { name: 'instrument upload', readOnly: false });
-    expect(created.token).toMatch(API_TOKEN_PATTERN);
-    expect(created).toMatchObject({
-      name: 'instrument upload',
-      readOnly: false,
-      status: 'active',
-      lastUsedAt: null,
-      expiresAt: null,
-    });
-    const rows = await sequelize.query<{ token_hash: string }>('SELECT token_hash FROM api_tokens WHERE id = :id', {
-      replacements: { id: created.id },
-      type: QueryTypes.SELECT,
-    });
-    expect(rows).toEqual([{ token_hash: hashApiToken(created.token) }]);
-    const list = apiTokenListSchema.parse((await member.get('/api/tokens')).body);
-    expect(list.items.map((t) => t.id)).toEqual([created.id]);
-    expect(JSON.stringify(list)).not.toContain(created.token);
-  });
+  it(
+    'when a member creates a token, then the secret is answered once, only its SHA-256 is stored, ' +
+      'and the list shows it without the secret',
+    async () => {
+      const member = await agentFor(app, 'member');
+      const created = await mint(member, { name: 'instrument upload', readOnly: false });
+      expect(created.token).toMatch(API_TOKEN_PATTERN);
+      expect(created).toMatchObject({
+        name: 'instrument upload',
+        readOnly: false,
+        status: 'active',
+        lastUsedAt: null,
+        expiresAt: null,
+      });
+      const rows = await sequelize.query<{ token_hash: string }>('SELECT token_hash FROM api_tokens WHERE id = :id', {
+        replacements: { id: created.id },
+        type: QueryTypes.SELECT,
+      });
+      expect(rows).toEqual([{ token_hash: hashApiToken(created.token) }]);
+      const list = apiTokenListSchema.parse((await member.get('/api/tokens')).body);
+      expect(list.items.map((t) => t.id)).toEqual([created.id]);
+      expect(JSON.stringify(list)).not.toContain(created.token);
+    },
+  );
 
-  it('when a script sends the token as Bearer, then it reads and writes as the owner with no cookie and no CSRF token, and last used is noted', async () => {
-    const member = await agentFor(app, 'member');
-    const { token, id } = await mint(member);
-    const me = await request(app).get('/api/auth/me').set(bearer(token));
-    expect(me.body.user).toMatchObject({ id: member.user!.id, role: 'member' });
-    expect(me.headers['set-cookie']).toBeUndefined();
-    const bookmark = await request(app).get('/api/bookmarks').set(bearer(token));
-    expect(bookmark.status).toBe(200);
-    const write = await request(app).patch('/api/auth/me').set(bearer(token)).send({ name: 'Renamed by a script' });
-    expect(write.status, JSON.stringify(write.body)).toBe(200);
-    expect(write.body.user.name).toBe('Renamed by a script');
-    const listed = apiTokenListSchema.parse((await member.get('/api/tokens')).body).items.find((t) => t.id === id)!;
-    expect(listed.lastUsedAt).not.toBeNull();
-  });
+  it(
+    'when a script sends the token as Bearer, then it reads and writes as the owner with no cookie ' +
+      'and no CSRF token, and last used is noted',
+    async () => {
+      const member = await agentFor(app, 'member');
+      const { token, id } = await mint(member);
+      const me = await request(app).get('/api/auth/me').set(bearer(token));
+      expect(me.body.user).toMatchObject({ id: member.user!.id, role: 'member' });
+      expect(me.headers['set-cookie']).toBeUndefined();
+      const bookmark = await request(app).get('/api/bookmarks').set(bearer(token));
+      expect(bookmark.status).toBe(200);
+      const write = await request(app).patch('/api/auth/me').set(bearer(token)).send({ name: 'Renamed by a script' });
+      expect(write.status, JSON.stringify(write.body)).toBe(200);
+      expect(write.body.user.name).toBe('Renamed by a script');
+      const listed = apiTokenListSchema.parse((await member.get('/api/tokens')).body).items.find((t) => t.id === id)!;
+      expect(listed.lastUsedAt).not.toBeNull();
+    },
+  );
 
   it('when a read-only token writes, then 403, while it still reads', async () => {
     const curator = await agentFor(app, 'curator');
@@ -169,43 +177,47 @@ describe('personal API tokens', () => {
     expect(() => expiryOf('2026-12-03', now)).toThrow(/future/);
   });
 
-  it('when one address sends 4 refused tokens (limit lowered for the test), then the 5th attempt is 429, even with a good token', async () => {
-    const member = await agentFor(app, 'member');
-    const { token } = await mint(member);
-    const from = '203.0.113.77';
-    for (let i = 0; i < 4; i++) {
-      const res = await request(app)
-        .get('/api/overview')
-        .set({ Authorization: `Bearer rfo_${String(i).repeat(43)}`, 'X-Forwarded-For': from });
-      expect(res.status).toBe(401);
-    }
-    const blocked = await request(app)
-      .get('/api/overview')
-      .set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': from });
-    expect(blocked.status).toBe(429);
-    expect(blocked.body.error.code).toBe('too_many_attempts');
-    expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
-    const [{ hits }] = await sequelize.query<{ hits: number }>('SELECT hits FROM rate_limit_hits WHERE key = :key', {
-      replacements: { key: `api-token-address:${from}` },
-      type: QueryTypes.SELECT,
-    });
-    expect(hits).toBe(4);
-    // Another address is not held up, and good calls count nothing: 10 at once from one address all pass.
-    const calm = '203.0.113.78';
-    const burst = await Promise.all(
-      Array.from({ length: 10 }, () =>
-        request(app)
+  it(
+    'when one address sends 4 refused tokens (limit lowered for the test), then the 5th attempt is ' +
+      '429, even with a good token',
+    async () => {
+      const member = await agentFor(app, 'member');
+      const { token } = await mint(member);
+      const from = '203.0.113.77';
+      for (let i = 0; i < 4; i++) {
+        const res = await request(app)
           .get('/api/overview')
-          .set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': calm }),
-      ),
-    );
-    expect(burst.map((r) => r.status)).toEqual(Array(10).fill(200));
-    const counted = await sequelize.query('SELECT 1 FROM rate_limit_hits WHERE key = :key', {
-      replacements: { key: `api-token-address:${calm}` },
-      type: QueryTypes.SELECT,
-    });
-    expect(counted).toEqual([]);
-  });
+          .set({ Authorization: `Bearer rfo_${String(i).repeat(43)}`, 'X-Forwarded-For': from });
+        expect(res.status).toBe(401);
+      }
+      const blocked = await request(app)
+        .get('/api/overview')
+        .set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': from });
+      expect(blocked.status).toBe(429);
+      expect(blocked.body.error.code).toBe('too_many_attempts');
+      expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
+      const [{ hits }] = await sequelize.query<{ hits: number }>('SELECT hits FROM rate_limit_hits WHERE key = :key', {
+        replacements: { key: `api-token-address:${from}` },
+        type: QueryTypes.SELECT,
+      });
+      expect(hits).toBe(4);
+      // Another address is not held up, and good calls count nothing: 10 at once from one address all pass.
+      const calm = '203.0.113.78';
+      const burst = await Promise.all(
+        Array.from({ length: 10 }, () =>
+          request(app)
+            .get('/api/overview')
+            .set({ Authorization: `Bearer ${token}`, 'X-Forwarded-For': calm }),
+        ),
+      );
+      expect(burst.map((r) => r.status)).toEqual(Array(10).fill(200));
+      const counted = await sequelize.query('SELECT 1 FROM rate_limit_hits WHERE key = :key', {
+        replacements: { key: `api-token-address:${calm}` },
+        type: QueryTypes.SELECT,
+      });
+      expect(counted).toEqual([]);
+    },
+  );
 
   it("when a token contributes a record, then it needs no CSRF token and the record is the owner's", async () => {
     const member = await agentFor(app, 'member');

@@ -18,11 +18,46 @@ function formulaMass(formula: string): number {
 
 // The compound class keys the chemistry catalogue defines (brief for compound-classes.ts).
 const classKeys = new Set([
-  'carboxylic-acid', 'ester', 'lactone', 'amide', 'lactam', 'carbamate', 'urea', 'primary-amine', 'secondary-amine',
-  'tertiary-amine', 'aniline', 'pyridine', 'indole', 'imidazole', 'heteroaromatic', 'aromatic', 'alcohol', 'phenol', 'diol',
-  'ether', 'acetal', 'aldehyde', 'ketone', 'alkene', 'alkyne', 'nitrile', 'nitro', 'aryl-halide', 'alkyl-halide',
-  'sulfonamide', 'sulfone', 'sulfide', 'thiol', 'boronic', 'silyl-ether', 'epoxide', 'ammonium-salt', 'amino-acid',
-  'phosphine-oxide', 'conjugated',
+  'carboxylic-acid',
+  'ester',
+  'lactone',
+  'amide',
+  'lactam',
+  'carbamate',
+  'urea',
+  'primary-amine',
+  'secondary-amine',
+  'tertiary-amine',
+  'aniline',
+  'pyridine',
+  'indole',
+  'imidazole',
+  'heteroaromatic',
+  'aromatic',
+  'alcohol',
+  'phenol',
+  'diol',
+  'ether',
+  'acetal',
+  'aldehyde',
+  'ketone',
+  'alkene',
+  'alkyne',
+  'nitrile',
+  'nitro',
+  'aryl-halide',
+  'alkyl-halide',
+  'sulfonamide',
+  'sulfone',
+  'sulfide',
+  'thiol',
+  'boronic',
+  'silyl-ether',
+  'epoxide',
+  'ammonium-salt',
+  'amino-acid',
+  'phosphine-oxide',
+  'conjugated',
 ]);
 
 describe('solvent catalogue', () => {
@@ -48,12 +83,16 @@ describe('solvent catalogue', () => {
 
   it.each([
     // Alumina: Snyder's eluotropic series (Snyder 1968, Principles of Adsorption Chromatography).
-    ['pentane', 'alumina', 0.0, /^Snyder 1968/], ['hexanes', 'alumina', 0.01, /^Snyder 1968/],
-    ['heptane', 'alumina', 0.01, /^Snyder 1968/], ['cyclohexane', 'alumina', 0.04, /^Snyder 1968/],
-    ['toluene', 'alumina', 0.29, /^Snyder 1968/], ['diethyl-ether', 'alumina', 0.38, /^Snyder 1968/],
+    ['pentane', 'alumina', 0.0, /^Snyder 1968/],
+    ['hexanes', 'alumina', 0.01, /^Snyder 1968/],
+    ['heptane', 'alumina', 0.01, /^Snyder 1968/],
+    ['cyclohexane', 'alumina', 0.04, /^Snyder 1968/],
+    ['toluene', 'alumina', 0.29, /^Snyder 1968/],
+    ['diethyl-ether', 'alumina', 0.38, /^Snyder 1968/],
     ['ethyl-acetate', 'alumina', 0.58, /^Snyder 1968/],
     // Silica: P. C. Sadek, The Illustrated Pocket Dictionary of Chromatography, p. 74.
-    ['diethyl-ether', 'silica', 0.43, /^Sadek, .*p\. 74/], ['ethyl-acetate', 'silica', 0.48, /^Sadek, .*p\. 74/],
+    ['diethyl-ether', 'silica', 0.43, /^Sadek, .*p\. 74/],
+    ['ethyl-acetate', 'silica', 0.48, /^Sadek, .*p\. 74/],
   ] as const)('gives %s on %s the published ε° %s and cites it', (key, adsorbent, value, citation) => {
     const strength = requireSolvent(key).strength[adsorbent];
     expect(strength?.value).toBe(value);
@@ -63,10 +102,17 @@ describe('solvent catalogue', () => {
 
   it.each([
     // Snyder ε° recalled from memory (no published table checked): the recalled value or range
-    ['toluene', 'silica', 0.22, 0.22], ['dichloromethane', 'alumina', 0.42, 0.42], ['dichloromethane', 'silica', 0.3, 0.32],
-    ['acetone', 'alumina', 0.56, 0.56], ['acetone', 'silica', 0.53, 0.53], ['acetonitrile', 'alumina', 0.65, 0.65],
-    ['acetonitrile', 'silica', 0.52, 0.52], ['isopropanol', 'alumina', 0.82, 0.82], ['isopropanol', 'silica', 0.6, 0.6],
-    ['methanol', 'alumina', 0.95, 0.95], ['methanol', 'silica', 0.7, 0.73],
+    ['toluene', 'silica', 0.22, 0.22],
+    ['dichloromethane', 'alumina', 0.42, 0.42],
+    ['dichloromethane', 'silica', 0.3, 0.32],
+    ['acetone', 'alumina', 0.56, 0.56],
+    ['acetone', 'silica', 0.53, 0.53],
+    ['acetonitrile', 'alumina', 0.65, 0.65],
+    ['acetonitrile', 'silica', 0.52, 0.52],
+    ['isopropanol', 'alumina', 0.82, 0.82],
+    ['isopropanol', 'silica', 0.6, 0.6],
+    ['methanol', 'alumina', 0.95, 0.95],
+    ['methanol', 'silica', 0.7, 0.73],
   ] as const)('labels %s on %s as from memory within the recalled %s–%s', (key, adsorbent, low, high) => {
     const strength = requireSolvent(key).strength[adsorbent];
     expect(strength?.value).toBeGreaterThanOrEqual(low);
@@ -76,7 +122,11 @@ describe('solvent catalogue', () => {
   });
 
   it.each([
-    ['ethyl-acetate', 5.2], ['dichloromethane', 4.1], ['diethyl-ether', 4.5], ['acetone', 4.2], ['acetonitrile', 3.1],
+    ['ethyl-acetate', 5.2],
+    ['dichloromethane', 4.1],
+    ['diethyl-ether', 4.5],
+    ['acetone', 4.2],
+    ['acetonitrile', 3.1],
   ] as const)('gives %s the adsorbed area n_b %s, labelled from memory (Snyder’s n_b, recalled)', (key, area) => {
     expect(requireSolvent(key).adsorbedArea).toMatchObject({ value: area, provenance: 'from-memory' });
   });
@@ -91,19 +141,23 @@ describe('solvent catalogue', () => {
   });
 
   it('offers heptane for hexanes and greener swaps for ethers and DCM/MeOH (common practice)', () => {
-    const swaps = (key: string) => requireSolvent(key).greenerAlternatives.map((swap) => swap.solvents.map((part) => part.solvent).join('+'));
+    const swaps = (key: string) =>
+      requireSolvent(key).greenerAlternatives.map((swap) => swap.solvents.map((part) => part.solvent).join('+'));
     expect(swaps('hexanes')).toContain('heptane');
     expect(swaps('diethyl-ether')).toEqual(expect.arrayContaining(['mtbe', '2-methyltetrahydrofuran', 'cpme']));
     expect(swaps('tetrahydrofuran')).toEqual(expect.arrayContaining(['2-methyltetrahydrofuran', 'cpme']));
     expect(swaps('methanol')).toContain('ethyl-acetate+ethanol');
     for (const solvent of solvents) {
-      for (const swap of solvent.greenerAlternatives) for (const part of swap.solvents) expect(solventByKey(part.solvent)?.key, part.solvent).toBe(part.solvent);
+      for (const swap of solvent.greenerAlternatives)
+        for (const part of swap.solvents) expect(solventByKey(part.solvent)?.key, part.solvent).toBe(part.solvent);
     }
   });
 
   it('marks the usual peroxide formers and suspected carcinogens (common practice)', () => {
-    for (const key of ['diethyl-ether', 'tetrahydrofuran', 'dioxane']) expect(requireSolvent(key).hazards).toContain('peroxide-former');
-    for (const key of ['dichloromethane', 'chloroform']) expect(requireSolvent(key).hazards).toContain('carcinogen-suspect');
+    for (const key of ['diethyl-ether', 'tetrahydrofuran', 'dioxane'])
+      expect(requireSolvent(key).hazards).toContain('peroxide-former');
+    for (const key of ['dichloromethane', 'chloroform'])
+      expect(requireSolvent(key).hazards).toContain('carcinogen-suspect');
     expect(requireSolvent('benzene').hazards).toContain('carcinogen');
   });
 });
@@ -118,13 +172,19 @@ describe('additive and stain catalogues', () => {
   });
 
   it('refers only to compound class keys the chemistry catalogue defines', () => {
-    for (const stain of stains) for (const key of stain.detects) expect(classKeys.has(key), `${stain.key}: ${key}`).toBe(true);
-    for (const additive of additives) for (const key of additive.helpsClasses) expect(classKeys.has(key), `${additive.key}: ${key}`).toBe(true);
+    for (const stain of stains)
+      for (const key of stain.detects) expect(classKeys.has(key), `${stain.key}: ${key}`).toBe(true);
+    for (const additive of additives)
+      for (const key of additive.helpsClasses) expect(classKeys.has(key), `${additive.key}: ${key}`).toBe(true);
   });
 
   it.each([
     // Standard TLC stain tables (common practice; no published source recorded, see docs/references.md)
-    ['kmno4', 'alkene'], ['ninhydrin', 'primary-amine'], ['ninhydrin', 'amino-acid'], ['dnp', 'ketone'], ['dnp', 'aldehyde'],
+    ['kmno4', 'alkene'],
+    ['ninhydrin', 'primary-amine'],
+    ['ninhydrin', 'amino-acid'],
+    ['dnp', 'ketone'],
+    ['dnp', 'aldehyde'],
     ['bromocresol-green', 'carboxylic-acid'],
   ])('records that %s shows %s, cited as common practice', (stainKey, classKey) => {
     const stain = stains.find((entry) => entry.key === stainKey);

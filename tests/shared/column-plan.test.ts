@@ -13,19 +13,37 @@ const published = [
 
 describe('column plan after Still, Kahn & Mitra (J. Org. Chem. 1978, 43, 2923)', () => {
   it('holds the published table row for row', () => {
-    expect(stillTable.map((row) => [row.diameterMm, row.eluentMl, row.loadMgAtDeltaRf02, row.loadMgAtDeltaRf01, row.fractionMl]))
-      .toEqual(published.map((row) => [row.diameterMm, row.eluentMl, row.loadAt02, row.loadAt01, row.fractionMl]));
+    expect(
+      stillTable.map((row) => [
+        row.diameterMm,
+        row.eluentMl,
+        row.loadMgAtDeltaRf02,
+        row.loadMgAtDeltaRf01,
+        row.fractionMl,
+      ]),
+    ).toEqual(published.map((row) => [row.diameterMm, row.eluentMl, row.loadAt02, row.loadAt01, row.fractionMl]));
   });
 
   it.each(published)('reproduces the $diameterMm mm row for its load at ΔRf ≥ 0.2', (row) => {
     const plan = planColumn({ sampleMg: row.loadAt02, rfTarget: 0.3, rfImpurity: 0.55 });
-    expect(plan).toMatchObject({ diameterMm: row.diameterMm, eluentMl: row.eluentMl, fractionMl: row.fractionMl, loadColumn: 'deltaRf02', tableDiameterMm: row.diameterMm });
+    expect(plan).toMatchObject({
+      diameterMm: row.diameterMm,
+      eluentMl: row.eluentMl,
+      fractionMl: row.fractionMl,
+      loadColumn: 'deltaRf02',
+      tableDiameterMm: row.diameterMm,
+    });
     expect(plan.sources.diameterMm).toMatch(/Still, Kahn & Mitra.*row/);
   });
 
   it.each(published)('reproduces the $diameterMm mm row for its load at ΔRf ≥ 0.1', (row) => {
     const plan = planColumn({ sampleMg: row.loadAt01, rfTarget: 0.3, rfImpurity: 0.42 });
-    expect(plan).toMatchObject({ diameterMm: row.diameterMm, eluentMl: row.eluentMl, fractionMl: row.fractionMl, loadColumn: 'deltaRf01' });
+    expect(plan).toMatchObject({
+      diameterMm: row.diameterMm,
+      eluentMl: row.eluentMl,
+      fractionMl: row.fractionMl,
+      loadColumn: 'deltaRf01',
+    });
   });
 
   it('interpolates linearly between rows: 650 mg at ΔRf 0.25 sits halfway between the 20 and 30 mm rows', () => {

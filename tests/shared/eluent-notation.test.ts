@@ -59,24 +59,40 @@ describe('reading eluent notations from lab spreadsheets', () => {
     expect(eluent.additives).toEqual([{ additive: 'acetic-acid', percent: 0.5 }]);
   });
 
-  it.each(['EtOAc in hexanes 0→30%', '0–30% EtOAc in hexanes', 'EtOAc/hexanes 0-30%', 'gradient 0 to 30% EtOAc in hexanes'])('reads the gradient "%s" from hexanes to 30% EtOAc', (notation) => {
+  it.each([
+    'EtOAc in hexanes 0→30%',
+    '0–30% EtOAc in hexanes',
+    'EtOAc/hexanes 0-30%',
+    'gradient 0 to 30% EtOAc in hexanes',
+  ])('reads the gradient "%s" from hexanes to 30% EtOAc', (notation) => {
     const eluent = parsed(notation);
     expect(eluent.mode).toBe('gradient');
-    expect(eluent.steps.map((step) => fractions(step.components))).toEqual([{ hexanes: 1 }, { 'ethyl-acetate': 0.3, hexanes: 0.7 }]);
+    expect(eluent.steps.map((step) => fractions(step.components))).toEqual([
+      { hexanes: 1 },
+      { 'ethyl-acetate': 0.3, hexanes: 0.7 },
+    ]);
     expect(fractions(eluent.components)).toEqual({ 'ethyl-acetate': 0.3, hexanes: 0.7 });
   });
 
   it('reads a ratio gradient "hexanes/EtOAc 9:1 → 1:1"', () => {
     const eluent = parsed('hexanes/EtOAc 9:1 → 1:1');
-    expect(eluent.steps.map((step) => fractions(step.components))).toEqual([{ hexanes: 0.9, 'ethyl-acetate': 0.1 }, { hexanes: 0.5, 'ethyl-acetate': 0.5 }]);
+    expect(eluent.steps.map((step) => fractions(step.components))).toEqual([
+      { hexanes: 0.9, 'ethyl-acetate': 0.1 },
+      { hexanes: 0.5, 'ethyl-acetate': 0.5 },
+    ]);
   });
 
   it('reads a three-step ratio gradient "PE/EA 10:1→5:1→2:1"', () => {
-    expect(parsed('PE/EA 10:1→5:1→2:1').steps.map((step) => fractions(step.components)['ethyl-acetate'])).toEqual([0.091, 0.167, 0.333]);
+    expect(parsed('PE/EA 10:1→5:1→2:1').steps.map((step) => fractions(step.components)['ethyl-acetate'])).toEqual([
+      0.091, 0.167, 0.333,
+    ]);
   });
 
   it('reads "EtOAc:hexanes 1:1 to 100% EtOAc" as a step from a ratio to a pure solvent', () => {
-    expect(parsed('EtOAc:hexanes 1:1 to 100% EtOAc').steps.map((step) => fractions(step.components))).toEqual([{ 'ethyl-acetate': 0.5, hexanes: 0.5 }, { 'ethyl-acetate': 1 }]);
+    expect(parsed('EtOAc:hexanes 1:1 to 100% EtOAc').steps.map((step) => fractions(step.components))).toEqual([
+      { 'ethyl-acetate': 0.5, hexanes: 0.5 },
+      { 'ethyl-acetate': 1 },
+    ]);
   });
 
   it('reads step gradients with column volumes, "hexanes, 2 CV → EtOAc/hexanes 1:4, 5 CV"', () => {
@@ -91,8 +107,14 @@ describe('refusing notations it cannot read, with a reason', () => {
       ok: false,
       error: { message: expect.stringContaining('hexnaes'), unknownWord: 'hexnaes', suggestion: 'hexanes' },
     });
-    expect(parseEluent('20% ethyl acetat in hexanes')).toMatchObject({ ok: false, error: { unknownWord: 'ethyl acetat', suggestion: 'ethyl acetate' } });
-    expect(parseEluent('DCM/methanl 9:1')).toMatchObject({ ok: false, error: { unknownWord: 'methanl', suggestion: 'methanol' } });
+    expect(parseEluent('20% ethyl acetat in hexanes')).toMatchObject({
+      ok: false,
+      error: { unknownWord: 'ethyl acetat', suggestion: 'ethyl acetate' },
+    });
+    expect(parseEluent('DCM/methanl 9:1')).toMatchObject({
+      ok: false,
+      error: { unknownWord: 'methanl', suggestion: 'methanol' },
+    });
   });
 
   it.each([
@@ -121,8 +143,14 @@ describe('writing eluents', () => {
   });
 
   it.each([
-    'EtOAc/hexanes 1:4', '5% MeOH/DCM + 1% NH4OH', 'PE/EA 10:1', 'EtOAc in hexanes 0→30%', 'hexanes, 2 CV → EtOAc/hexanes 1:4, 5 CV',
-    'toluene/acetone/MeOH 8:1:1', 'MeCN/water 1:1 + 0.1% TFA', '2-MeTHF/heptane 1:3',
+    'EtOAc/hexanes 1:4',
+    '5% MeOH/DCM + 1% NH4OH',
+    'PE/EA 10:1',
+    'EtOAc in hexanes 0→30%',
+    'hexanes, 2 CV → EtOAc/hexanes 1:4, 5 CV',
+    'toluene/acetone/MeOH 8:1:1',
+    'MeCN/water 1:1 + 0.1% TFA',
+    '2-MeTHF/heptane 1:3',
   ])('reads back what it writes for "%s"', (notation) => {
     const eluent = parsed(notation);
     expect(parsed(formatEluent(eluent))).toEqual({
@@ -132,13 +160,45 @@ describe('writing eluents', () => {
     });
     const again = parsed(formatEluent(eluent));
     expect(fractions(again.components)).toEqual(fractions(eluent.components));
-    expect(again.steps.map((step) => fractions(step.components))).toEqual(eluent.steps.map((step) => fractions(step.components)));
+    expect(again.steps.map((step) => fractions(step.components))).toEqual(
+      eluent.steps.map((step) => fractions(step.components)),
+    );
   });
 });
 
 describe('any text a spreadsheet cell may hold', () => {
-  const pieces = fc.constantFrom('EtOAc', 'hexanes', 'DCM', 'MeOH', 'Et3N', 'NH4OH', 'PE', '/', ':', ' ', '%', '→', '-', '(', ')', '+', 'in', '1', '4', '0.5', '20', '100', 'CV', ',', 'to', 'gradient');
-  const cells = fc.oneof(fc.string({ maxLength: 40 }), fc.array(pieces, { maxLength: 12 }).map((parts) => parts.join('')));
+  const pieces = fc.constantFrom(
+    'EtOAc',
+    'hexanes',
+    'DCM',
+    'MeOH',
+    'Et3N',
+    'NH4OH',
+    'PE',
+    '/',
+    ':',
+    ' ',
+    '%',
+    '→',
+    '-',
+    '(',
+    ')',
+    '+',
+    'in',
+    '1',
+    '4',
+    '0.5',
+    '20',
+    '100',
+    'CV',
+    ',',
+    'to',
+    'gradient',
+  );
+  const cells = fc.oneof(
+    fc.string({ maxLength: 40 }),
+    fc.array(pieces, { maxLength: 12 }).map((parts) => parts.join('')),
+  );
 
   it('either reads into a valid eluent or refuses with a message, never throwing', () => {
     fc.assert(

@@ -44,16 +44,22 @@ describe('Snyder solvent strength of mixtures (Snyder 1968; equation from memory
     const withValues = solvents.filter((solvent) => solvent.strength[adsorbent]);
     expect(withValues.length).toBeGreaterThan(12);
     for (const solvent of withValues) {
-      expect(epsilon([{ solvent: solvent.key, parts: 1 }], adsorbent), solvent.key).toBeCloseTo(solvent.strength[adsorbent]?.value as number, 12);
+      expect(epsilon([{ solvent: solvent.key, parts: 1 }], adsorbent), solvent.key).toBeCloseTo(
+        solvent.strength[adsorbent]?.value as number,
+        12,
+      );
     }
   });
 
   it.each([
     // Published values: silica from Sadek, Illustrated Pocket Dictionary of Chromatography, p. 74; alumina from
     // Snyder's eluotropic series (Snyder 1968).
-    ['ethyl-acetate', 'silica', 0.48], ['diethyl-ether', 'silica', 0.43],
-    ['ethyl-acetate', 'alumina', 0.58], ['diethyl-ether', 'alumina', 0.38],
-    ['toluene', 'alumina', 0.29], ['pentane', 'alumina', 0],
+    ['ethyl-acetate', 'silica', 0.48],
+    ['diethyl-ether', 'silica', 0.43],
+    ['ethyl-acetate', 'alumina', 0.58],
+    ['diethyl-ether', 'alumina', 0.38],
+    ['toluene', 'alumina', 0.29],
+    ['pentane', 'alumina', 0],
   ] as const)('gives pure %s on %s its published ε° %s', (solvent, adsorbent, published) => {
     expect(epsilon([{ solvent, parts: 1 }], adsorbent)).toBeCloseTo(published, 9);
   });
@@ -64,9 +70,14 @@ describe('Snyder solvent strength of mixtures (Snyder 1968; equation from memory
   });
 
   it.each([
-    ['hexanes', 'ethyl-acetate', 'silica'], ['hexanes', 'diethyl-ether', 'silica'], ['dichloromethane', 'methanol', 'silica'],
-    ['toluene', 'acetone', 'silica'], ['heptane', 'ethanol', 'silica'], ['pentane', 'dichloromethane', 'alumina'],
-    ['hexanes', 'ethyl-acetate', 'alumina'], ['chloroform', 'methanol', 'alumina'],
+    ['hexanes', 'ethyl-acetate', 'silica'],
+    ['hexanes', 'diethyl-ether', 'silica'],
+    ['dichloromethane', 'methanol', 'silica'],
+    ['toluene', 'acetone', 'silica'],
+    ['heptane', 'ethanol', 'silica'],
+    ['pentane', 'dichloromethane', 'alumina'],
+    ['hexanes', 'ethyl-acetate', 'alumina'],
+    ['chloroform', 'methanol', 'alumina'],
   ] as const)('rises monotonically with the fraction of %s → %s on %s', (weak, strong, adsorbent) => {
     let previous = -Infinity;
     for (let step = 0; step <= 200; step += 1) {
@@ -89,8 +100,21 @@ describe('Snyder solvent strength of mixtures (Snyder 1968; equation from memory
   });
 
   it('puts a three-solvent eluent between its weakest and strongest solvents and above the same mixture without methanol', () => {
-    const ternary = epsilon([{ solvent: 'hexanes', parts: 5 }, { solvent: 'dichloromethane', parts: 4 }, { solvent: 'methanol', parts: 1 }], 'silica');
-    const binary = epsilon([{ solvent: 'hexanes', parts: 5 }, { solvent: 'dichloromethane', parts: 4 }], 'silica');
+    const ternary = epsilon(
+      [
+        { solvent: 'hexanes', parts: 5 },
+        { solvent: 'dichloromethane', parts: 4 },
+        { solvent: 'methanol', parts: 1 },
+      ],
+      'silica',
+    );
+    const binary = epsilon(
+      [
+        { solvent: 'hexanes', parts: 5 },
+        { solvent: 'dichloromethane', parts: 4 },
+      ],
+      'silica',
+    );
     expect(ternary).toBeGreaterThan(binary);
     expect(ternary).toBeLessThan(0.715);
   });
@@ -108,7 +132,10 @@ describe('Snyder solvent strength of mixtures (Snyder 1968; equation from memory
 
 describe('the volume fraction that gives a target strength', () => {
   it('inverts the strength of hexanes/EtOAc and DCM/MeOH mixtures', () => {
-    for (const [weak, strong] of [['hexanes', 'ethyl-acetate'], ['dichloromethane', 'methanol']]) {
+    for (const [weak, strong] of [
+      ['hexanes', 'ethyl-acetate'],
+      ['dichloromethane', 'methanol'],
+    ]) {
       for (const fraction of [0.02, 0.1, 0.25, 0.5, 0.8]) {
         const target = epsilon(pair(weak, strong, fraction), 'silica');
         const solution = volumeFractionForStrength(weak, strong, target, 'silica');
@@ -119,10 +146,18 @@ describe('the volume fraction that gives a target strength', () => {
   });
 
   it('flags a target stronger than the pure strong solvent and clamps to it', () => {
-    expect(volumeFractionForStrength('hexanes', 'diethyl-ether', 0.6, 'silica')).toMatchObject({ ok: true, strongVolumeFraction: 1, reach: 'above-range' });
+    expect(volumeFractionForStrength('hexanes', 'diethyl-ether', 0.6, 'silica')).toMatchObject({
+      ok: true,
+      strongVolumeFraction: 1,
+      reach: 'above-range',
+    });
   });
 
   it('flags a target weaker than the pure weak solvent and clamps to it', () => {
-    expect(volumeFractionForStrength('dichloromethane', 'methanol', 0.1, 'silica')).toMatchObject({ ok: true, strongVolumeFraction: 0, reach: 'below-range' });
+    expect(volumeFractionForStrength('dichloromethane', 'methanol', 0.1, 'silica')).toMatchObject({
+      ok: true,
+      strongVolumeFraction: 0,
+      reach: 'below-range',
+    });
   });
 });

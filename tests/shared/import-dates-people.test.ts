@@ -7,17 +7,30 @@ const now = new Date('2026-12-04T12:00:00Z');
 // Date forms as lab sheets carry them (ISO 8601; day-first as in most of Europe; month-first as in the US: common practice).
 describe('the day/month order of a date column', () => {
   it('is decided by any cell whose first number is above 12 (day first) or whose second is (month first)', () => {
-    expect(decideDateOrder(['04/03/2021', '25/03/2021', '01/02/2020'])).toMatchObject({ order: 'dmy', needsChoice: false });
+    expect(decideDateOrder(['04/03/2021', '25/03/2021', '01/02/2020'])).toMatchObject({
+      order: 'dmy',
+      needsChoice: false,
+    });
     expect(decideDateOrder(['04/03/2021', '03/25/2021'])).toMatchObject({ order: 'mdy', needsChoice: false });
   });
 
   it('asks when no cell decides, and when cells contradict each other and some are ambiguous', () => {
-    expect(decideDateOrder(['04/03/2021', '01/02/2020'])).toMatchObject({ order: null, needsChoice: true, evidence: { ambiguous: 2 } });
-    expect(decideDateOrder(['25/03/2021', '03/25/2021', '04/03/2021'])).toMatchObject({ order: null, needsChoice: true });
+    expect(decideDateOrder(['04/03/2021', '01/02/2020'])).toMatchObject({
+      order: null,
+      needsChoice: true,
+      evidence: { ambiguous: 2 },
+    });
+    expect(decideDateOrder(['25/03/2021', '03/25/2021', '04/03/2021'])).toMatchObject({
+      order: null,
+      needsChoice: true,
+    });
   });
 
   it('needs no choice when every date is unambiguous (ISO, month names, typed date cells)', () => {
-    expect(decideDateOrder(['2021-03-04', '4 Mar 2021', 'March 4, 2021', ''])).toMatchObject({ order: null, needsChoice: false });
+    expect(decideDateOrder(['2021-03-04', '4 Mar 2021', 'March 4, 2021', ''])).toMatchObject({
+      order: null,
+      needsChoice: false,
+    });
     expect(classifyDate('2021-03-04')).toBe('unambiguous');
     expect(classifyDate('not a date')).toBeNull();
   });
@@ -37,9 +50,18 @@ describe('readDate', () => {
   });
 
   it('refuses an ambiguous date without an order, an impossible one, and one in the future, saying why', () => {
-    expect(readDate('04/03/2021', null, now)).toMatchObject({ ok: false, reason: expect.stringMatching(/day\/month or month\/day/) });
-    expect(readDate('31/02/2021', 'dmy', now)).toMatchObject({ ok: false, reason: expect.stringMatching(/not a calendar date/) });
-    expect(readDate('2030-01-01', null, now)).toMatchObject({ ok: false, reason: expect.stringMatching(/outside 1950 to today/) });
+    expect(readDate('04/03/2021', null, now)).toMatchObject({
+      ok: false,
+      reason: expect.stringMatching(/day\/month or month\/day/),
+    });
+    expect(readDate('31/02/2021', 'dmy', now)).toMatchObject({
+      ok: false,
+      reason: expect.stringMatching(/not a calendar date/),
+    });
+    expect(readDate('2030-01-01', null, now)).toMatchObject({
+      ok: false,
+      reason: expect.stringMatching(/outside 1950 to today/),
+    });
     expect(readDate('last Tuesday', null, now)).toMatchObject({ ok: false });
   });
 });
@@ -54,8 +76,18 @@ const members: Member[] = [
 
 describe('matchMember', () => {
   it.each([
-    ['Ada Marie Lindqvist', 1], ['lindqvist, ada marie', 1], ['AML', 1], ['A.L.', 1], ['ada.lindqvist@example.org', 1], ['Lindqvist', 1],
-    ['Tomas Okafor', 2], ['TO', 2], ['tokafor', 2], ['Tom', 3], ['tb', 3], ['Tina', 4],
+    ['Ada Marie Lindqvist', 1],
+    ['lindqvist, ada marie', 1],
+    ['AML', 1],
+    ['A.L.', 1],
+    ['ada.lindqvist@example.org', 1],
+    ['Lindqvist', 1],
+    ['Tomas Okafor', 2],
+    ['TO', 2],
+    ['tokafor', 2],
+    ['Tom', 3],
+    ['tb', 3],
+    ['Tina', 4],
   ] as const)('matches "%s" to member %i', (cell, id) => {
     expect(matchMember(cell, members)?.id).toBe(id);
   });

@@ -9,7 +9,16 @@ import { commonPasswordWords, longCommonPasswords } from '../../shared/catalogue
  * the pattern rules catch on passwords they were not written from.
  */
 const heldOut = {
-  caught: ['1111111111111', 'asdasdasd123', '123456789qwer', 'qwertyuiopasdfghjklzxcvbnm', '111222333444', 'barcelona123', 'zxcvbnm123456789', '112358132134'],
+  caught: [
+    '1111111111111',
+    'asdasdasd123',
+    '123456789qwer',
+    'qwertyuiopasdfghjklzxcvbnm',
+    '111222333444',
+    'barcelona123',
+    'zxcvbnm123456789',
+    '112358132134',
+  ],
   missed: ['modernwarfare2', 'cheerleading', 'alhamdulillah', 'dkflbvbhjdbx', '1a2s3d4f5g6h', 'd41d8cd98f00'],
 };
 
@@ -38,9 +47,16 @@ describe('password rules (NIST SP 800-63B §5.1.1.2: length, common passwords, r
     expect(refused).toEqual(heldOut.caught);
   });
 
-  it.each(['Sunshine2024!', 'P@ssw0rd-2024', 'iloveyou1234!', 'monkeymonkey', 'aaaaaaaaaaaa', 'abcdefghijkl', '0987654321098'])(
-    'refuses the predictable %s (common word or keyboard run padded, repetition, sequence — common practice)',
-    (pw) => expect(passwordProblem(pw)).toMatch(/^Too (repetitive|predictable)/),
+  it.each([
+    'Sunshine2024!',
+    'P@ssw0rd-2024',
+    'iloveyou1234!',
+    'monkeymonkey',
+    'aaaaaaaaaaaa',
+    'abcdefghijkl',
+    '0987654321098',
+  ])('refuses the predictable %s (common word or keyboard run padded, repetition, sequence — common practice)', (pw) =>
+    expect(passwordProblem(pw)).toMatch(/^Too (repetitive|predictable)/),
   );
 
   it("refuses a password built on the person's own e-mail or name, or on the app's name", () => {
@@ -49,10 +65,13 @@ describe('password rules (NIST SP 800-63B §5.1.1.2: length, common passwords, r
     expect(passwordProblem('rfolio-123456!')).toMatch(/predictable/);
   });
 
-  it.each(['correct-horse-battery-42', 'tangerine mosaic lantern', 'Vx9#mQ2!rT7p', 'summer-winter-spring-2024', 'silica dust settles slowly'])(
-    'accepts the unpredictable %s',
-    (pw) => expect(passwordProblem(pw)).toBeNull(),
-  );
+  it.each([
+    'correct-horse-battery-42',
+    'tangerine mosaic lantern',
+    'Vx9#mQ2!rT7p',
+    'summer-winter-spring-2024',
+    'silica dust settles slowly',
+  ])('accepts the unpredictable %s', (pw) => expect(passwordProblem(pw)).toBeNull());
 
   it('is the rule the shared zod schema applies, so the forms and the API agree', () => {
     expect(newPasswordSchema.safeParse('qwerty123456').success).toBe(false);

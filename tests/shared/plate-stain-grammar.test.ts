@@ -11,7 +11,13 @@ describe('readStains', () => {
   it.each([
     ['UV', [['uv-254', null]]],
     ['UV 254 nm', [['uv-254', null]]],
-    ['UV254/365', [['uv-254', null], ['uv-365', null]]],
+    [
+      'UV254/365',
+      [
+        ['uv-254', null],
+        ['uv-365', null],
+      ],
+    ],
     ['UV (faint)', [['uv-254', 'faint']]],
     ['KMnO4', [['kmno4', null]]],
     ['KMnO₄ dip', [['kmno4', 'dip']]],
@@ -88,7 +94,7 @@ describe('readPlate', () => {
     expect(readPlate(cell, 'flash').key).toBe(flash);
   });
 
-  it('takes a catalogue name written out in full (as the app\'s own export writes it) as it is', () => {
+  it("takes a catalogue name written out in full (as the app's own export writes it) as it is", () => {
     expect(readPlate('silica gel 40–63 µm', 'tlc').key).toBe('silica-gel');
     expect(readPlate('silica TLC plate with fluorescent indicator (F254)', 'flash').key).toBe('silica-tlc-f254');
   });

@@ -214,7 +214,10 @@ describe('Snyder ε° against how far the 17 measured eluents move the same comp
     expect(shared.length).toBeGreaterThan(50);
     const strengths = keys.map((key) => {
       const parts = key.split(',').map((share, index) => ({ solvent: solventOf[index], parts: Number(share) }));
-      const result = mixtureStrength(parts.filter((part) => part.parts > 0), 'silica');
+      const result = mixtureStrength(
+        parts.filter((part) => part.parts > 0),
+        'silica',
+      );
       if (!result.ok) throw new Error(result.message);
       return result.epsilon;
     });

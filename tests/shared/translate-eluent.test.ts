@@ -4,12 +4,19 @@ import { translateEluent, type TranslationTarget } from '../../shared/domain/tra
 
 const side = (solvent: string) => [{ solvent, parts: 1 }];
 const fractionOf = (components: { solvent: string; parts: number }[], solvent: string) =>
-  (components.find((part) => part.solvent === solvent)?.parts ?? 0) / components.reduce((sum, part) => sum + part.parts, 0);
+  (components.find((part) => part.solvent === solvent)?.parts ?? 0) /
+  components.reduce((sum, part) => sum + part.parts, 0);
 
 describe('eluent translation at equal Snyder strength', () => {
   it('turns hexanes/EtOAc 4:1 into heptane/EtOAc of the same ε° and back into 4:1', () => {
     const heptane: TranslationTarget = { weak: side('heptane'), strong: side('ethyl-acetate') };
-    const there = translateEluent([{ solvent: 'hexanes', parts: 4 }, { solvent: 'ethyl-acetate', parts: 1 }], heptane);
+    const there = translateEluent(
+      [
+        { solvent: 'hexanes', parts: 4 },
+        { solvent: 'ethyl-acetate', parts: 1 },
+      ],
+      heptane,
+    );
     if (!there.ok) throw new Error(there.message);
     expect(there.target.epsilon).toBeCloseTo(there.source.epsilon, 9);
     const back = translateEluent(there.target.components, { weak: side('hexanes'), strong: side('ethyl-acetate') });
@@ -18,7 +25,13 @@ describe('eluent translation at equal Snyder strength', () => {
   });
 
   it('turns DCM/MeOH 19:1 into EtOAc/EtOH and back (greener swap, common practice)', () => {
-    const there = translateEluent([{ solvent: 'dichloromethane', parts: 19 }, { solvent: 'methanol', parts: 1 }], { weak: side('ethyl-acetate'), strong: side('ethanol') });
+    const there = translateEluent(
+      [
+        { solvent: 'dichloromethane', parts: 19 },
+        { solvent: 'methanol', parts: 1 },
+      ],
+      { weak: side('ethyl-acetate'), strong: side('ethanol') },
+    );
     if (!there.ok) throw new Error(there.message);
     expect(there.reach).toBe('within');
     const back = translateEluent(there.target.components, { weak: side('dichloromethane'), strong: side('methanol') });
@@ -27,18 +40,35 @@ describe('eluent translation at equal Snyder strength', () => {
   });
 
   it('translates into a pair whose strong side is a blend, heptane with EtOAc/EtOH 3:1', () => {
-    const result = translateEluent([{ solvent: 'dichloromethane', parts: 9 }, { solvent: 'methanol', parts: 1 }], {
-      weak: side('heptane'),
-      strong: [{ solvent: 'ethyl-acetate', parts: 3 }, { solvent: 'ethanol', parts: 1 }],
-    });
+    const result = translateEluent(
+      [
+        { solvent: 'dichloromethane', parts: 9 },
+        { solvent: 'methanol', parts: 1 },
+      ],
+      {
+        weak: side('heptane'),
+        strong: [
+          { solvent: 'ethyl-acetate', parts: 3 },
+          { solvent: 'ethanol', parts: 1 },
+        ],
+      },
+    );
     if (!result.ok) throw new Error(result.message);
-    expect(fractionOf(result.target.components, 'ethyl-acetate') / fractionOf(result.target.components, 'ethanol')).toBeCloseTo(3, 9);
+    expect(
+      fractionOf(result.target.components, 'ethyl-acetate') / fractionOf(result.target.components, 'ethanol'),
+    ).toBeCloseTo(3, 9);
     const check = mixtureStrength(result.target.components, 'silica');
     expect(check.ok && check.epsilon).toBeCloseTo(result.source.epsilon, 6);
   });
 
   it('lists the hazards of the solvents on both sides', () => {
-    const result = translateEluent([{ solvent: 'hexanes', parts: 9 }, { solvent: 'diethyl-ether', parts: 1 }], { weak: side('heptane'), strong: side('mtbe') });
+    const result = translateEluent(
+      [
+        { solvent: 'hexanes', parts: 9 },
+        { solvent: 'diethyl-ether', parts: 1 },
+      ],
+      { weak: side('heptane'), strong: side('mtbe') },
+    );
     if (!result.ok) throw new Error(result.message);
     expect(result.hazards.source.map((entry) => entry.solvent)).toEqual(['hexanes', 'diethyl-ether']);
     expect(result.hazards.source[1].hazards).toContain('peroxide-former');
@@ -46,7 +76,13 @@ describe('eluent translation at equal Snyder strength', () => {
   });
 
   it('warns when the target pair cannot reach the strength, and gives its strongest mixture', () => {
-    const result = translateEluent([{ solvent: 'dichloromethane', parts: 1 }, { solvent: 'methanol', parts: 1 }], { weak: side('hexanes'), strong: side('diethyl-ether') });
+    const result = translateEluent(
+      [
+        { solvent: 'dichloromethane', parts: 1 },
+        { solvent: 'methanol', parts: 1 },
+      ],
+      { weak: side('hexanes'), strong: side('diethyl-ether') },
+    );
     if (!result.ok) throw new Error(result.message);
     expect(result.reach).toBe('above-range');
     expect(result.target.strongVolumeFraction).toBe(1);
@@ -54,12 +90,25 @@ describe('eluent translation at equal Snyder strength', () => {
   });
 
   it('always reminds that equal strength is not equal selectivity (common practice)', () => {
-    const result = translateEluent([{ solvent: 'hexanes', parts: 3 }, { solvent: 'ethyl-acetate', parts: 1 }], { weak: side('toluene'), strong: side('acetone') });
+    const result = translateEluent(
+      [
+        { solvent: 'hexanes', parts: 3 },
+        { solvent: 'ethyl-acetate', parts: 1 },
+      ],
+      { weak: side('toluene'), strong: side('acetone') },
+    );
     expect(result.ok && result.warnings.some((warning) => /selectivity/.test(warning))).toBe(true);
   });
 
   it('refuses a pair with a solvent that has no known ε°, naming it', () => {
-    expect(translateEluent([{ solvent: 'hexanes', parts: 1 }, { solvent: 'ethyl-acetate', parts: 1 }], { weak: side('heptane'), strong: side('isopropyl-acetate') }))
-      .toMatchObject({ ok: false, missing: ['isopropyl-acetate'] });
+    expect(
+      translateEluent(
+        [
+          { solvent: 'hexanes', parts: 1 },
+          { solvent: 'ethyl-acetate', parts: 1 },
+        ],
+        { weak: side('heptane'), strong: side('isopropyl-acetate') },
+      ),
+    ).toMatchObject({ ok: false, missing: ['isopropyl-acetate'] });
   });
 });

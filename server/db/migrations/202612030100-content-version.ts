@@ -19,21 +19,40 @@ import type { Migration } from '../migrator';
  * per transaction (a transaction-local flag), however many rows it writes.
  */
 export const NOT_CONTENT = [
-  'sessions', 'rate_limit_hits', 'bookmarks', 'invitations', 'password_resets', 'audit_log', 'search_changes', 'schema_migrations', 'data_versions', 'api_tokens',
+  'sessions',
+  'rate_limit_hits',
+  'bookmarks',
+  'invitations',
+  'password_resets',
+  'audit_log',
+  'search_changes',
+  'schema_migrations',
+  'data_versions',
+  'api_tokens',
 ];
 
-const usersOnlySignedIn = `(to_jsonb(OLD) - 'last_sign_in_at' - 'updated_at') IS DISTINCT FROM (to_jsonb(NEW) - 'last_sign_in_at' - 'updated_at')`;
+const usersOnlySignedIn =
+  `(to_jsonb(OLD) - 'last_sign_in_at' - 'updated_at') IS DISTINCT FROM ` +
+  `(to_jsonb(NEW) - 'last_sign_in_at' - 'updated_at')`;
 
 /** Adds the content triggers to a table (a later migration creating a content table calls this for it). */
 export async function watchContentTable(qi: QueryInterface, tablename: string): Promise<void> {
   const table = `"${tablename}"`;
-  const statements = tablename === 'users'
-    ? [
-        `CREATE CONSTRAINT TRIGGER content_changed AFTER INSERT OR DELETE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION rfolio_content_changed()`,
-        `CREATE CONSTRAINT TRIGGER content_changed_update AFTER UPDATE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW WHEN (${usersOnlySignedIn}) EXECUTE FUNCTION rfolio_content_changed()`,
-      ]
-    : [`CREATE CONSTRAINT TRIGGER content_changed AFTER INSERT OR UPDATE OR DELETE ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION rfolio_content_changed()`];
-  statements.push(`CREATE TRIGGER content_truncated AFTER TRUNCATE ON ${table} FOR EACH STATEMENT EXECUTE FUNCTION rfolio_content_changed()`);
+  const statements =
+    tablename === 'users'
+      ? [
+          `CREATE CONSTRAINT TRIGGER content_changed AFTER INSERT OR DELETE ON ${table} DEFERRABLE ` +
+            `INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION rfolio_content_changed()`,
+          `CREATE CONSTRAINT TRIGGER content_changed_update AFTER UPDATE ON ${table} DEFERRABLE ` +
+            `INITIALLY DEFERRED FOR EACH ROW WHEN (${usersOnlySignedIn}) EXECUTE FUNCTION rfolio_content_changed()`,
+        ]
+      : [
+          `CREATE CONSTRAINT TRIGGER content_changed AFTER INSERT OR UPDATE OR DELETE ON ${table} ` +
+            `DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION rfolio_content_changed()`,
+        ];
+  statements.push(
+    `CREATE TRIGGER content_truncated AFTER TRUNCATE ON ${table} FOR EACH STATEMENT EXECUTE FUNCTION rfolio_content_changed()`,
+  );
   for (const statement of statements) await qi.sequelize.query(statement);
 }
 
@@ -60,7 +79,8 @@ export const up: Migration = async ({ context: qi }) => {
 
 export const down: Migration = async ({ context: qi }) => {
   const [rows] = await qi.sequelize.query(
-    `SELECT DISTINCT c.relname AS tablename FROM pg_trigger t JOIN pg_class c ON c.oid = t.tgrelid WHERE t.tgname IN ('content_changed', 'content_changed_update', 'content_truncated')`,
+    `SELECT DISTINCT c.relname AS tablename FROM pg_trigger t JOIN pg_class c ON c.oid = t.tgrelid ` +
+      `WHERE t.tgname IN ('content_changed', 'content_changed_update', 'content_truncated')`,
   );
   for (const { tablename } of rows as { tablename: string }[]) {
     for (const trigger of ['content_changed', 'content_changed_update', 'content_truncated']) {

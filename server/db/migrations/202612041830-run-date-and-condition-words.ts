@@ -12,7 +12,8 @@ export const up: Migration = async ({ context: qi }) => {
     ALTER TABLE condition_records ADD COLUMN run_on DATE;
     DROP TRIGGER condition_records_search_change ON condition_records;
     CREATE TRIGGER condition_records_search_change
-      AFTER INSERT OR UPDATE OF compound_id, status, notes, notebook_ref, outcome_reason, purity_note, eluent, content_hash ON condition_records
+      AFTER INSERT OR UPDATE OF compound_id, status, notes, notebook_ref, outcome_reason, purity_note, eluent,
+        content_hash ON condition_records
       FOR EACH ROW EXECUTE FUNCTION rfolio_search_change('record');
   `);
 };

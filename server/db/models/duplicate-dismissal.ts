@@ -5,7 +5,10 @@ import { sequelize } from '../sequelize';
  * A curator's "these are not duplicates": hides the candidate group whose signature (sorted record ids,
  * each with its revision and updated_at) matches, so any change to one of the records brings it back.
  */
-export class DuplicateDismissal extends Model<InferAttributes<DuplicateDismissal>, InferCreationAttributes<DuplicateDismissal>> {
+export class DuplicateDismissal extends Model<
+  InferAttributes<DuplicateDismissal>,
+  InferCreationAttributes<DuplicateDismissal>
+> {
   declare id: CreationOptional<number>;
   declare recordIds: number[];
   declare signature: string;
@@ -23,5 +26,11 @@ DuplicateDismissal.init(
     actorId: { type: DataTypes.INTEGER, allowNull: false },
     at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
   },
-  { sequelize, tableName: 'duplicate_dismissals', modelName: 'DuplicateDismissal', timestamps: false, underscored: true },
+  {
+    sequelize,
+    tableName: 'duplicate_dismissals',
+    modelName: 'DuplicateDismissal',
+    timestamps: false,
+    underscored: true,
+  },
 );

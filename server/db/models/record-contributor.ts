@@ -7,7 +7,10 @@ export type ContributorRole = 'author' | 'editor' | 'merged-from';
  * Who is credited on a record: its author, people who edited it, and — after a merge — the authors
  * of the merged records (`viaRecordId` names which), so a merge never drops anyone's credit.
  */
-export class RecordContributor extends Model<InferAttributes<RecordContributor>, InferCreationAttributes<RecordContributor>> {
+export class RecordContributor extends Model<
+  InferAttributes<RecordContributor>,
+  InferCreationAttributes<RecordContributor>
+> {
   declare id: CreationOptional<number>;
   declare recordId: number;
   declare userId: number;

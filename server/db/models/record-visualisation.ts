@@ -2,7 +2,10 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import { sequelize } from '../sequelize';
 
 /** How a plate was made visible: a stain catalogue key (uv-254, kmno4, iodine, …) or 'other' with a note. */
-export class RecordVisualisation extends Model<InferAttributes<RecordVisualisation>, InferCreationAttributes<RecordVisualisation>> {
+export class RecordVisualisation extends Model<
+  InferAttributes<RecordVisualisation>,
+  InferCreationAttributes<RecordVisualisation>
+> {
   declare id: CreationOptional<number>;
   declare recordId: number;
   /** The record this row was first contributed to; differs from recordId after a merge. */

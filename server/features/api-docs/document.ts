@@ -123,8 +123,9 @@ const namedSchemas = {
 const DESCRIPTION = `The JSON API of Rfolio, generated from the same zod schemas the server validates with.
 
 Scripts authenticate with a personal API token (create one on the profile page) sent as
-\`Authorization: Bearer <token>\`: no cookie and no CSRF token are needed. A token acts with its owner's current role, or only reads (GET, HEAD) when it is
-read-only. The browser app uses a cookie session instead, and sends \`X-CSRF-Token\` on every write.
+\`Authorization: Bearer <token>\`: no cookie and no CSRF token are needed. A token acts with its owner's current
+role, or only reads (GET, HEAD) when it is read-only. The browser app uses a cookie session instead, and sends
+\`X-CSRF-Token\` on every write.
 
 Every failure answers \`{ "error": { "code", "message", "details"? } }\`.`;
 

@@ -23,7 +23,11 @@ import {
   unmergeResultSchema,
 } from '../../../shared/schemas/curation-dto';
 import { importDtoSchema, importListSchema, importPreviewSchema, undoPlanSchema } from '../../../shared/schemas/import';
-import { photoAnnotationHistorySchema, photoAnnotationSchema, plateReadingSchema } from '../../../shared/schemas/plates';
+import {
+  photoAnnotationHistorySchema,
+  photoAnnotationSchema,
+  plateReadingSchema,
+} from '../../../shared/schemas/plates';
 import { scoutResultSchema } from '../../../shared/schemas/scout';
 import { columnPlanResultSchema, translateEluentResultSchema } from '../../../shared/schemas/tools';
 import { searchContributorsSchema, searchResponseSchema } from '../../../shared/schemas/search';

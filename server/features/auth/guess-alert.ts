@@ -13,6 +13,8 @@ export function alertAccountOwner(email: string, failures: number): void {
   (async () => {
     const user = await userByEmail(email);
     if (!user || user.status !== 'active') return;
-    await sendMail(signInGuessedMail({ to: user.email, failures, at: new Date(), waitSeconds: env().SIGNIN_MAX_WAIT_SECONDS }));
+    await sendMail(
+      signInGuessedMail({ to: user.email, failures, at: new Date(), waitSeconds: env().SIGNIN_MAX_WAIT_SECONDS }),
+    );
   })().catch((err) => logger.warn({ err }, 'failed sign-in alert not sent'));
 }

@@ -15,7 +15,9 @@ passwordResetRouter.post(
   allow('public'),
   resetRequestsByAddress,
   handle({ body: passwordResetRequestSchema }, async ({ body }, _req, res) => {
-    res.status(202).json({ message: 'If that address has an account, a link to set a new password is on its way. It works for one hour.' });
+    res.status(202).json({
+      message: 'If that address has an account, a link to set a new password is on its way. It works for one hour.',
+    });
     requestPasswordReset(body.email).catch((err) => logger.error({ err }, 'password reset mail failed'));
   }),
 );

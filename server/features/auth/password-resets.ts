@@ -23,17 +23,38 @@ export async function requestPasswordReset(email: string): Promise<void> {
   const expiresAt = new Date(Date.now() + RESET_MINUTES * 60_000);
   await sequelize.transaction(async (transaction) => {
     // A newer link replaces every older one still open (as the e-mail and the 410 message say).
-    await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: { [Op.is]: null } }, transaction });
+    await PasswordReset.update(
+      { usedAt: new Date() },
+      { where: { userId: user.id, usedAt: { [Op.is]: null } }, transaction },
+    );
     await PasswordReset.create({ userId: user.id, tokenHash: hash, expiresAt }, { transaction });
-    await AuditEntry.create({ actorId: null, action: 'user.password_reset_request', subjectType: 'user', subjectId: String(user.id), details: {} }, { transaction });
+    await AuditEntry.create(
+      {
+        actorId: null,
+        action: 'user.password_reset_request',
+        subjectType: 'user',
+        subjectId: String(user.id),
+        details: {},
+      },
+      { transaction },
+    );
   });
   await sendMail(passwordResetMail({ to: user.email, token, expiresAt }));
 }
 
-const invalid = () => new AppError(410, 'reset_invalid', 'This reset link is not valid any more (used, expired or replaced). Ask for a new one.');
+const invalid = () =>
+  new AppError(
+    410,
+    'reset_invalid',
+    'This reset link is not valid any more (used, expired or replaced). Ask for a new one.',
+  );
 
 async function usableReset(token: string, transaction?: Transaction) {
-  const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) }, transaction, lock: transaction?.LOCK.UPDATE });
+  const reset = await PasswordReset.findOne({
+    where: { tokenHash: hashToken(token) },
+    transaction,
+    lock: transaction?.LOCK.UPDATE,
+  });
   if (!reset || reset.usedAt || reset.expiresAt <= new Date()) throw invalid();
   const user = await User.findByPk(reset.userId, { transaction });
   if (!user || user.status !== 'active') throw invalid();
@@ -54,9 +75,20 @@ export async function completePasswordReset(token: string, password: string): Pr
   await sequelize.transaction(async (transaction) => {
     const { user } = await usableReset(token, transaction);
     await user.update({ passwordHash }, { transaction });
-    await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: { [Op.is]: null } }, transaction });
+    await PasswordReset.update(
+      { usedAt: new Date() },
+      { where: { userId: user.id, usedAt: { [Op.is]: null } }, transaction },
+    );
     const ended = await endSessionsOf(user.id, { transaction });
-    await AuditEntry.create({ actorId: user.id, action: 'user.password_reset', subjectType: 'user', subjectId: String(user.id), details: { sessionsEnded: ended } }, { transaction });
+    await AuditEntry.create(
+      {
+        actorId: user.id,
+        action: 'user.password_reset',
+        subjectType: 'user',
+        subjectId: String(user.id),
+        details: { sessionsEnded: ended },
+      },
+      { transaction },
+    );
   });
 }
-

@@ -20,7 +20,9 @@ export async function updateProfileName(userId: number, name: string) {
 
 export class WrongPasswordError extends AppError {
   constructor() {
-    super(400, 'wrong_password', 'Your current password is not right.', [{ path: 'body.currentPassword', message: 'Not your current password.' }]);
+    super(400, 'wrong_password', 'Your current password is not right.', [
+      { path: 'body.currentPassword', message: 'Not your current password.' },
+    ]);
   }
 }
 
@@ -33,6 +35,15 @@ export async function changePassword(userId: number, input: PasswordChange, keep
   await sequelize.transaction(async (transaction) => {
     await user.update({ passwordHash }, { transaction });
     const ended = await endSessionsOf(user.id, { exceptSid: keepSid, transaction });
-    await AuditEntry.create({ actorId: user.id, action: 'user.password_change', subjectType: 'user', subjectId: String(user.id), details: { otherSessionsEnded: ended } }, { transaction });
+    await AuditEntry.create(
+      {
+        actorId: user.id,
+        action: 'user.password_change',
+        subjectType: 'user',
+        subjectId: String(user.id),
+        details: { otherSessionsEnded: ended },
+      },
+      { transaction },
+    );
   });
 }

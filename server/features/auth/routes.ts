@@ -7,7 +7,12 @@ import { alertAccountOwner } from './guess-alert';
 import { passport, toSessionUser } from '../../auth/passport';
 import { signIn } from '../../auth/sign-in';
 import { rememberDevice } from '../../auth/known-device';
-import { loginInputSchema, passwordChangeSchema, profileUpdateSchema, type SessionUser } from '../../../shared/schemas/auth';
+import {
+  loginInputSchema,
+  passwordChangeSchema,
+  profileUpdateSchema,
+  type SessionUser,
+} from '../../../shared/schemas/auth';
 import { AppError } from '../../http/errors';
 import { changePassword, updateProfileName, WrongPasswordError } from './profile';
 
@@ -19,13 +24,18 @@ authRouter.get('/csrf', allow('public'), (req, res) => {
 });
 
 authRouter.get('/me', allow('public'), (req, res) => {
-  res.set('Cache-Control', 'no-store').json({ user: req.user ?? null, firstSignIn: req.user ? !!req.session.firstSignIn : false });
+  res
+    .set('Cache-Control', 'no-store')
+    .json({ user: req.user ?? null, firstSignIn: req.user ? !!req.session.firstSignIn : false });
 });
 
 function authenticate(req: Request): Promise<{ user: SessionUser | false; disabled: boolean }> {
   return new Promise((resolve, reject) => {
-    passport.authenticate('local', { session: false }, (err: unknown, user: SessionUser | false, info?: { message?: string }) =>
-      err ? reject(err) : resolve({ user, disabled: info?.message === 'disabled' }),
+    passport.authenticate(
+      'local',
+      { session: false },
+      (err: unknown, user: SessionUser | false, info?: { message?: string }) =>
+        err ? reject(err) : resolve({ user, disabled: info?.message === 'disabled' }),
     )(req, req.res!, () => undefined);
   });
 }
@@ -37,7 +47,12 @@ authRouter.post(
   signInWaits,
   handle({ body: loginInputSchema }, async (_input, req, res) => {
     const { user, disabled } = await authenticate(req);
-    if (disabled) throw new AppError(403, 'account_disabled', 'This account is disabled. Ask your group’s admin to enable it again.');
+    if (disabled)
+      throw new AppError(
+        403,
+        'account_disabled',
+        'This account is disabled. Ask your group’s admin to enable it again.',
+      );
     if (!user) throw new AppError(401, 'invalid_credentials', 'Wrong e-mail or password.');
     const token = await signIn(req, user);
     rememberDevice(res, user.email);

@@ -26,8 +26,13 @@ export function presentBookmarks(bookmarks: Bookmark[], loaded: Loaded): Bookmar
       record: record ? presentRecordListItem(record, loaded.photoCounts.get(record.id) ?? 0) : null,
       compound: compound
         ? {
-            id: compound.id, name: compound.name, canonicalSmiles: compound.canonicalSmiles, formula: compound.formula, mw: compound.mw,
-            classes: compound.classes, recordCount: loaded.recordCounts.get(compound.id) ?? 0,
+            id: compound.id,
+            name: compound.name,
+            canonicalSmiles: compound.canonicalSmiles,
+            formula: compound.formula,
+            mw: compound.mw,
+            classes: compound.classes,
+            recordCount: loaded.recordCounts.get(compound.id) ?? 0,
           }
         : null,
     };

@@ -9,11 +9,21 @@ import { loadListRecords } from '../../core/record-queries';
 type Target = { recordId?: number; compoundId?: number };
 
 const whereTarget = (userId: number, target: Target) =>
-  target.recordId !== undefined ? { userId, recordId: target.recordId } : { userId, compoundId: target.compoundId as number };
+  target.recordId !== undefined
+    ? { userId, recordId: target.recordId }
+    : { userId, compoundId: target.compoundId as number };
 
 /** Every bookmark of a user, newest first, with the records and compounds they point to. */
 export async function listBookmarks(userId: number): Promise<BookmarkDto[]> {
-  return dtosOf(await Bookmark.findAll({ where: { userId }, order: [['createdAt', 'DESC'], ['id', 'DESC']] }));
+  return dtosOf(
+    await Bookmark.findAll({
+      where: { userId },
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+    }),
+  );
 }
 
 async function dtosOf(bookmarks: Bookmark[]): Promise<BookmarkDto[]> {
@@ -23,25 +33,38 @@ async function dtosOf(bookmarks: Bookmark[]): Promise<BookmarkDto[]> {
   const compounds = compoundIds.length ? await Compound.findAll({ where: { id: compoundIds } }) : [];
   const counts = compoundIds.length
     ? await sequelize.query<{ compound_id: number; n: string }>(
-      "SELECT compound_id, count(*) AS n FROM condition_records WHERE compound_id IN (:ids) AND status = 'active' GROUP BY compound_id",
-      { replacements: { ids: compoundIds }, type: QueryTypes.SELECT },
-    )
+        "SELECT compound_id, count(*) AS n FROM condition_records WHERE compound_id IN (:ids) AND status = 'active' GROUP BY compound_id",
+        { replacements: { ids: compoundIds }, type: QueryTypes.SELECT },
+      )
     : [];
-  return presentBookmarks(bookmarks, { records, photoCounts, compounds, recordCounts: new Map(counts.map((row) => [row.compound_id, Number(row.n)])) });
+  return presentBookmarks(bookmarks, {
+    records,
+    photoCounts,
+    compounds,
+    recordCounts: new Map(counts.map((row) => [row.compound_id, Number(row.n)])),
+  });
 }
 
 /** Checks the target exists and can be bookmarked: a merged record sends the user to its survivor. */
 async function checkTarget(target: Target): Promise<void> {
   if (target.recordId !== undefined) {
     const record = await ConditionRecord.findByPk(target.recordId, { attributes: ['id', 'status', 'mergedIntoId'] });
-    if (!record) throw new UnprocessableError(`No record with id ${target.recordId}.`, [{ path: 'body.recordId', message: 'Unknown record.' }]);
+    if (!record)
+      throw new UnprocessableError(`No record with id ${target.recordId}.`, [
+        { path: 'body.recordId', message: 'Unknown record.' },
+      ]);
     if (record.status === 'merged') {
-      throw new UnprocessableError(`Record ${record.id} was merged into record ${record.mergedIntoId}; bookmark that one.`, [{ path: 'body.recordId', message: 'Merged record.' }]);
+      throw new UnprocessableError(
+        `Record ${record.id} was merged into record ${record.mergedIntoId}; bookmark that one.`,
+        [{ path: 'body.recordId', message: 'Merged record.' }],
+      );
     }
     return;
   }
   if (!(await Compound.findByPk(target.compoundId, { attributes: ['id'] }))) {
-    throw new UnprocessableError(`No compound with id ${target.compoundId}.`, [{ path: 'body.compoundId', message: 'Unknown compound.' }]);
+    throw new UnprocessableError(`No compound with id ${target.compoundId}.`, [
+      { path: 'body.compoundId', message: 'Unknown compound.' },
+    ]);
   }
 }
 
@@ -50,7 +73,12 @@ export async function addBookmark(userId: number, input: Target & { note: string
   await checkTarget(input);
   const existing = await Bookmark.findOne({ where: whereTarget(userId, input) });
   if (existing) throw new ConflictError('Already bookmarked.', { bookmarkId: existing.id });
-  const bookmark = await Bookmark.create({ userId, recordId: input.recordId ?? null, compoundId: input.compoundId ?? null, note: input.note });
+  const bookmark = await Bookmark.create({
+    userId,
+    recordId: input.recordId ?? null,
+    compoundId: input.compoundId ?? null,
+    note: input.note,
+  });
   return (await dtosOf([bookmark]))[0];
 }
 

@@ -7,10 +7,18 @@ import { classDetail, classIndex } from './service';
 /** Compound classes (shared/catalogue/compound-classes.ts) with what the group's records say about them. */
 export const classesRouter = Router();
 
-classesRouter.get('/', allow('viewer'), handle({}, async (_input, _req, res) => {
-  res.json(await classIndex());
-}));
+classesRouter.get(
+  '/',
+  allow('viewer'),
+  handle({}, async (_input, _req, res) => {
+    res.json(await classIndex());
+  }),
+);
 
-classesRouter.get('/:key', allow('viewer'), handle({ params: classKeyParamSchema }, async ({ params }, _req, res) => {
-  res.json(await classDetail(params.key));
-}));
+classesRouter.get(
+  '/:key',
+  allow('viewer'),
+  handle({ params: classKeyParamSchema }, async ({ params }, _req, res) => {
+    res.json(await classDetail(params.key));
+  }),
+);

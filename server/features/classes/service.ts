@@ -4,7 +4,15 @@ import { NotFoundError } from '../../http/errors';
 import { compoundClassByKey, compoundClasses } from '../../../shared/catalogue/compound-classes';
 import type { ClassDetail, ClassIndex } from '../../../shared/schemas/classes';
 import { presentRecordListItem } from '../../core/record-presenter';
-import { additiveUsage, countOutcomes, rfInTopPair, solventPairs, stainUsage, strengthOnSilica, type ClassRecordRow } from './stats';
+import {
+  additiveUsage,
+  countOutcomes,
+  rfInTopPair,
+  solventPairs,
+  stainUsage,
+  strengthOnSilica,
+  type ClassRecordRow,
+} from './stats';
 import { loadListRecords } from '../../core/record-queries';
 
 /** Records listed on a class page (newest first); the page links to the search for all of them. */
@@ -35,9 +43,17 @@ export async function classIndex(): Promise<ClassIndex> {
     items: compoundClasses.map((entry) => {
       const row = byClass.get(entry.key);
       return {
-        key: entry.key, name: entry.name, description: entry.description, group: entry.group,
-        compoundCount: Number(row?.compounds ?? 0), recordCount: Number(row?.records ?? 0),
-        outcomes: { clean: Number(row?.clean ?? 0), partial: Number(row?.partial ?? 0), failed: Number(row?.failed ?? 0) },
+        key: entry.key,
+        name: entry.name,
+        description: entry.description,
+        group: entry.group,
+        compoundCount: Number(row?.compounds ?? 0),
+        recordCount: Number(row?.records ?? 0),
+        outcomes: {
+          clean: Number(row?.clean ?? 0),
+          partial: Number(row?.partial ?? 0),
+          failed: Number(row?.failed ?? 0),
+        },
       };
     }),
   };
@@ -45,7 +61,8 @@ export async function classIndex(): Promise<ClassIndex> {
 
 async function classRecords(key: string): Promise<(ClassRecordRow & { compoundId: number; createdAt: Date })[]> {
   return sequelize.query(
-    `SELECT r.id, r.compound_id AS "compoundId", r.outcome, r.stationary_phase AS "stationaryPhase", r.eluent, r.strong_percent AS "strongPercent",
+    `SELECT r.id, r.compound_id AS "compoundId", r.outcome, r.stationary_phase AS "stationaryPhase", r.eluent,
+      r.strong_percent AS "strongPercent",
             r.target_rf AS "targetRf", r.created_at AS "createdAt", r.demo,
             coalesce((SELECT array_agg(v.method ORDER BY v.position) FROM record_visualisations v WHERE v.record_id = r.id), '{}') AS stains
      FROM condition_records r JOIN compounds c ON c.id = r.compound_id
@@ -62,7 +79,11 @@ export async function classDetail(key: string): Promise<ClassDetail> {
   const rows = await classRecords(key);
   const { records, photoCounts } = await loadListRecords(rows.slice(0, LISTED).map((row) => row.id));
   return {
-    key: entry.key, name: entry.name, description: entry.description, group: entry.group, fragments: [...entry.include],
+    key: entry.key,
+    name: entry.name,
+    description: entry.description,
+    group: entry.group,
+    fragments: [...entry.include],
     compoundCount: new Set(rows.map((row) => row.compoundId)).size,
     recordCount: rows.length,
     outcomes: countOutcomes(rows),

@@ -26,7 +26,11 @@ export const countOutcomes = (rows: { outcome: keyof OutcomeCounts }[]): Outcome
 };
 
 const worked = (row: ClassRecordRow) => row.outcome !== 'failed';
-const pairKey = (row: ClassRecordRow) => row.eluent.components.map((part) => part.solvent).sort().join('+');
+const pairKey = (row: ClassRecordRow) =>
+  row.eluent.components
+    .map((part) => part.solvent)
+    .sort()
+    .join('+');
 
 /** Solvent combinations used, most used first, with outcomes and the span of % strong solvent. */
 export function solventPairs(rows: ClassRecordRow[]): ClassDetail['solventPairs'] {
@@ -55,11 +59,20 @@ export function strengthOnSilica(rows: ClassRecordRow[]): ClassDetail['strength'
   const points: ClassDetail['strength']['points'] = [];
   let skipped = 0;
   for (const row of rows) {
-    const strength = stationaryPhaseByKey(row.stationaryPhase)?.adsorbent === 'silica' ? mixtureStrength(row.eluent.components, 'silica') : null;
-    if (strength?.ok) points.push({ recordId: row.id, epsilon: strength.epsilon, outcome: row.outcome, demo: row.demo });
+    const strength =
+      stationaryPhaseByKey(row.stationaryPhase)?.adsorbent === 'silica'
+        ? mixtureStrength(row.eluent.components, 'silica')
+        : null;
+    if (strength?.ok)
+      points.push({ recordId: row.id, epsilon: strength.epsilon, outcome: row.outcome, demo: row.demo });
     else skipped += 1;
   }
-  return { adsorbent: 'silica', points, skipped, source: `${strengthEquation}; adsorbent activity α = ${defaultActivity.silica.value} (${defaultActivity.silica.source})` };
+  return {
+    adsorbent: 'silica',
+    points,
+    skipped,
+    source: `${strengthEquation}; adsorbent activity α = ${defaultActivity.silica.value} (${defaultActivity.silica.source})`,
+  };
 }
 
 /** Target Rf against % strong solvent for the most used pair of two solvents (isocratic records only). */
@@ -68,12 +81,25 @@ export function rfInTopPair(rows: ClassRecordRow[]): ClassDetail['rf'] {
   if (!top) return null;
   const key = top.solvents.join('+');
   const points = rows
-    .filter((row) => pairKey(row) === key && row.eluent.mode === 'isocratic' && row.targetRf !== null && row.strongPercent !== null)
-    .map((row) => ({ recordId: row.id, strongPercent: row.strongPercent as number, rf: row.targetRf as number, outcome: row.outcome, demo: row.demo }));
+    .filter(
+      (row) =>
+        pairKey(row) === key && row.eluent.mode === 'isocratic' && row.targetRf !== null && row.strongPercent !== null,
+    )
+    .map((row) => ({
+      recordId: row.id,
+      strongPercent: row.strongPercent as number,
+      rf: row.targetRf as number,
+      outcome: row.outcome,
+      demo: row.demo,
+    }));
   return points.length ? { pair: top.labels, points } : null;
 }
 
-function usage(rows: ClassRecordRow[], keysOf: (row: ClassRecordRow) => string[], labelOf: (key: string) => string): Usage[] {
+function usage(
+  rows: ClassRecordRow[],
+  keysOf: (row: ClassRecordRow) => string[],
+  labelOf: (key: string) => string,
+): Usage[] {
   const counts = new Map<string, { records: number; worked: number }>();
   for (const row of rows) {
     for (const key of new Set(keysOf(row))) {
@@ -89,8 +115,17 @@ function usage(rows: ClassRecordRow[], keysOf: (row: ClassRecordRow) => string[]
 }
 
 /** Visualisations used, with how many of their records went clean or partial. */
-export const stainUsage = (rows: ClassRecordRow[]) => usage(rows, (row) => row.stains, (key) => stainByKey(key)?.label ?? key);
+export const stainUsage = (rows: ClassRecordRow[]) =>
+  usage(
+    rows,
+    (row) => row.stains,
+    (key) => stainByKey(key)?.label ?? key,
+  );
 
 /** Eluent additives used, with how many of their records went clean or partial. */
 export const additiveUsage = (rows: ClassRecordRow[]) =>
-  usage(rows, (row) => row.eluent.additives.map((item) => item.additive), (key) => additiveByKey(key)?.label ?? key);
+  usage(
+    rows,
+    (row) => row.eluent.additives.map((item) => item.additive),
+    (key) => additiveByKey(key)?.label ?? key,
+  );

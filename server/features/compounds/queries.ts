@@ -27,8 +27,15 @@ interface CompoundRow {
 }
 
 const present = (row: CompoundRow): CompoundListItem => ({
-  id: row.id, name: row.name, synonyms: row.synonyms, canonicalSmiles: row.canonical_smiles, formula: row.formula, mw: row.mw,
-  classes: row.classes, recordCount: Number(row.record_count), createdAt: new Date(row.created_at).toISOString(),
+  id: row.id,
+  name: row.name,
+  synonyms: row.synonyms,
+  canonicalSmiles: row.canonical_smiles,
+  formula: row.formula,
+  mw: row.mw,
+  classes: row.classes,
+  recordCount: Number(row.record_count),
+  createdAt: new Date(row.created_at).toISOString(),
 });
 
 /** One page of compounds with how many active records each has; filters by text (name, synonym, SMILES, formula) and class. */
@@ -36,7 +43,9 @@ export async function listCompounds(query: Query) {
   const conditions: string[] = [];
   const replacements: Record<string, unknown> = {};
   if (query.q) {
-    conditions.push("(c.name ILIKE :q OR array_to_string(c.synonyms, ' ') ILIKE :q OR c.canonical_smiles = :exact OR upper(c.formula) = upper(:exact))");
+    conditions.push(
+      "(c.name ILIKE :q OR array_to_string(c.synonyms, ' ') ILIKE :q OR c.canonical_smiles = :exact OR upper(c.formula) = upper(:exact))",
+    );
     replacements.q = `%${query.q.replace(/[\\%_]/g, (char) => `\\${char}`)}%`;
     replacements.exact = query.q;
   }
@@ -46,12 +55,18 @@ export async function listCompounds(query: Query) {
   }
   const where = conditions.length > 0 ? conditions.join(' AND ') : 'TRUE';
   const counts = "(SELECT count(*) FROM condition_records r WHERE r.compound_id = c.id AND r.status = 'active')";
-  const [{ total }] = await sequelize.query<{ total: string }>(`SELECT count(*) AS total FROM compounds c WHERE ${where}`, { replacements, type: QueryTypes.SELECT });
+  const [{ total }] = await sequelize.query<{ total: string }>(
+    `SELECT count(*) AS total FROM compounds c WHERE ${where}`,
+    { replacements, type: QueryTypes.SELECT },
+  );
   const rows = await sequelize.query<CompoundRow>(
     `SELECT c.id, c.name, c.synonyms, c.canonical_smiles, c.formula, c.mw, c.classes, c.created_at, ${counts} AS record_count
      FROM compounds c WHERE ${where}
      ORDER BY ${sortSql[query.sort]} ${query.order === 'asc' ? 'ASC' : 'DESC'} NULLS LAST, c.id ASC LIMIT :limit OFFSET :offset`,
-    { replacements: { ...replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize }, type: QueryTypes.SELECT },
+    {
+      replacements: { ...replacements, limit: query.pageSize, offset: (query.page - 1) * query.pageSize },
+      type: QueryTypes.SELECT,
+    },
   );
   return { items: rows.map(present), total: Number(total), page: query.page, pageSize: query.pageSize };
 }

@@ -7,15 +7,37 @@ import { Compound } from '../../db/models';
 
 export const structuresRouter = Router();
 
-/** Parses SMILES or molfile and answers identity, descriptors, classes and a depiction; bad input → 400/413/422 from the chemistry engine. */
-structuresRouter.post('/parse', allow('viewer'), handle({ body: structureParseInputSchema }, async ({ body }, _req, res) => {
-  const analysis = analyseStructure(body.structure);
-  const existing = await Compound.findOne({ where: { idcode: analysis.idcode }, attributes: ['id'] });
-  const result: StructureParseResult = {
-    canonicalSmiles: analysis.canonicalSmiles, molfile: analysis.molfile, formula: analysis.formula, mw: analysis.mw, exactMass: analysis.exactMass,
-    clogp: analysis.clogp, tpsa: analysis.tpsa, hbd: analysis.hbd, hba: analysis.hba, rotatableBonds: analysis.rotatableBonds,
-    aromaticRings: analysis.aromaticRings, stereocentres: analysis.stereocentres, charge: analysis.charge, classes: analysis.classes,
-    svg: analysis.svg, name: analysis.name, isSalt: analysis.isSalt, isMixture: analysis.isMixture, existingCompoundId: existing?.id ?? null,
-  };
-  res.json(result);
-}));
+/**
+ * Parses SMILES or molfile and answers identity, descriptors, classes and a depiction; bad input → 400/413/422 from
+ * the chemistry engine.
+ */
+structuresRouter.post(
+  '/parse',
+  allow('viewer'),
+  handle({ body: structureParseInputSchema }, async ({ body }, _req, res) => {
+    const analysis = analyseStructure(body.structure);
+    const existing = await Compound.findOne({ where: { idcode: analysis.idcode }, attributes: ['id'] });
+    const result: StructureParseResult = {
+      canonicalSmiles: analysis.canonicalSmiles,
+      molfile: analysis.molfile,
+      formula: analysis.formula,
+      mw: analysis.mw,
+      exactMass: analysis.exactMass,
+      clogp: analysis.clogp,
+      tpsa: analysis.tpsa,
+      hbd: analysis.hbd,
+      hba: analysis.hba,
+      rotatableBonds: analysis.rotatableBonds,
+      aromaticRings: analysis.aromaticRings,
+      stereocentres: analysis.stereocentres,
+      charge: analysis.charge,
+      classes: analysis.classes,
+      svg: analysis.svg,
+      name: analysis.name,
+      isSalt: analysis.isSalt,
+      isMixture: analysis.isMixture,
+      existingCompoundId: existing?.id ?? null,
+    };
+    res.json(result);
+  }),
+);

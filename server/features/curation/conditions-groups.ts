@@ -1,4 +1,8 @@
-import { compareConditions, duplicateTolerances, type ConditionComparison } from '../../../shared/domain/duplicate-conditions';
+import {
+  compareConditions,
+  duplicateTolerances,
+  type ConditionComparison,
+} from '../../../shared/domain/duplicate-conditions';
 import { formatNumber } from '../../../shared/domain/format-number';
 import { solventByKey } from '../../../shared/catalogue/solvents';
 import { techniqueLabels } from '../../../shared/schemas/record-parts';
@@ -27,8 +31,17 @@ export function pairOf(a: CurationRow, b: CurationRow, comparison: ConditionComp
 
 /** Records that could only match each other: one compound, phase, eluent mode and set of solvents. */
 function bucketKey(row: CurationRow, byCompound: boolean): string {
-  const solvents = row.eluent.components.map((part) => part.solvent).sort().join('+');
-  return [byCompound ? row.compoundId : '', row.stationaryPhase, (row.stationaryPhaseOther ?? '').toLowerCase(), row.eluent.mode, solvents].join('|');
+  const solvents = row.eluent.components
+    .map((part) => part.solvent)
+    .sort()
+    .join('+');
+  return [
+    byCompound ? row.compoundId : '',
+    row.stationaryPhase,
+    (row.stationaryPhaseOther ?? '').toLowerCase(),
+    row.eluent.mode,
+    solvents,
+  ].join('|');
 }
 
 /** Every matching pair among rows, comparing only rows in one bucket (same compound unless `acrossCompounds`). */
@@ -55,15 +68,24 @@ function reasonsFor(rows: CurationRow[], pairs: DuplicatePair[]): string[] {
   const first = rows[0];
   const maxRf = Math.max(...pairs.map((pair) => pair.rfDifference));
   const worst = pairs.flatMap((pair) => pair.fractions).reduce((a, b) => (b.relative > a.relative ? b : a));
-  const basis = pairs[0].ratioBasis === 'strong-solvent' ? `strong solvent ${label(worst.solvent)}` : `${label(worst.solvent)}`;
+  const basis =
+    pairs[0].ratioBasis === 'strong-solvent' ? `strong solvent ${label(worst.solvent)}` : `${label(worst.solvent)}`;
   const reasons = [
-    `Same compound (${first.compoundName ?? first.canonicalSmiles}) and stationary phase (${phaseLabel(first.stationaryPhase, first.stationaryPhaseOther)}), same ${first.eluent.mode} eluent of ${first.eluent.components.map((part) => label(part.solvent)).join(', ')}.`,
-    `Ratios within ${duplicateTolerances.ratioRelative * 100} % relative: ${basis} ${percent(worst.a)} vs ${percent(worst.b)} v/v (${formatNumber(worst.relative * 100, 1)} % relative at most).`,
-    `Target Rf within ${duplicateTolerances.rf}: largest ΔRf ${formatNumber(maxRf, 3)} (${rows.map((row) => `#${row.id} ${formatNumber(row.targetRf ?? 0, 3)}`).join(', ')}).`,
+    `Same compound (${first.compoundName ?? first.canonicalSmiles}) and stationary phase ` +
+      `(${phaseLabel(first.stationaryPhase, first.stationaryPhaseOther)}), same ${first.eluent.mode} eluent ` +
+      `of ${first.eluent.components.map((part) => label(part.solvent)).join(', ')}.`,
+    `Ratios within ${duplicateTolerances.ratioRelative * 100} % relative: ${basis} ${percent(worst.a)} ` +
+      `vs ${percent(worst.b)} v/v (${formatNumber(worst.relative * 100, 1)} % relative at most).`,
+    `Target Rf within ${duplicateTolerances.rf}: largest ΔRf ${formatNumber(maxRf, 3)} ` +
+      `(${rows.map((row) => `#${row.id} ${formatNumber(row.targetRf ?? 0, 3)}`).join(', ')}).`,
   ];
   if (pairs.every((pair) => pair.sameNotebookRef)) reasons.push(`Same notebook reference (${first.notebookRef}).`);
-  if (pairs.some((pair) => !pair.sameAdditives)) reasons.push('Additives differ between some of the records (score lowered).');
-  if (pairs.some((pair) => !pair.sameTechnique)) reasons.push(`Techniques differ (${[...new Set(rows.map((row) => techniqueLabels[row.technique]))].join(', ')}; score lowered).`);
+  if (pairs.some((pair) => !pair.sameAdditives))
+    reasons.push('Additives differ between some of the records (score lowered).');
+  if (pairs.some((pair) => !pair.sameTechnique))
+    reasons.push(
+      `Techniques differ (${[...new Set(rows.map((row) => techniqueLabels[row.technique]))].join(', ')}; score lowered).`,
+    );
   return reasons;
 }
 
@@ -97,7 +119,9 @@ export function sameConditionGroups(rows: readonly CurationRow[]): DuplicateGrou
   return [...connectedSets(pairs).values()].map((members) => {
     members.sort((a, b) => a.id - b.id);
     const ids = new Set(members.map((row) => row.id));
-    const groupPairs = pairs.filter((pair) => ids.has(pair.a.id)).map(({ a, b, comparison }) => pairOf(a, b, comparison));
+    const groupPairs = pairs
+      .filter((pair) => ids.has(pair.a.id))
+      .map(({ a, b, comparison }) => pairOf(a, b, comparison));
     return {
       kind: 'same-conditions' as const,
       signature: groupSignature(members),

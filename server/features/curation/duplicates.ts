@@ -16,9 +16,10 @@ export async function findDuplicateGroups(): Promise<DuplicatesResponse> {
   const rows = await activeCurationRows();
   const groups = [...sameConditionGroups(rows), ...sameStructureGroups(rows)];
   const signatures = groups.map((group) => group.signature);
-  const dismissed = signatures.length === 0
-    ? []
-    : await DuplicateDismissal.findAll({ where: { signature: { [Op.in]: signatures } }, attributes: ['signature'] });
+  const dismissed =
+    signatures.length === 0
+      ? []
+      : await DuplicateDismissal.findAll({ where: { signature: { [Op.in]: signatures } }, attributes: ['signature'] });
   const hidden = new Set(dismissed.map((row) => row.signature));
   const open = groups
     .filter((group) => !hidden.has(group.signature))
@@ -40,9 +41,18 @@ export async function dismissGroup(input: { recordIds: number[]; reason: string 
   const signature = groupSignature(rows);
   const recordIds = [...input.recordIds].sort((a, b) => a - b);
   return sequelize.transaction(async (transaction) => {
-    const dismissal = await DuplicateDismissal.create({ recordIds, signature, reason: input.reason, actorId }, { transaction });
+    const dismissal = await DuplicateDismissal.create(
+      { recordIds, signature, reason: input.reason, actorId },
+      { transaction },
+    );
     await AuditEntry.create(
-      { actorId, action: 'duplicates.dismiss', subjectType: 'duplicate-group', subjectId: recordIds.join(','), details: { signature, reason: input.reason } },
+      {
+        actorId,
+        action: 'duplicates.dismiss',
+        subjectType: 'duplicate-group',
+        subjectId: recordIds.join(','),
+        details: { signature, reason: input.reason },
+      },
       { transaction },
     );
     return { id: dismissal.id, recordIds, signature, reason: input.reason };

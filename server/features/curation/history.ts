@@ -8,9 +8,16 @@ export async function mergeHistory(options: { recordId?: number; limit: number }
   const where = options.recordId
     ? { [Op.or]: [{ survivorId: options.recordId }, { mergedIds: { [Op.contains]: [options.recordId] } }] }
     : {};
-  const merges = await RecordMerge.findAll({ where, order: [['id', 'DESC']], limit: options.limit, attributes: { exclude: ['before'] } });
+  const merges = await RecordMerge.findAll({
+    where,
+    order: [['id', 'DESC']],
+    limit: options.limit,
+    attributes: { exclude: ['before'] },
+  });
   const userIds = [...new Set(merges.flatMap((merge) => [merge.actorId, merge.undoneBy ?? merge.actorId]))];
-  const names = new Map((await User.findAll({ where: { id: userIds }, attributes: ['id', 'name'] })).map((user) => [user.id, user.name]));
+  const names = new Map(
+    (await User.findAll({ where: { id: userIds }, attributes: ['id', 'name'] })).map((user) => [user.id, user.name]),
+  );
   const person = (id: number) => ({ id, name: names.get(id) ?? 'unknown' });
   const items: MergeHistoryItem[] = [];
   for (const merge of merges) {

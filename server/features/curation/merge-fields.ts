@@ -25,7 +25,11 @@ export const fieldColumns: Record<MergeableField, readonly string[]> = {
 };
 
 /** Copies each chosen field's columns from the record it is taken from onto the survivor. */
-export async function applyFieldChoices(survivorId: number, fields: Partial<Record<MergeableField, number>>, transaction: Transaction) {
+export async function applyFieldChoices(
+  survivorId: number,
+  fields: Partial<Record<MergeableField, number>>,
+  transaction: Transaction,
+) {
   for (const [field, sourceId] of Object.entries(fields) as [MergeableField, number][]) {
     if (sourceId === survivorId) continue;
     const assignments = fieldColumns[field].map((column) => `${column} = src.${column}`).join(', ');

@@ -51,7 +51,11 @@ export async function moveChildRows(survivorId: number, mergedIds: readonly numb
  * Credits on the survivor everyone credited on a merged record (its author, editors and earlier
  * merged-from credits) as 'merged-from' via that record. Returns the ids of the rows it added.
  */
-export async function creditContributors(survivorId: number, mergedIds: readonly number[], transaction: Transaction): Promise<number[]> {
+export async function creditContributors(
+  survivorId: number,
+  mergedIds: readonly number[],
+  transaction: Transaction,
+): Promise<number[]> {
   const rows = await sequelize.query<{ id: number }>(
     `INSERT INTO record_contributors (record_id, user_id, role, via_record_id, created_at)
      SELECT DISTINCT :survivorId, credited.user_id, 'merged-from', credited.record_id, now() FROM (
@@ -83,7 +87,11 @@ const joinNote = (kept: string | null, fromRecord: number, moved: string | null)
  * before-snapshot, so an unmerge puts it back). Returns deleted ids, where each went, and the notes written.
  */
 export async function uniteBookmarks(survivorId: number, mergedIds: readonly number[], transaction: Transaction) {
-  const effects = { deletedBookmarkIds: [] as number[], bookmarkUnitedInto: {} as Record<string, number>, bookmarkNotesAfter: {} as Record<string, string | null> };
+  const effects = {
+    deletedBookmarkIds: [] as number[],
+    bookmarkUnitedInto: {} as Record<string, number>,
+    bookmarkNotesAfter: {} as Record<string, string | null>,
+  };
   if (!(await hasBookmarks(transaction))) return effects;
   const moving = await sequelize.query<BookmarkRow>(
     `SELECT id, user_id AS "userId", record_id AS "recordId", note FROM bookmarks WHERE record_id IN (:mergedIds)
@@ -96,12 +104,18 @@ export async function uniteBookmarks(survivorId: number, mergedIds: readonly num
       { replacements: { survivorId, userId: bookmark.userId }, type: QueryTypes.SELECT, transaction },
     );
     if (!kept) {
-      await sequelize.query('UPDATE bookmarks SET record_id = :survivorId WHERE id = :id', { replacements: { survivorId, id: bookmark.id }, transaction });
+      await sequelize.query('UPDATE bookmarks SET record_id = :survivorId WHERE id = :id', {
+        replacements: { survivorId, id: bookmark.id },
+        transaction,
+      });
       continue;
     }
     const note = joinNote(kept.note, bookmark.recordId, bookmark.note);
     if (note !== kept.note) {
-      await sequelize.query('UPDATE bookmarks SET note = :note WHERE id = :id', { replacements: { note, id: kept.id }, transaction });
+      await sequelize.query('UPDATE bookmarks SET note = :note WHERE id = :id', {
+        replacements: { note, id: kept.id },
+        transaction,
+      });
       effects.bookmarkNotesAfter[String(kept.id)] = note;
     }
     await sequelize.query('DELETE FROM bookmarks WHERE id = :id', { replacements: { id: bookmark.id }, transaction });

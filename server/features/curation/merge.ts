@@ -27,7 +27,8 @@ function requireOneSubstance(records: LockedRecord[]) {
   if (new Set(records.map((record) => record.compoundId)).size === 1) return;
   if (new Set(records.map((record) => readStereo(record.idcode).skeleton)).size === 1) return;
   throw new ConflictError(
-    `Records of different compounds cannot be merged (${records.map((record) => `record ${record.id}: compound ${record.compoundId}`).join(', ')}).`,
+    `Records of different compounds cannot be merged ` +
+      `(${records.map((record) => `record ${record.id}: compound ${record.compoundId}`).join(', ')}).`,
     { compounds: records.map((record) => ({ recordId: record.id, compoundId: record.compoundId })) },
   );
 }
@@ -59,16 +60,25 @@ export async function mergeRecords(request: MergeRequest, actorId: number): Prom
     const insertedContributorIds = await creditContributors(survivorId, mergedIds, transaction);
     const bookmarks = await uniteBookmarks(survivorId, mergedIds, transaction);
     await refreshDerivedColumns(survivorId, transaction);
-    await sequelize.query("UPDATE condition_records SET status = 'merged', merged_into_id = :survivorId WHERE id IN (:mergedIds)", {
-      replacements: { survivorId, mergedIds },
-      transaction,
-    });
+    await sequelize.query(
+      "UPDATE condition_records SET status = 'merged', merged_into_id = :survivorId WHERE id IN (:mergedIds)",
+      {
+        replacements: { survivorId, mergedIds },
+        transaction,
+      },
+    );
 
     const revisionIds = [];
-    const survivorChanges = [...diffStates(survivorBefore, await loadRecordState(survivorId, transaction)), { field: 'mergedRecords', from: null, to: mergedIds }];
+    const survivorChanges = [
+      ...diffStates(survivorBefore, await loadRecordState(survivorId, transaction)),
+      { field: 'mergedRecords', from: null, to: mergedIds },
+    ];
     revisionIds.push(await appendCurationRevision(survivorId, actorId, 'merge', survivorChanges, transaction));
     for (const id of mergedIds) {
-      const changes = [{ field: 'status', from: 'active', to: 'merged' }, { field: 'mergedIntoId', from: null, to: survivorId }];
+      const changes = [
+        { field: 'status', from: 'active', to: 'merged' },
+        { field: 'mergedIntoId', from: null, to: survivorId },
+      ];
       revisionIds.push(await appendCurationRevision(id, actorId, 'merge', changes, transaction));
     }
     const effects: MergeEffects = { insertedContributorIds, ...bookmarks, revisionIds: revisionIds.map(Number) };
@@ -79,7 +89,13 @@ export async function mergeRecords(request: MergeRequest, actorId: number): Prom
         action: 'record.merge',
         subjectType: 'merge',
         subjectId: String(merge.id),
-        details: { survivorId, mergedIds, fields, changedFields: survivorChanges.map((change) => change.field), deletedBookmarkIds: bookmarks.deletedBookmarkIds },
+        details: {
+          survivorId,
+          mergedIds,
+          fields,
+          changedFields: survivorChanges.map((change) => change.field),
+          deletedBookmarkIds: bookmarks.deletedBookmarkIds,
+        },
       },
       { transaction },
     );

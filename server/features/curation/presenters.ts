@@ -10,7 +10,12 @@ export function presentCurationRecord(row: CurationRow): CurationRecord {
     id: row.id,
     status: row.status,
     mergedIntoId: row.mergedIntoId,
-    compound: { id: row.compoundId, name: row.compoundName, synonyms: row.synonyms ?? [], canonicalSmiles: row.canonicalSmiles },
+    compound: {
+      id: row.compoundId,
+      name: row.compoundName,
+      synonyms: row.synonyms ?? [],
+      canonicalSmiles: row.canonicalSmiles,
+    },
     author: { id: row.authorId, name: row.authorName },
     technique: row.technique,
     stationaryPhase: row.stationaryPhase,

@@ -11,10 +11,18 @@ import { restore, retire } from './retire';
  */
 export const recordCurationRouter = Router();
 
-recordCurationRouter.post('/:id/retire', allow('member'), handle({ params: idParamSchema, body: retireInputSchema }, async ({ params, body }, req, res) => {
-  res.json(await retire(params.id, body.reason, currentUser(req)));
-}));
+recordCurationRouter.post(
+  '/:id/retire',
+  allow('member'),
+  handle({ params: idParamSchema, body: retireInputSchema }, async ({ params, body }, req, res) => {
+    res.json(await retire(params.id, body.reason, currentUser(req)));
+  }),
+);
 
-recordCurationRouter.post('/:id/restore', allow('member'), handle({ params: idParamSchema }, async ({ params }, req, res) => {
-  res.json(await restore(params.id, currentUser(req)));
-}));
+recordCurationRouter.post(
+  '/:id/restore',
+  allow('member'),
+  handle({ params: idParamSchema }, async ({ params }, req, res) => {
+    res.json(await restore(params.id, currentUser(req)));
+  }),
+);

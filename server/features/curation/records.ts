@@ -67,5 +67,8 @@ export function recordSignature(row: Pick<CurationRow, 'id' | 'revision' | 'upda
 
 /** Signature of a group: its records' signatures in id order. */
 export function groupSignature(rows: readonly Pick<CurationRow, 'id' | 'revision' | 'updatedAt'>[]): string {
-  return [...rows].sort((a, b) => a.id - b.id).map(recordSignature).join(',');
+  return [...rows]
+    .sort((a, b) => a.id - b.id)
+    .map(recordSignature)
+    .join(',');
 }

@@ -23,7 +23,14 @@ export async function appendCurationRevision(
   );
   const snapshot = await loadRecordState(recordId, transaction);
   const revision = await RecordRevision.create(
-    { recordId, number: row.revision, authorId: actorId, action, changes, snapshot: snapshot as unknown as Record<string, unknown> },
+    {
+      recordId,
+      number: row.revision,
+      authorId: actorId,
+      action,
+      changes,
+      snapshot: snapshot as unknown as Record<string, unknown>,
+    },
     { transaction },
   );
   return revision.id;
@@ -40,7 +47,10 @@ export interface LockedRecord {
 }
 
 /** Locks records FOR UPDATE in id order (so two curators never deadlock); 404 naming any id that does not exist. */
-export async function lockRecords(ids: readonly number[], transaction: Transaction): Promise<Map<number, LockedRecord>> {
+export async function lockRecords(
+  ids: readonly number[],
+  transaction: Transaction,
+): Promise<Map<number, LockedRecord>> {
   const rows = await sequelize.query<LockedRecord>(
     `SELECT r.id, r.status, r.compound_id AS "compoundId", r.author_id AS "authorId", r.merged_into_id AS "mergedIntoId",
             r.retired_by AS "retiredBy", c.idcode
@@ -50,7 +60,8 @@ export async function lockRecords(ids: readonly number[], transaction: Transacti
   );
   const byId = new Map(rows.map((row) => [row.id, row]));
   const missing = ids.filter((id) => !byId.has(id));
-  if (missing.length > 0) throw new NotFoundError(missing.length === 1 ? `Record ${missing[0]}` : `Records ${missing.join(', ')}`);
+  if (missing.length > 0)
+    throw new NotFoundError(missing.length === 1 ? `Record ${missing[0]}` : `Records ${missing.join(', ')}`);
   return byId;
 }
 
@@ -59,7 +70,9 @@ export function requireActive(records: Iterable<LockedRecord>, what: string) {
   const inactive = [...records].filter((record) => record.status !== 'active');
   if (inactive.length === 0) return;
   const describe = (record: LockedRecord) =>
-    record.status === 'merged' ? `record ${record.id} was merged into record ${record.mergedIntoId}` : `record ${record.id} is retired`;
+    record.status === 'merged'
+      ? `record ${record.id} was merged into record ${record.mergedIntoId}`
+      : `record ${record.id} is retired`;
   throw new ConflictError(`Only active records can be ${what}: ${inactive.map(describe).join('; ')}.`, {
     records: inactive.map((record) => ({ id: record.id, status: record.status, mergedIntoId: record.mergedIntoId })),
   });

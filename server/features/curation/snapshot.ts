@@ -44,7 +44,10 @@ const childJson = (table: ChildTable) =>
  * rows of its spots, visualisations, photos and contributors. Equal digests mean nothing a merge could
  * restore has changed.
  */
-export async function recordDigests(ids: readonly number[], transaction?: Transaction): Promise<Record<string, string>> {
+export async function recordDigests(
+  ids: readonly number[],
+  transaction?: Transaction,
+): Promise<Record<string, string>> {
   const rows = await sequelize.query<{ id: number; digest: string }>(
     `SELECT r.id, md5(concat_ws('|', (to_jsonb(r) - 'revision' - 'updated_at')::text, ${childTables.map(childJson).join(', ')})) AS digest
      FROM condition_records r WHERE r.id IN (:ids)`,
@@ -56,10 +59,19 @@ export async function recordDigests(ids: readonly number[], transaction?: Transa
 const quote = (column: string) => `"${column.replace(/"/g, '""')}"`;
 
 /** Puts every column of a dumped row back (except `keep`), matching on id. */
-export async function restoreRow(table: SnapshotTable, row: Record<string, unknown>, transaction: Transaction, keep: readonly string[] = []) {
-  const columns = Object.keys(row).filter((column) => column !== 'id' && !keep.includes(column)).map(quote).join(', ');
+export async function restoreRow(
+  table: SnapshotTable,
+  row: Record<string, unknown>,
+  transaction: Transaction,
+  keep: readonly string[] = [],
+) {
+  const columns = Object.keys(row)
+    .filter((column) => column !== 'id' && !keep.includes(column))
+    .map(quote)
+    .join(', ');
   const [, affected] = await sequelize.query(
-    `UPDATE ${table} AS t SET (${columns}) = (SELECT ${columns} FROM jsonb_populate_record(NULL::${table}, CAST(:row AS jsonb))) WHERE t.id = :id`,
+    `UPDATE ${table} AS t SET (${columns}) = (SELECT ${columns} FROM jsonb_populate_record(NULL::${table}, ` +
+      `CAST(:row AS jsonb))) WHERE t.id = :id`,
     { replacements: { row: JSON.stringify(row), id: row.id }, type: QueryTypes.UPDATE, transaction },
   );
   return affected;
@@ -69,7 +81,8 @@ export async function restoreRow(table: SnapshotTable, row: Record<string, unkno
 export async function reinsertRow(table: SnapshotTable, row: Record<string, unknown>, transaction: Transaction) {
   const columns = Object.keys(row).map(quote).join(', ');
   await sequelize.query(
-    `INSERT INTO ${table} (${columns}) SELECT ${columns} FROM jsonb_populate_record(NULL::${table}, CAST(:row AS jsonb)) ON CONFLICT DO NOTHING`,
+    `INSERT INTO ${table} (${columns}) SELECT ${columns} FROM jsonb_populate_record(NULL::${table}, ` +
+      `CAST(:row AS jsonb)) ON CONFLICT DO NOTHING`,
     { replacements: { row: JSON.stringify(row) }, transaction },
   );
 }

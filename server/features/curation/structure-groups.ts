@@ -29,14 +29,25 @@ export function sameStructureGroups(rows: readonly CurationRow[]): DuplicateGrou
     const entries = compoundIds.map((id) => {
       const first = (byCompound.get(id) as CurationRow[])[0];
       const stereo = readStereo(first.idcode);
-      return { row: first, stereo, names: namesOf({ name: first.compoundName, synonyms: first.synonyms ?? [] }), count: (byCompound.get(id) as CurationRow[]).length };
+      return {
+        row: first,
+        stereo,
+        names: namesOf({ name: first.compoundName, synonyms: first.synonyms ?? [] }),
+        count: (byCompound.get(id) as CurationRow[]).length,
+      };
     });
     const shared = [...entries[0].names].filter((name) => entries.slice(1).some((entry) => entry.names.has(name)));
     const definedEntries = entries.filter((entry) => hasDefinedStereo(entry.stereo)).length;
     const pairs = matchingPairs(members, true).map(({ a, b, comparison }) => pairOf(a, b, comparison));
+    const compoundWords = (row: (typeof entries)[number]['row']) =>
+      `compound ${row.compoundId}, ${row.canonicalSmiles}`;
     const reasons = [
-      `One structure entered as ${entries.length} compounds: ${entries.map((entry) => `“${nameOf(entry.row)}” (compound ${entry.row.compoundId}, ${entry.row.canonicalSmiles})`).join(', ')}; without stereo their structures are identical.`,
-      shared.length > 0 ? `They share the name ${shared.map((name) => `“${name}”`).join(', ')}.` : 'Their names and synonyms differ.',
+      `One structure entered as ${entries.length} compounds: ` +
+        `${entries.map((entry) => `“${nameOf(entry.row)}” (${compoundWords(entry.row)})`).join(', ')}; ` +
+        `without stereo their structures are identical.`,
+      shared.length > 0
+        ? `They share the name ${shared.map((name) => `“${name}”`).join(', ')}.`
+        : 'Their names and synonyms differ.',
       definedEntries <= 1
         ? 'At most one entry draws its stereo; the others leave it open — likely the same substance drawn with and without wedges.'
         : `${definedEntries} entries draw defined stereo: they may be different stereoisomers (score lowered).`,

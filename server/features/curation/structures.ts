@@ -49,7 +49,11 @@ export const hasDefinedStereo = (reading: StereoReading) => reading.stereoElemen
 
 /** Lower-cased, space-collapsed names of a compound, for comparing entries. */
 export function namesOf(compound: { name: string | null; synonyms: readonly string[] }): Set<string> {
-  return new Set([compound.name, ...compound.synonyms].flatMap((name) => (name ? [name.trim().replace(/\s+/g, ' ').toLowerCase()] : [])));
+  return new Set(
+    [compound.name, ...compound.synonyms].flatMap((name) =>
+      name ? [name.trim().replace(/\s+/g, ' ').toLowerCase()] : [],
+    ),
+  );
 }
 
 /**
@@ -59,7 +63,11 @@ export function namesOf(compound: { name: string | null; synonyms: readonly stri
  * stereo (different stereoisomers, which differ on chiral phases and, for E/Z isomers, on silica too);
  * + 0.05 when records of different entries also meet the same-conditions rules.
  */
-export function structureScore(options: { sharedName: boolean; definedEntries: number; conditionsMatch: boolean }): number {
+export function structureScore(options: {
+  sharedName: boolean;
+  definedEntries: number;
+  conditionsMatch: boolean;
+}): number {
   let score = 0.5;
   if (options.sharedName) score += 0.3;
   score += options.definedEntries <= 1 ? 0.15 : -0.2;

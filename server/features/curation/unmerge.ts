@@ -21,15 +21,25 @@ export interface UnmergeBlock {
  * edit, a retirement, a photo or spot added or removed) — restoring the snapshot would silently undo that work.
  */
 export async function unmergeBlock(merge: RecordMerge, transaction?: Transaction): Promise<UnmergeBlock | null> {
-  if (merge.undoneAt) return { message: `Merge ${merge.id} was already undone on ${merge.undoneAt.toISOString().slice(0, 10)}; a merge can be undone once.`, details: { undoneAt: merge.undoneAt } };
+  if (merge.undoneAt)
+    return {
+      message: `Merge ${merge.id} was already undone on ${merge.undoneAt.toISOString().slice(0, 10)}; a merge can be undone once.`,
+      details: { undoneAt: merge.undoneAt },
+    };
   const [survivor] = await sequelize.query<{ status: string; mergedIntoId: number | null }>(
     'SELECT status, merged_into_id AS "mergedIntoId" FROM condition_records WHERE id = :id',
     { replacements: { id: merge.survivorId }, type: QueryTypes.SELECT, transaction },
   );
   if (survivor.status === 'merged') {
-    const later = await RecordMerge.findOne({ where: { mergedIds: { [Op.contains]: [merge.survivorId] }, undoneAt: null }, order: [['id', 'DESC']], transaction });
+    const later = await RecordMerge.findOne({
+      where: { mergedIds: { [Op.contains]: [merge.survivorId] }, undoneAt: null },
+      order: [['id', 'DESC']],
+      transaction,
+    });
     return {
-      message: `Record ${merge.survivorId} was merged into record ${survivor.mergedIntoId} since${later ? ` (merge ${later.id})` : ''}; undo that merge first.`,
+      message:
+        `Record ${merge.survivorId} was merged into record ${survivor.mergedIntoId} ` +
+        `since${later ? ` (merge ${later.id})` : ''}; undo that merge first.`,
       details: { laterMergeId: later?.id ?? null, mergedIntoId: survivor.mergedIntoId },
     };
   }
@@ -38,7 +48,9 @@ export async function unmergeBlock(merge: RecordMerge, transaction?: Transaction
   const changed = ids.filter((id) => now[String(id)] !== merge.afterDigests[String(id)]);
   if (changed.length === 0) return null;
   return {
-    message: `Record ${changed.join(', ')} changed after this merge (edited, retired, or a spot or photo changed); unmerging would undo that later work, so it is refused. Revert those changes first.`,
+    message:
+      `Record ${changed.join(', ')} changed after this merge (edited, retired, or a spot or ` +
+      `photo changed); unmerging would undo that later work, so it is refused. Revert those changes first.`,
     details: { changedRecordIds: changed },
   };
 }
@@ -47,15 +59,21 @@ async function restoreBookmarks(merge: RecordMerge, effects: MergeEffects, trans
   const rows = merge.before.bookmarks;
   if (!rows || !(await hasBookmarks(transaction))) return;
   const unitedInto = effects.bookmarkUnitedInto ?? {};
-  const [{ present }] = await sequelize.query<{ present: number[] }>('SELECT coalesce(array_agg(id), \'{}\') AS present FROM bookmarks WHERE id IN (:ids)', {
-    replacements: { ids: [0, ...Object.values(unitedInto)] },
-    type: QueryTypes.SELECT,
-    transaction,
-  });
+  const [{ present }] = await sequelize.query<{ present: number[] }>(
+    "SELECT coalesce(array_agg(id), '{}') AS present FROM bookmarks WHERE id IN (:ids)",
+    {
+      replacements: { ids: [0, ...Object.values(unitedInto)] },
+      type: QueryTypes.SELECT,
+      transaction,
+    },
+  );
   for (const row of rows) {
     const keptId = unitedInto[String(row.id)];
     if (keptId === undefined) {
-      await sequelize.query('UPDATE bookmarks SET record_id = :recordId WHERE id = :id', { replacements: { recordId: row.record_id, id: row.id }, transaction });
+      await sequelize.query('UPDATE bookmarks SET record_id = :recordId WHERE id = :id', {
+        replacements: { recordId: row.record_id, id: row.id },
+        transaction,
+      });
     } else if (present.includes(keptId)) {
       await reinsertRow('bookmarks', row, transaction);
     }
@@ -88,20 +106,37 @@ export async function unmergeRecords(mergeId: number, actorId: number): Promise<
     for (const id of involved) statesBefore.set(id, await loadRecordState(id, transaction));
 
     const effects = merge.effects as MergeEffects;
-    for (const row of merge.before.condition_records) await restoreRow('condition_records', row, transaction, ['revision', 'updated_at']);
+    for (const row of merge.before.condition_records)
+      await restoreRow('condition_records', row, transaction, ['revision', 'updated_at']);
     if (effects.insertedContributorIds?.length) {
-      await sequelize.query('DELETE FROM record_contributors WHERE id IN (:ids)', { replacements: { ids: effects.insertedContributorIds }, transaction });
+      await sequelize.query('DELETE FROM record_contributors WHERE id IN (:ids)', {
+        replacements: { ids: effects.insertedContributorIds },
+        transaction,
+      });
     }
-    for (const table of childTables) for (const row of merge.before[table] ?? []) await restoreRow(table, row, transaction);
+    for (const table of childTables)
+      for (const row of merge.before[table] ?? []) await restoreRow(table, row, transaction);
     await restoreBookmarks(merge, effects, transaction);
 
     for (const id of involved) {
       const changes = diffStates(statesBefore.get(id) as RecordState, await loadRecordState(id, transaction));
-      await appendCurationRevision(id, actorId, 'unmerge', [...changes, { field: 'merge', from: mergeId, to: null }], transaction);
+      await appendCurationRevision(
+        id,
+        actorId,
+        'unmerge',
+        [...changes, { field: 'merge', from: mergeId, to: null }],
+        transaction,
+      );
     }
     await merge.update({ undoneAt: new Date(), undoneBy: actorId }, { transaction });
     await AuditEntry.create(
-      { actorId, action: 'record.unmerge', subjectType: 'merge', subjectId: String(mergeId), details: { survivorId: merge.survivorId, mergedIds: merge.mergedIds } },
+      {
+        actorId,
+        action: 'record.unmerge',
+        subjectType: 'merge',
+        subjectId: String(mergeId),
+        details: { survivorId: merge.survivorId, mergedIds: merge.mergedIds },
+      },
       { transaction },
     );
     return involved;

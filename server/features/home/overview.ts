@@ -23,7 +23,8 @@ export async function overview(): Promise<Overview> {
      first_by_compound AS (SELECT compound_id, min(created_at) AS first FROM active GROUP BY compound_id),
      first_by_author AS (SELECT author_id, min(created_at) AS first FROM active GROUP BY author_id),
      first_by_class AS (
-       SELECT cls, min(a.created_at) AS first FROM active a JOIN compounds c ON c.id = a.compound_id CROSS JOIN LATERAL unnest(c.classes) AS cls GROUP BY cls
+       SELECT cls, min(a.created_at) AS first FROM active a JOIN compounds c ON c.id = a.compound_id CROSS
+         JOIN LATERAL unnest(c.classes) AS cls GROUP BY cls
      )
      SELECT (SELECT start FROM month) AS month_start,
        (SELECT count(*) FROM active) AS records,

@@ -6,6 +6,10 @@ import { overview } from './overview';
 /** The home page's counts of the base, this month and before. */
 export const overviewRouter = Router();
 
-overviewRouter.get('/', allow('viewer'), handle({}, async (_input, _req, res) => {
-  res.json(await overview());
-}));
+overviewRouter.get(
+  '/',
+  allow('viewer'),
+  handle({}, async (_input, _req, res) => {
+    res.json(await overview());
+  }),
+);

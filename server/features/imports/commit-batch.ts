@@ -29,7 +29,11 @@ export interface BatchCounts {
 }
 
 /** Inserts the fresh records grouped by author and date (the sheet's own), then their "recorded by" and raw texts. */
-async function insertFresh(importRow: Import, fresh: { row: AcceptedRow; content: RecordContent }[], transaction: Transaction): Promise<void> {
+async function insertFresh(
+  importRow: Import,
+  fresh: { row: AcceptedRow; content: RecordContent }[],
+  transaction: Transaction,
+): Promise<void> {
   const groups = new Map<string, typeof fresh>();
   for (const item of fresh) {
     const key = `${item.row.facts.authorId ?? importRow.userId}|${item.row.facts.date ?? ''}`;
@@ -38,9 +42,16 @@ async function insertFresh(importRow: Import, fresh: { row: AcceptedRow; content
   const extras: { id: number; recordedBy: string | null; texts: string | null }[] = [];
   for (const [key, items] of groups) {
     const [author, date] = key.split('|');
-    const records = await insertRecords(items.map((item) => item.content), {
-      authorId: Number(author), transaction, importId: importRow.id, action: 'import', ...(date ? { createdAt: new Date(`${date}T12:00:00Z`) } : {}),
-    });
+    const records = await insertRecords(
+      items.map((item) => item.content),
+      {
+        authorId: Number(author),
+        transaction,
+        importId: importRow.id,
+        action: 'import',
+        ...(date ? { createdAt: new Date(`${date}T12:00:00Z`) } : {}),
+      },
+    );
     for (const [index, record] of records.entries()) {
       const { facts } = items[index].row;
       const texts = Object.keys(facts.sourceTexts).length > 0 ? JSON.stringify(facts.sourceTexts) : null;
@@ -51,7 +62,12 @@ async function insertFresh(importRow: Import, fresh: { row: AcceptedRow; content
   await sequelize.query(
     `UPDATE condition_records r SET recorded_by = x.recorded_by, source_texts = CAST(x.texts AS jsonb)
        FROM jsonb_to_recordset(CAST(:rows AS jsonb)) AS x(id int, recorded_by text, texts text) WHERE r.id = x.id`,
-    { replacements: { rows: JSON.stringify(extras.map((item) => ({ id: item.id, recorded_by: item.recordedBy, texts: item.texts }))) }, transaction },
+    {
+      replacements: {
+        rows: JSON.stringify(extras.map((item) => ({ id: item.id, recorded_by: item.recordedBy, texts: item.texts }))),
+      },
+      transaction,
+    },
   );
 }
 
@@ -76,8 +92,14 @@ export async function commitBatch(
       good.map((row) => ({ structure: row.record.structure, name: row.record.name ?? null, analysis: row.analysis })),
       { userId: importRow.userId, transaction, fingerprints },
     );
-    const stored = await storedHashes([...new Set(good.flatMap((row, index) => contentHashes(row, compounds[index].id)))], transaction);
-    const exported = await storedRecordCompounds(good.flatMap((row) => (row.facts.recordId ? [row.facts.recordId] : [])), transaction);
+    const stored = await storedHashes(
+      [...new Set(good.flatMap((row, index) => contentHashes(row, compounds[index].id)))],
+      transaction,
+    );
+    const exported = await storedRecordCompounds(
+      good.flatMap((row) => (row.facts.recordId ? [row.facts.recordId] : [])),
+      transaction,
+    );
     const fresh: { row: AcceptedRow; content: RecordContent }[] = [];
     for (const [index, row] of good.entries()) {
       const hashes = contentHashes(row, compounds[index].id);
@@ -91,8 +113,22 @@ export async function commitBatch(
     const warnedRows = fresh.filter((item) => item.row.warnings.length > 0).map((item) => item.row);
     await ImportRow.bulkCreate(
       [
-        ...rejectedRows.map((row) => ({ importId: importRow.id, rowNumber: row.source.row, line: row.source.line, cells: row.source.values, reason: row.reason, kind: 'rejected' as const })),
-        ...warnedRows.map((row) => ({ importId: importRow.id, rowNumber: row.source.row, line: row.source.line, cells: row.source.values, reason: row.warnings.join(' '), kind: 'warning' as const })),
+        ...rejectedRows.map((row) => ({
+          importId: importRow.id,
+          rowNumber: row.source.row,
+          line: row.source.line,
+          cells: row.source.values,
+          reason: row.reason,
+          kind: 'rejected' as const,
+        })),
+        ...warnedRows.map((row) => ({
+          importId: importRow.id,
+          rowNumber: row.source.row,
+          line: row.source.line,
+          cells: row.source.values,
+          reason: row.warnings.join(' '),
+          kind: 'warning' as const,
+        })),
       ],
       { transaction },
     );
@@ -106,10 +142,19 @@ export async function commitBatch(
     importEvents.emit('writing', { importId: importRow.id, batch: batchNumber });
     await sequelize.query(
       `UPDATE imports SET processed = processed + :processed, accepted = accepted + :accepted, rejected = rejected + :rejected,
-         duplicates = duplicates + :duplicates, warned = warned + :warned, new_compounds = new_compounds + :newCompounds, last_committed_row = :lastRow,
+         duplicates = duplicates + :duplicates, warned = warned + :warned,
+           new_compounds = new_compounds + :newCompounds, last_committed_row = :lastRow,
          batches_committed = batches_committed + 1, heartbeat_at = now(), updated_at = now()
        WHERE id = :id`,
-      { replacements: { id: importRow.id, processed: rows.length, lastRow: rows[rows.length - 1].source.row, ...counts }, transaction },
+      {
+        replacements: {
+          id: importRow.id,
+          processed: rows.length,
+          lastRow: rows[rows.length - 1].source.row,
+          ...counts,
+        },
+        transaction,
+      },
     );
     return counts;
   });

@@ -24,7 +24,12 @@ function countOutsideQuotes(line: string, delimiter: string): number {
  * because the header line holds no comma.
  */
 export function sniffDelimiter(text: string): string {
-  const lines = text.replace(/^\uFEFF/, '').slice(0, 64_000).split(/\r?\n/).filter((line) => line.trim() !== '').slice(0, 30);
+  const lines = text
+    .replace(/^\uFEFF/, '')
+    .slice(0, 64_000)
+    .split(/\r?\n/)
+    .filter((line) => line.trim() !== '')
+    .slice(0, 30);
   const [header, ...rest] = lines;
   let best: { delimiter: string; score: number; cells: number } = { delimiter: ',', score: -1, cells: 0 };
   for (const delimiter of delimiters) {
@@ -54,7 +59,9 @@ async function* records(text: string, delimiter: string): AsyncGenerator<{ cells
   } catch (error) {
     if (error instanceof CsvError) {
       const line = (error as CsvError & { lines?: number }).lines;
-      throw new UnprocessableError(`The CSV could not be read${line ? ` near line ${line}` : ''}: ${error.message}`, { line });
+      throw new UnprocessableError(`The CSV could not be read${line ? ` near line ${line}` : ''}: ${error.message}`, {
+        line,
+      });
     }
     throw error;
   }

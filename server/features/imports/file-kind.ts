@@ -20,12 +20,18 @@ const startsWith = (buffer: Buffer, bytes: number[]) => bytes.every((byte, i) =>
  */
 export function decodeUpload(buffer: Buffer): string {
   for (const { bytes, what } of refusedSignatures) {
-    if (startsWith(buffer, bytes)) throw new UnsupportedMediaTypeError(`The file is ${what}. Upload an .xlsx workbook, CSV (comma, semicolon or tab separated) or SDF.`);
+    if (startsWith(buffer, bytes))
+      throw new UnsupportedMediaTypeError(
+        `The file is ${what}. Upload an .xlsx workbook, CSV (comma, semicolon or tab separated) or SDF.`,
+      );
   }
   if (startsWith(buffer, [0xff, 0xfe])) return new TextDecoder('utf-16le').decode(buffer.subarray(2));
   if (startsWith(buffer, [0xfe, 0xff])) return new TextDecoder('utf-16be').decode(buffer.subarray(2));
   const body = startsWith(buffer, [0xef, 0xbb, 0xbf]) ? buffer.subarray(3) : buffer;
-  if (body.includes(0)) throw new UnsupportedMediaTypeError('The file holds binary data, not text. Upload CSV (comma, semicolon or tab separated) or SDF.');
+  if (body.includes(0))
+    throw new UnsupportedMediaTypeError(
+      'The file holds binary data, not text. Upload CSV (comma, semicolon or tab separated) or SDF.',
+    );
   try {
     return new TextDecoder('utf-8', { fatal: true }).decode(body);
   } catch {
@@ -44,13 +50,23 @@ export function detectKind(text: string, fileName: string): FileKind {
   const extension = fileName.toLowerCase().match(/\.([a-z0-9]+)$/)?.[1] ?? '';
   if (looksLikeSdf(text)) return 'sdf';
   if (['sdf', 'sd', 'mol'].includes(extension)) {
-    throw new UnsupportedMediaTypeError(`"${fileName}" is named as SDF but holds no molfile (no V2000/V3000 counts line).`);
+    throw new UnsupportedMediaTypeError(
+      `"${fileName}" is named as SDF but holds no molfile (no V2000/V3000 counts line).`,
+    );
   }
   if (text.trim() === '') throw new UnsupportedMediaTypeError('The file is empty.');
   // Title and note lines may stand above the header row; one of the first 40 filled lines must be a table row.
-  const lines = text.replace(/^\uFEFF/, '').slice(0, 40_000).split(/\r?\n/).filter((line) => line.trim() !== '').slice(0, 40);
+  const lines = text
+    .replace(/^\uFEFF/, '')
+    .slice(0, 40_000)
+    .split(/\r?\n/)
+    .filter((line) => line.trim() !== '')
+    .slice(0, 40);
   if (!lines.some((line) => /[,;\t]/.test(line))) {
-    throw new UnsupportedMediaTypeError('No line holds a comma, semicolon or tab, so this is not a table with headers. Upload CSV (with a header row), an .xlsx workbook or SDF.');
+    throw new UnsupportedMediaTypeError(
+      'No line holds a comma, semicolon or tab, so this is not a table with headers. Upload CSV (with ' +
+        'a header row), an .xlsx workbook or SDF.',
+    );
   }
   return 'csv';
 }

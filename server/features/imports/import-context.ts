@@ -11,7 +11,11 @@ export async function loadMembers(): Promise<Member[]> {
 }
 
 /** The date column's day/month order, decided from every cell of the column (the user's choice wins). */
-export async function dateColumnOrder(source: ImportSource, mapping: Record<string, string>, chosen?: DateOrder | null): Promise<DateColumnOrder & { column: string | null }> {
+export async function dateColumnOrder(
+  source: ImportSource,
+  mapping: Record<string, string>,
+  chosen?: DateOrder | null,
+): Promise<DateColumnOrder & { column: string | null }> {
   const column = Object.keys(mapping).find((header) => mapping[header] === 'date') ?? null;
   const cells: string[] = [];
   if (column) for await (const row of source.rows()) cells.push(row.values[column] ?? '');

@@ -28,7 +28,10 @@ export async function openUpload(bytes: Buffer, fileName: string, choice: TableC
 export function mappingFor(source: ImportSource, overrides: Record<string, string>): Record<string, string> {
   const unknown = Object.keys(overrides).filter((header) => !source.headers.includes(header));
   if (unknown.length > 0) {
-    throw new ValidationError(`The mapping names column(s) the file does not have: ${unknown.map((header) => `"${header}"`).join(', ')}.`, { headers: source.headers });
+    throw new ValidationError(
+      `The mapping names column(s) the file does not have: ${unknown.map((header) => `"${header}"`).join(', ')}.`,
+      { headers: source.headers },
+    );
   }
   return detectMapping(source.headers, overrides);
 }
@@ -47,9 +50,13 @@ export function requireEssentialColumns(mapping: Record<string, string>) {
   const missing = [
     targets.has('structure') ? null : 'the structure (SMILES or molfile)',
     targets.has('rf') ? null : 'the Rf',
-    targets.has('eluent') || [...targets].some((target) => target.startsWith('solvent:')) ? null : 'the eluent (or one column per solvent)',
+    targets.has('eluent') || [...targets].some((target) => target.startsWith('solvent:'))
+      ? null
+      : 'the eluent (or one column per solvent)',
   ].filter(Boolean);
   if (missing.length > 0) {
-    throw new UnprocessableError(`No column is mapped to ${missing.join(', ')}; adjust the mapping and try again.`, { mapping });
+    throw new UnprocessableError(`No column is mapped to ${missing.join(', ')}; adjust the mapping and try again.`, {
+      mapping,
+    });
   }
 }

@@ -9,7 +9,15 @@ import type { RowContext, RowFacts } from './row-facts';
 
 /** A row read, validated and its structure analysed, before the batch decides whether it is new. */
 export type PreparedRow =
-  | { source: SourceRow; ok: true; record: RecordInputParsed & { structure: string }; analysis: StructureAnalysis; notes: string[]; warnings: string[]; facts: RowFacts }
+  | {
+      source: SourceRow;
+      ok: true;
+      record: RecordInputParsed & { structure: string };
+      analysis: StructureAnalysis;
+      notes: string[];
+      warnings: string[];
+      facts: RowFacts;
+    }
   | { source: SourceRow; ok: false; reason: string; notes: string[] };
 
 /**
@@ -25,7 +33,10 @@ export class StructureCache {
       try {
         found = analyseStructure(text, { depict: false });
       } catch (error) {
-        found = error instanceof StructureError ? error : new Error(`The structure could not be read: ${cleanMessage(error)}.`);
+        found =
+          error instanceof StructureError
+            ? error
+            : new Error(`The structure could not be read: ${cleanMessage(error)}.`);
       }
       this.known.set(text, found);
     }
@@ -37,7 +48,13 @@ export class StructureCache {
  * Reads, validates (as a contributed record would be) and analyses one row. Every problem found is listed
  * in the reason, the structure's included, so one round of fixes is enough.
  */
-export function prepareRow(source: SourceRow, mapping: Record<string, string>, format: ImportFormat, structures: StructureCache, context?: RowContext): PreparedRow {
+export function prepareRow(
+  source: SourceRow,
+  mapping: Record<string, string>,
+  format: ImportFormat,
+  structures: StructureCache,
+  context?: RowContext,
+): PreparedRow {
   const row = new MappedRow(source, mapping);
   const reading = readRow(source, mapping, format, context);
   const validation = reading.ok ? validateRow(reading.input, row) : null;
@@ -54,7 +71,15 @@ export function prepareRow(source: SourceRow, mapping: Record<string, string>, f
   }
   if (!reading.ok) return { source, ok: false, reason: 'The row could not be read.', notes };
   const warnings = [...reading.warnings, ...validation.warnings];
-  return { source, ok: true, record: { ...validation.record, structure: text }, analysis, notes, warnings, facts: reading.facts };
+  return {
+    source,
+    ok: true,
+    record: { ...validation.record, structure: text },
+    analysis,
+    notes,
+    warnings,
+    facts: reading.facts,
+  };
 }
 
 export type AcceptedRow = Extract<PreparedRow, { ok: true }>;

@@ -4,7 +4,10 @@ import type { Import, User } from '../../db/models';
 const iso = (date: Date | null | undefined) => (date ? new Date(date).toISOString() : null);
 
 /** An import row (with its `user` included) as the API's ImportDto. */
-export function presentImport(row: Import & { user?: Pick<User, 'id' | 'name'> }, live: Pick<ImportDto, 'rate' | 'waitingToResume'> = { rate: null, waitingToResume: false }): ImportDto {
+export function presentImport(
+  row: Import & { user?: Pick<User, 'id' | 'name'> },
+  live: Pick<ImportDto, 'rate' | 'waitingToResume'> = { rate: null, waitingToResume: false },
+): ImportDto {
   return {
     id: row.id,
     fileName: row.fileName,

@@ -22,17 +22,30 @@ async function resultsOf(rows: PreparedRow[]): Promise<ImportRowResult[]> {
   }
   const seen = await storedHashes([...new Set([...hashesOf.values()].flat())]);
   return rows.map((row) => {
-    const base = { row: row.source.row, line: row.source.line, notes: row.notes, warnings: row.ok ? row.warnings : [], values: row.source.values };
+    const base = {
+      row: row.source.row,
+      line: row.source.line,
+      notes: row.notes,
+      warnings: row.ok ? row.warnings : [],
+      values: row.source.values,
+    };
     if (!row.ok) return { ...base, result: 'rejected', reason: row.reason, record: null };
     const hashes = hashesOf.get(row) as string[];
     const recordId = row.facts.recordId;
-    const sameRecord = recordId !== null && exported.get(recordId) !== undefined && exported.get(recordId) === compoundIds.get(row.analysis.idcode);
+    const sameRecord =
+      recordId !== null &&
+      exported.get(recordId) !== undefined &&
+      exported.get(recordId) === compoundIds.get(row.analysis.idcode);
     const duplicate = sameRecord || hashes.some((hash) => seen.has(hash));
     for (const hash of hashes) seen.add(hash);
     return {
       ...base,
       result: duplicate ? 'duplicate' : 'accepted',
-      reason: sameRecord ? `This is record ${recordId}, already stored (the file is an export of this app).` : duplicate ? 'The same record is already stored (or appears earlier in the file).' : null,
+      reason: sameRecord
+        ? `This is record ${recordId}, already stored (the file is an export of this app).`
+        : duplicate
+          ? 'The same record is already stored (or appears earlier in the file).'
+          : null,
       record: {
         name: row.record.name ?? row.analysis.name,
         smiles: row.analysis.canonicalSmiles,
@@ -73,11 +86,25 @@ export async function previewUpload(
   const results = await resultsOf(prepared);
   const count = (result: ImportRowResult['result']) => results.filter((row) => row.result === result).length;
   return {
-    dryRun: true, fileName: file.name, sha256: file.sha256, format, delimiter: source.delimiter, headers: source.headers, mapping,
-    total: source.total, blankRows: source.blankRows, rows: results.slice(0, previewRows), checked: results.length,
-    accepted: count('accepted'), rejected: count('rejected'), duplicates: count('duplicate'),
+    dryRun: true,
+    fileName: file.name,
+    sha256: file.sha256,
+    format,
+    delimiter: source.delimiter,
+    headers: source.headers,
+    mapping,
+    total: source.total,
+    blankRows: source.blankRows,
+    rows: results.slice(0, previewRows),
+    checked: results.length,
+    accepted: count('accepted'),
+    rejected: count('rejected'),
+    duplicates: count('duplicate'),
     warned: results.filter((row) => row.result === 'accepted' && row.warnings.length > 0).length,
-    sheet: source.sheet, sheets: source.sheets, headerRow: source.headerRow, titleRows: source.titleRows,
+    sheet: source.sheet,
+    sheets: source.sheets,
+    headerRow: source.headerRow,
+    titleRows: source.titleRows,
     dates: { column: dates.column, order: dates.order, needsChoice: dates.needsChoice, evidence: dates.evidence },
   };
 }

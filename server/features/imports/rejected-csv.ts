@@ -22,16 +22,24 @@ export function defuseCell(cell: string): string {
  * file's delimiter (comma for SDF and workbooks), a UTF-8 byte-order mark so spreadsheet programs read accents
  * and symbols right, and every cell that a spreadsheet would run as a formula neutralised.
  */
-export async function importRowsCsv(id: number, kind: 'rejected' | 'warning'): Promise<{ fileName: string; body: string }> {
+export async function importRowsCsv(
+  id: number,
+  kind: 'rejected' | 'warning',
+): Promise<{ fileName: string; body: string }> {
   const importRow = await Import.findByPk(id);
   if (!importRow) throw new NotFoundError('Import');
   const rows = await ImportRow.findAll({ where: { importId: id, kind }, order: [['rowNumber', 'ASC']] });
   const { headers } = importRow;
   const column = kind === 'rejected' ? REASON_COLUMN : WARNING_COLUMN;
-  const reused = kind === 'rejected' && headers.includes(REASON_COLUMN) && (importRow.mapping[REASON_COLUMN] ?? 'ignore') === 'ignore';
+  const reused =
+    kind === 'rejected' &&
+    headers.includes(REASON_COLUMN) &&
+    (importRow.mapping[REASON_COLUMN] ?? 'ignore') === 'ignore';
   const outHeaders = reused ? headers : [...headers, headers.includes(column) ? `${column} (import ${id})` : column];
   const records = rows.map((row) => {
-    const cells = headers.map((header) => (reused && header === REASON_COLUMN ? row.reason : row.cells[header] ?? ''));
+    const cells = headers.map((header) =>
+      reused && header === REASON_COLUMN ? row.reason : (row.cells[header] ?? ''),
+    );
     return (reused ? cells : [...cells, row.reason]).map(defuseCell);
   });
   const delimiter = importRow.delimiter ?? ',';

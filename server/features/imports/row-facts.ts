@@ -62,7 +62,10 @@ export function readPhase(row: MappedRow, technique: Technique, warnings: string
   }
   if (plate.unrecognised.length > 0) {
     facts.sourceTexts.phase = written;
-    warnings.push(`${column}: read "${written}" as ${stationaryPhaseByKey(plate.key)?.name}; "${plate.unrecognised.join(' ')}" not recognised (kept as written on the record).`);
+    warnings.push(
+      `${column}: read "${written}" as ${stationaryPhaseByKey(plate.key)?.name}; "${plate.unrecognised.join(' ')}" ` +
+        `not recognised (kept as written on the record).`,
+    );
   } else if (plate.qualifiers.length > 1 || written.length > 20) facts.sourceTexts.phase = written;
   return { stationaryPhase: plate.key, stationaryPhaseOther: null };
 }
@@ -75,9 +78,15 @@ export function readVisualisation(row: MappedRow, warnings: string[], facts: Row
   if (unrecognised.length > 0 || items.some((item) => item.note)) facts.sourceTexts.stain = written;
   if (unrecognised.length > 0) {
     const what = unrecognised.map((part) => `"${part}"`).join(', ');
-    warnings.push(`Visualisation (column "${row.header('stain')}"): ${what} not recognised${items.length ? '; the rest was read' : ''} (kept as written on the record).`);
+    warnings.push(
+      `Visualisation (column "${row.header('stain')}"): ${what} not recognised${items.length ? '; the rest was read' : ''} ` +
+        `(kept as written on the record).`,
+    );
   }
-  if (items.length > 12) warnings.push(`Visualisation (column "${row.header('stain')}"): only the first 12 of ${items.length} methods are stored.`);
+  if (items.length > 12)
+    warnings.push(
+      `Visualisation (column "${row.header('stain')}"): only the first 12 of ${items.length} methods are stored.`,
+    );
   return items.slice(0, 12).map((item) => (item.note ? { method: item.method, note: item.note } : item.method));
 }
 
@@ -89,7 +98,9 @@ export function readWhoAndWhen(row: MappedRow, context: RowContext, warnings: st
     if (reading.ok) facts.date = reading.date;
     else {
       facts.sourceTexts.date = date;
-      warnings.push(`Date (column "${row.header('date')}"): ${reading.reason} The record is dated today; the text is kept on it.`);
+      warnings.push(
+        `Date (column "${row.header('date')}"): ${reading.reason} The record is dated today; the text is kept on it.`,
+      );
     }
   }
   const person = row.cell('author');

@@ -28,7 +28,10 @@ const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 /** A connection that took too long to open or to be handed out: the database is busy, not gone. */
 function isSlowConnection(error: unknown): boolean {
   const e = error as { name?: string; message?: string; parent?: { message?: string } } | null;
-  return e?.name === 'SequelizeConnectionAcquireTimeoutError' || (e?.name === 'SequelizeConnectionError' && /timeout expired/i.test(`${e.message} ${e.parent?.message ?? ''}`));
+  return (
+    e?.name === 'SequelizeConnectionAcquireTimeoutError' ||
+    (e?.name === 'SequelizeConnectionError' && /timeout expired/i.test(`${e.message} ${e.parent?.message ?? ''}`))
+  );
 }
 
 /**
@@ -59,7 +62,10 @@ function describeFailure(error: unknown): string {
  */
 async function markFailed(importId: number, error: unknown): Promise<void> {
   logger.warn({ err: error, importId }, 'import stopped');
-  await Import.update({ status: 'failed', error: describeFailure(error), finishedAt: new Date() }, { where: { id: importId, status: 'running' } });
+  await Import.update(
+    { status: 'failed', error: describeFailure(error), finishedAt: new Date() },
+    { where: { id: importId, status: 'running' } },
+  );
 }
 
 /** What a running import says while it waits for the database to come back (the page shows it). */
@@ -85,10 +91,16 @@ async function waitForDatabase(importId: number): Promise<boolean> {
 async function execute(importId: number): Promise<void> {
   const importRow = await patiently(() => Import.findByPk(importId, { rejectOnEmpty: true }));
   if (importRow.status !== 'running') return;
-  if (importRow.error !== null) await patiently(() => Import.update({ error: null, heartbeatAt: new Date() }, { where: { id: importId, status: 'running' } }));
+  if (importRow.error !== null)
+    await patiently(() =>
+      Import.update({ error: null, heartbeatAt: new Date() }, { where: { id: importId, status: 'running' } }),
+    );
   const stored = await patiently(() => blobStorage().get(importRow.fileBlobKey));
   if (!stored) throw new AppError(500, 'import_file_missing', 'The uploaded file is no longer stored.');
-  const source = await openUpload(stored.bytes, importRow.fileName, { sheet: importRow.sheet ?? undefined, headerRow: importRow.headerRow ?? undefined });
+  const source = await openUpload(stored.bytes, importRow.fileName, {
+    sheet: importRow.sheet ?? undefined,
+    headerRow: importRow.headerRow ?? undefined,
+  });
   const context = await patiently(() => rowContext(importRow.dateOrder));
   const structures = new StructureCache();
   const ahead = new FingerprintsAhead();
@@ -97,7 +109,11 @@ async function execute(importId: number): Promise<void> {
   const commit = async (batch: { rows: PreparedRow[]; number: number }) => {
     const fingerprints = await ahead.forBatch(batch.rows);
     await patiently(() => commitBatch(importRow, batch.rows, fingerprints, batch.number));
-    importEvents.emit('batch', { importId, batch: batch.number, lastRow: batch.rows[batch.rows.length - 1].source.row });
+    importEvents.emit('batch', {
+      importId,
+      batch: batch.number,
+      lastRow: batch.rows[batch.rows.length - 1].source.row,
+    });
   };
   const step = async (rows: SourceRow[]) => {
     const committing = pending ? commit(pending) : null;
@@ -121,7 +137,12 @@ async function execute(importId: number): Promise<void> {
   }
   if (buffer.length > 0) await step(buffer);
   if (pending) await commit(pending);
-  await patiently(() => Import.update({ status: 'completed', finishedAt: new Date(), heartbeatAt: new Date() }, { where: { id: importId, status: 'running' } }));
+  await patiently(() =>
+    Import.update(
+      { status: 'completed', finishedAt: new Date(), heartbeatAt: new Date() },
+      { where: { id: importId, status: 'running' } },
+    ),
+  );
 }
 
 /** Thrown when another process holds the import's lease: the queue tries the job again later. */
@@ -145,7 +166,9 @@ async function importJob({ importId }: { importId: number }): Promise<void> {
           return 'done' as const;
         } catch (error) {
           if (isDatabaseDown(error)) return 'database-down' as const;
-          await markFailed(importId, error).catch((markError) => logger.error({ err: markError, importId }, 'import could not be marked failed'));
+          await markFailed(importId, error).catch((markError) =>
+            logger.error({ err: markError, importId }, 'import could not be marked failed'),
+          );
           return 'done' as const;
         } finally {
           running.delete(importId);
@@ -159,7 +182,8 @@ async function importJob({ importId }: { importId: number }): Promise<void> {
     }
     if (outcome === 'done') return;
     logger.warn({ importId }, 'import waits for the database to resume');
-    if (!(await waitForDatabase(importId))) throw new Error('The database stayed unavailable; the queue retries the import.');
+    if (!(await waitForDatabase(importId)))
+      throw new Error('The database stayed unavailable; the queue retries the import.');
   }
 }
 

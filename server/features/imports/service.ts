@@ -23,7 +23,9 @@ export interface UploadedFile {
 }
 
 const contentTypes = {
-  sdf: 'chemical/x-mdl-sdfile', csv: 'text/csv', xlsx: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+  sdf: 'chemical/x-mdl-sdfile',
+  csv: 'text/csv',
+  xlsx: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
 } as const;
 
 export const sha256Of = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
@@ -32,7 +34,12 @@ export const sha256Of = (bytes: Buffer) => createHash('sha256').update(bytes).di
  * Stores an upload (content-addressed bytes and an import row holding the mapping and the row count) and
  * starts the import in the background. 415/422 when the file cannot be imported, before anything is stored.
  */
-export async function createImport(file: UploadedFile, overrides: Record<string, string>, user: SessionUser, choice: ImportChoice = {}): Promise<Import> {
+export async function createImport(
+  file: UploadedFile,
+  overrides: Record<string, string>,
+  user: SessionUser,
+  choice: ImportChoice = {},
+): Promise<Import> {
   const source = await openUpload(file.bytes, file.name, choice);
   const mapping = mappingFor(source, overrides);
   requireEssentialColumns(mapping);
@@ -41,14 +48,35 @@ export async function createImport(file: UploadedFile, overrides: Record<string,
     const key = await blobStorage().put(file.bytes, contentTypes[source.kind], transaction);
     const row = await Import.create(
       {
-        userId: user.id, fileName: file.name, fileSha256: sha256Of(file.bytes), fileBlobKey: key, byteSize: file.bytes.length,
-        format: formatOf(source, mapping), delimiter: source.delimiter, headers: source.headers, mapping, total: source.total,
-        blankRows: source.blankRows, batchSize: IMPORT_BATCH_SIZE, heartbeatAt: new Date(),
-        sheet: source.sheet, headerRow: source.kind === 'sdf' ? null : source.headerRow, dateOrder: dates.order,
+        userId: user.id,
+        fileName: file.name,
+        fileSha256: sha256Of(file.bytes),
+        fileBlobKey: key,
+        byteSize: file.bytes.length,
+        format: formatOf(source, mapping),
+        delimiter: source.delimiter,
+        headers: source.headers,
+        mapping,
+        total: source.total,
+        blankRows: source.blankRows,
+        batchSize: IMPORT_BATCH_SIZE,
+        heartbeatAt: new Date(),
+        sheet: source.sheet,
+        headerRow: source.kind === 'sdf' ? null : source.headerRow,
+        dateOrder: dates.order,
       },
       { transaction },
     );
-    await AuditEntry.create({ actorId: user.id, action: 'import.create', subjectType: 'import', subjectId: String(row.id), details: { fileName: file.name, sha256: row.fileSha256, total: source.total } }, { transaction });
+    await AuditEntry.create(
+      {
+        actorId: user.id,
+        action: 'import.create',
+        subjectType: 'import',
+        subjectId: String(row.id),
+        details: { fileName: file.name, sha256: row.fileSha256, total: source.total },
+      },
+      { transaction },
+    );
     return row;
   });
   await runImport(created.id);
@@ -59,7 +87,8 @@ export async function createImport(file: UploadedFile, overrides: Record<string,
 async function withLiveJob(ids: number[]): Promise<Set<number>> {
   try {
     const rows = await sequelize.query<{ key: string }>(
-      `SELECT singleton_key AS key FROM rfolio_jobs.job WHERE name = :name AND singleton_key IN (:keys) AND state IN ('created', 'retry', 'active')`,
+      `SELECT singleton_key AS key FROM rfolio_jobs.job WHERE name = :name AND singleton_key IN (:keys) ` +
+        `AND state IN ('created', 'retry', 'active')`,
       { replacements: { name: IMPORT_JOB, keys: ids.map((id) => `import-${id}`) }, type: QueryTypes.SELECT },
     );
     return new Set(rows.map((row) => Number(row.key.slice('import-'.length))));
@@ -73,14 +102,21 @@ async function withLiveJob(ids: number[]): Promise<Set<number>> {
  * they can be resumed by hand. An import whose job is still queued is left running: the queue resumes it.
  */
 async function failStalled(): Promise<void> {
-  const stalled = await Import.findAll({ where: { status: 'running', heartbeatAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) } }, attributes: ['id'] });
+  const stalled = await Import.findAll({
+    where: { status: 'running', heartbeatAt: { [Op.lt]: new Date(Date.now() - STALE_AFTER_MS) } },
+    attributes: ['id'],
+  });
   const candidates = stalled.map((row) => row.id).filter((id) => !isRunningHere(id));
   if (candidates.length === 0) return;
   const live = await withLiveJob(candidates);
   const ids = candidates.filter((id) => !live.has(id));
   if (ids.length === 0) return;
   await Import.update(
-    { status: 'failed', error: 'The import stopped without finishing (its server process ended).', finishedAt: new Date() },
+    {
+      status: 'failed',
+      error: 'The import stopped without finishing (its server process ended).',
+      finishedAt: new Date(),
+    },
     { where: { id: ids, status: 'running' } },
   );
 }
@@ -90,7 +126,14 @@ const withUser = { model: User, as: 'user', attributes: ['id', 'name'] };
 /** Past imports, newest first. */
 export async function listImports(limit = 100): Promise<Import[]> {
   await failStalled();
-  return Import.findAll({ include: [withUser], order: [['createdAt', 'DESC'], ['id', 'DESC']], limit });
+  return Import.findAll({
+    include: [withUser],
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit,
+  });
 }
 
 export async function getImport(id: number): Promise<Import> {
@@ -109,9 +152,17 @@ export async function resumeImport(id: number, user: SessionUser): Promise<Impor
   );
   if (claimed === 0) {
     const current = await getImport(id);
-    throw new ConflictError(`Only a failed import can be resumed; import ${id} is ${current.status}.`, { status: current.status });
+    throw new ConflictError(`Only a failed import can be resumed; import ${id} is ${current.status}.`, {
+      status: current.status,
+    });
   }
-  await AuditEntry.create({ actorId: user.id, action: 'import.resume', subjectType: 'import', subjectId: String(id), details: {} });
+  await AuditEntry.create({
+    actorId: user.id,
+    action: 'import.resume',
+    subjectType: 'import',
+    subjectId: String(id),
+    details: {},
+  });
   await runImport(id);
   return getImport(id);
 }

@@ -27,7 +27,11 @@ export function eluentFromAmounts(amounts: readonly SolventAmount[]): AmountsElu
     const read = readNumber(cell, `Amount of ${requireSolvent(solvent).label} (column "${header}")`, { percent: true });
     if (!read.ok) return read;
     if (read.value === null || read.value === 0) continue;
-    if (read.value < 0) return { ok: false, message: `Amount of ${requireSolvent(solvent).label} (column "${header}") is negative: ${cell.trim()}.` };
+    if (read.value < 0)
+      return {
+        ok: false,
+        message: `Amount of ${requireSolvent(solvent).label} (column "${header}") is negative: ${cell.trim()}.`,
+      };
     const existing = present.find((item) => item.solvent === solvent);
     if (existing) existing.amount += read.value;
     else present.push({ solvent, amount: read.value });

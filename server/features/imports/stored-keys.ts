@@ -17,11 +17,19 @@ export async function storedHashes(hashes: readonly string[], transaction?: Tran
 }
 
 /** Stored compounds' ids by ID code, for the ID codes given. */
-export async function storedCompoundIds(idcodes: readonly string[], transaction?: Transaction): Promise<Map<string, number>> {
+export async function storedCompoundIds(
+  idcodes: readonly string[],
+  transaction?: Transaction,
+): Promise<Map<string, number>> {
   if (idcodes.length === 0) return new Map();
-  const rows = await sequelize.query<{ id: number; idcode: string }>('SELECT id, idcode FROM compounds WHERE idcode IN (:idcodes)', {
-    replacements: { idcodes: [...idcodes] }, type: QueryTypes.SELECT, transaction,
-  });
+  const rows = await sequelize.query<{ id: number; idcode: string }>(
+    'SELECT id, idcode FROM compounds WHERE idcode IN (:idcodes)',
+    {
+      replacements: { idcodes: [...idcodes] },
+      type: QueryTypes.SELECT,
+      transaction,
+    },
+  );
   return new Map(rows.map((row) => [row.idcode, row.id]));
 }
 
@@ -29,7 +37,10 @@ export async function storedCompoundIds(idcodes: readonly string[], transaction?
  * The compound of each stored record among the ids given (an export of this app carries its record ids), ignoring
  * records of undone imports: a re-imported export row whose record id names a record of the same compound is that record.
  */
-export async function storedRecordCompounds(ids: readonly number[], transaction?: Transaction): Promise<Map<number, number>> {
+export async function storedRecordCompounds(
+  ids: readonly number[],
+  transaction?: Transaction,
+): Promise<Map<number, number>> {
   if (ids.length === 0) return new Map();
   const rows = await sequelize.query<{ id: number; compoundId: number }>(
     `SELECT r.id, r.compound_id AS "compoundId" FROM condition_records r

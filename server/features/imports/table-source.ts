@@ -20,12 +20,16 @@ export function tableSource(
   table: readonly TableRow[],
   options: { delimiter: string | null; headerLine?: number; sheet?: string | null; sheets?: string[] },
 ): ImportSource {
-  if (table.length === 0 || table.every((row) => isBlank(row.cells))) throw new UnprocessableError('The file holds no header row.');
+  if (table.length === 0 || table.every((row) => isBlank(row.cells)))
+    throw new UnprocessableError('The file holds no header row.');
   let index: number;
   if (options.headerLine !== undefined) {
     index = table.findIndex((row) => row.line === options.headerLine);
     if (index < 0 || isBlank(table[index].cells)) {
-      throw new UnprocessableError(`Row ${options.headerLine} is empty or beyond the table; choose another header row.`, { headerRow: options.headerLine });
+      throw new UnprocessableError(
+        `Row ${options.headerLine} is empty or beyond the table; choose another header row.`,
+        { headerRow: options.headerLine },
+      );
     }
   } else index = detectHeaderRow(table.map((row) => row.cells)).index;
   const headerCells = [...table[index].cells];
@@ -42,8 +46,24 @@ export function tableSource(
     }
   }
   return {
-    kind, delimiter: options.delimiter, headers, total: data.length, blankRows, rows,
-    headerRow: table[index].line, sheet: options.sheet ?? null, sheets: options.sheets ?? [],
-    titleRows: table.slice(0, index).filter((row) => !isBlank(row.cells)).map((row) => row.cells.filter((cell) => cell.trim()).join(' · ').slice(0, 200)).slice(0, 10),
+    kind,
+    delimiter: options.delimiter,
+    headers,
+    total: data.length,
+    blankRows,
+    rows,
+    headerRow: table[index].line,
+    sheet: options.sheet ?? null,
+    sheets: options.sheets ?? [],
+    titleRows: table
+      .slice(0, index)
+      .filter((row) => !isBlank(row.cells))
+      .map((row) =>
+        row.cells
+          .filter((cell) => cell.trim())
+          .join(' · ')
+          .slice(0, 200),
+      )
+      .slice(0, 10),
   };
 }

@@ -15,27 +15,54 @@ const KEPT_SURVIVOR = `EXISTS (SELECT 1 FROM condition_records m WHERE m.merged_
 export async function undoPlan(id: number, transaction?: Transaction): Promise<UndoPlan> {
   const importRow = await Import.findByPk(id, { transaction });
   if (!importRow) throw new NotFoundError('Import');
-  const rows = await sequelize.query<{ id: number; status: string; mergedIntoId: number | null; edited: boolean; absorbed: number[] | null }>(
+  const rows = await sequelize.query<{
+    id: number;
+    status: string;
+    mergedIntoId: number | null;
+    edited: boolean;
+    absorbed: number[] | null;
+  }>(
     `SELECT r.id, r.status, r.merged_into_id AS "mergedIntoId",
-            EXISTS (SELECT 1 FROM record_revisions v WHERE v.record_id = r.id AND v.action IN ('update', 'photo-add', 'photo-remove', 'restore')) AS edited,
-            (SELECT array_agg(m.id ORDER BY m.id) FROM condition_records m WHERE m.merged_into_id = r.id AND m.status = 'merged') AS absorbed
+            EXISTS (SELECT 1 FROM record_revisions v WHERE v.record_id = r.id AND v.action IN ('update', 'photo-add',
+              'photo-remove', 'restore')) AS edited,
+            (SELECT array_agg(m.id ORDER BY m.id) FROM condition_records m WHERE m.merged_into_id = r.id
+              AND m.status = 'merged') AS absorbed
        FROM condition_records r WHERE r.import_id = :id ORDER BY r.id`,
     { replacements: { id }, type: QueryTypes.SELECT, transaction },
   );
   const active = rows.filter((row) => row.status === 'active');
-  const keptSurvivors = active.filter((row) => row.absorbed && row.absorbed.length > 0).map((row) => ({ id: row.id, absorbed: row.absorbed as number[] }));
+  const keptSurvivors = active
+    .filter((row) => row.absorbed && row.absorbed.length > 0)
+    .map((row) => ({ id: row.id, absorbed: row.absorbed as number[] }));
   const retiring = active.filter((row) => !row.absorbed || row.absorbed.length === 0);
   const edited = retiring.filter((row) => row.edited).map((row) => row.id);
-  const mergedAway = rows.filter((row) => row.status === 'merged' && row.mergedIntoId !== null).map((row) => ({ id: row.id, into: row.mergedIntoId as number }));
+  const mergedAway = rows
+    .filter((row) => row.status === 'merged' && row.mergedIntoId !== null)
+    .map((row) => ({ id: row.id, into: row.mergedIntoId as number }));
   const alreadyRetired = rows.filter((row) => row.status === 'retired').length;
   const parts = [
     `Retires ${retiring.length} record${retiring.length === 1 ? '' : 's'} this import added (kept for audit, restorable one by one)`,
     edited.length ? `${edited.length} of them edited since the import (records ${edited.join(', ')})` : '',
-    keptSurvivors.length ? `keeps ${keptSurvivors.length} that other records were merged into (records ${keptSurvivors.map((item) => item.id).join(', ')}), so the merged data stays whole` : '',
-    mergedAway.length ? `leaves ${mergedAway.length} merged into other records as they are (${mergedAway.map((item) => `${item.id} → ${item.into}`).join(', ')})` : '',
+    keptSurvivors.length
+      ? `keeps ${keptSurvivors.length} that other records were merged into (records ` +
+        `${keptSurvivors.map((item) => item.id).join(', ')}), so the merged data stays whole`
+      : '',
+    mergedAway.length
+      ? `leaves ${mergedAway.length} merged into other records as they are ` +
+        `(${mergedAway.map((item) => `${item.id} → ${item.into}`).join(', ')})`
+      : '',
     alreadyRetired ? `${alreadyRetired} already retired stay retired` : '',
   ].filter(Boolean);
-  return { importId: id, status: importRow.status as UndoPlan['status'], retire: retiring.length, edited, keptSurvivors, mergedAway, alreadyRetired, summary: `${parts.join('; ')}.` };
+  return {
+    importId: id,
+    status: importRow.status as UndoPlan['status'],
+    retire: retiring.length,
+    edited,
+    keptSurvivors,
+    mergedAway,
+    alreadyRetired,
+    summary: `${parts.join('; ')}.`,
+  };
 }
 
 /**
@@ -50,14 +77,22 @@ export async function undoImport(id: number, user: SessionUser): Promise<void> {
   await sequelize.transaction(async (transaction) => {
     const importRow = await Import.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!importRow) throw new NotFoundError('Import');
-    if (importRow.status === 'running') throw new ConflictError(`Import ${id} is still running; wait for it to finish or fail before undoing it.`, { status: importRow.status });
-    if (importRow.status === 'undone') throw new ConflictError(`Import ${id} was already undone.`, { status: importRow.status });
+    if (importRow.status === 'running')
+      throw new ConflictError(`Import ${id} is still running; wait for it to finish or fail before undoing it.`, {
+        status: importRow.status,
+      });
+    if (importRow.status === 'undone')
+      throw new ConflictError(`Import ${id} was already undone.`, { status: importRow.status });
     const plan = await undoPlan(id, transaction);
     const reason = undoReason(id);
-    const changes = JSON.stringify([{ field: 'status', from: 'active', to: 'retired' }, { field: 'retiredReason', from: null, to: reason }]);
+    const changes = JSON.stringify([
+      { field: 'status', from: 'active', to: 'retired' },
+      { field: 'retiredReason', from: null, to: reason },
+    ]);
     const [{ retired }] = await sequelize.query<{ retired: number }>(
       `WITH target AS (
-         SELECT r.id FROM condition_records r WHERE r.import_id = :id AND r.status = 'active' AND NOT ${KEPT_SURVIVOR} ORDER BY r.id FOR UPDATE
+         SELECT r.id FROM condition_records r WHERE r.import_id = :id AND r.status = 'active'
+           AND NOT ${KEPT_SURVIVOR} ORDER BY r.id FOR UPDATE
        ), bumped AS (
          UPDATE condition_records r
             SET status = 'retired', retired_reason = :reason, retired_at = now(), retired_by = :userId,
@@ -74,7 +109,26 @@ export async function undoImport(id: number, user: SessionUser): Promise<void> {
        SELECT (SELECT count(*) FROM bumped)::int AS retired`,
       { replacements: { id, reason, userId: user.id, changes }, type: QueryTypes.SELECT, transaction },
     );
-    await importRow.update({ status: 'undone', undoneAt: new Date(), undoneBy: user.id, retiredRecords: retired }, { transaction });
-    await AuditEntry.create({ actorId: user.id, action: 'import.undo', subjectType: 'import', subjectId: String(id), details: { retired, reason, plan: plan.summary, keptSurvivors: plan.keptSurvivors, mergedAway: plan.mergedAway, edited: plan.edited } }, { transaction });
+    await importRow.update(
+      { status: 'undone', undoneAt: new Date(), undoneBy: user.id, retiredRecords: retired },
+      { transaction },
+    );
+    await AuditEntry.create(
+      {
+        actorId: user.id,
+        action: 'import.undo',
+        subjectType: 'import',
+        subjectId: String(id),
+        details: {
+          retired,
+          reason,
+          plan: plan.summary,
+          keptSurvivors: plan.keptSurvivors,
+          mergedAway: plan.mergedAway,
+          edited: plan.edited,
+        },
+      },
+      { transaction },
+    );
   });
 }

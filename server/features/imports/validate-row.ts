@@ -5,14 +5,29 @@ import type { MappedRow } from './read-row';
 
 /** Which import field a record-body path came from, to name the column in a reason. */
 const fieldOfPath: Record<string, ImportField> = {
-  structure: 'structure', name: 'name', technique: 'technique', stationaryPhase: 'phase', stationaryPhaseOther: 'phase',
-  eluent: 'eluent', spots: 'rf', visualisation: 'stain', outcome: 'outcome', outcomeReason: 'outcomeReason',
-  notebookRef: 'notebook', notes: 'notes',
+  structure: 'structure',
+  name: 'name',
+  technique: 'technique',
+  stationaryPhase: 'phase',
+  stationaryPhaseOther: 'phase',
+  eluent: 'eluent',
+  spots: 'rf',
+  visualisation: 'stain',
+  outcome: 'outcome',
+  outcomeReason: 'outcomeReason',
+  notebookRef: 'notebook',
+  notes: 'notes',
 };
 
 const columnFieldOf: Record<string, ImportField> = {
-  diameterMm: 'columnDiameter', cartridgeSize: 'cartridge', silicaG: 'silica', sampleMg: 'sampleMass', loadMethod: 'loadMethod',
-  fractionMl: 'fractionSize', fractionsPooled: 'fractionsPooled', yieldPercent: 'yield',
+  diameterMm: 'columnDiameter',
+  cartridgeSize: 'cartridge',
+  silicaG: 'silica',
+  sampleMg: 'sampleMass',
+  loadMethod: 'loadMethod',
+  fractionMl: 'fractionSize',
+  fractionsPooled: 'fractionsPooled',
+  yieldPercent: 'yield',
 };
 
 function describe(issue: z.core.$ZodIssue, row: MappedRow): string {
@@ -21,7 +36,10 @@ function describe(issue: z.core.$ZodIssue, row: MappedRow): string {
   const headers = field ? row.headersFor(field) : [];
   const fromSolventColumns = root === 'eluent' && headers.length === 0 && row.solventAmounts().length > 0;
   const where = headers.length > 0 ? ` (column "${headers[0]}")` : fromSolventColumns ? ' (solvent columns)' : '';
-  const message = issue.code === 'too_big' && 'maximum' in issue ? `The text is too long (at most ${String(issue.maximum)} characters).` : issue.message;
+  const message =
+    issue.code === 'too_big' && 'maximum' in issue
+      ? `The text is too long (at most ${String(issue.maximum)} characters).`
+      : issue.message;
   return `${message}${where}`;
 }
 
@@ -36,11 +54,17 @@ function eased(input: RecordInput, issue: z.core.$ZodIssue): RecordInput {
   const next: Record<string, unknown> = { ...input };
   const value = next[root];
   const limit = issue.code === 'too_big' && 'maximum' in issue ? Number(issue.maximum) : null;
-  if (root === 'column' && sub && next.column && typeof next.column === 'object') next.column = { ...(next.column as object), [sub]: null };
-  else if (root === 'visualisation' && Array.isArray(value) && sub !== undefined) next.visualisation = value.filter((_, index) => String(index) !== sub);
+  if (root === 'column' && sub && next.column && typeof next.column === 'object')
+    next.column = { ...(next.column as object), [sub]: null };
+  else if (root === 'visualisation' && Array.isArray(value) && sub !== undefined)
+    next.visualisation = value.filter((_, index) => String(index) !== sub);
   else if (typeof value === 'string' && limit !== null) next[root] = value.slice(0, limit);
   else if (root === 'name') delete next.name;
-  else if (root === 'stationaryPhase' || root === 'stationaryPhaseOther') Object.assign(next, { stationaryPhase: 'other', stationaryPhaseOther: String(input.stationaryPhase ?? 'unknown').slice(0, 120) });
+  else if (root === 'stationaryPhase' || root === 'stationaryPhaseOther')
+    Object.assign(next, {
+      stationaryPhase: 'other',
+      stationaryPhaseOther: String(input.stationaryPhase ?? 'unknown').slice(0, 120),
+    });
   else next[root] = root === 'visualisation' ? [] : null;
   return next as RecordInput;
 }
@@ -58,9 +82,12 @@ export function validateRow(input: RecordInput, row: MappedRow): RowValidation {
     const parsed = recordInputSchema.safeParse(current);
     if (parsed.success) return { ok: true, record: parsed.data, warnings };
     const primary = parsed.error.issues.filter((issue) => primaryRoots.has(String(issue.path[0])));
-    if (primary.length > 0) return { ok: false, reason: [...new Set(primary.map((issue) => describe(issue, row)))].join(' ') };
+    if (primary.length > 0)
+      return { ok: false, reason: [...new Set(primary.map((issue) => describe(issue, row)))].join(' ') };
     for (const issue of parsed.error.issues) {
-      warnings.push(`${describe(issue, row)} ${issue.code === 'too_big' ? 'Cut to that length' : 'Left out'}; the row is kept.`);
+      warnings.push(
+        `${describe(issue, row)} ${issue.code === 'too_big' ? 'Cut to that length' : 'Left out'}; the row is kept.`,
+      );
       current = eased(current, issue);
     }
   }

@@ -20,22 +20,32 @@ export function cellText(cell: Cell): string {
 }
 
 /** ZIP signature: .xlsx and .ods are ZIP archives. */
-export const isZip = (bytes: Buffer) => bytes.length > 4 && bytes[0] === 0x50 && bytes[1] === 0x4b && bytes[2] === 0x03 && bytes[3] === 0x04;
+export const isZip = (bytes: Buffer) =>
+  bytes.length > 4 && bytes[0] === 0x50 && bytes[1] === 0x4b && bytes[2] === 0x03 && bytes[3] === 0x04;
 
 /**
  * Opens an .xlsx workbook (read-excel-file: typed numbers and dates, formulas' cached values, every sheet) and
  * picks the sheet whose header row looks most like a table of conditions (notes and summary sheets score
  * less), or the sheet the user chose; the header row is found as for CSV, or taken as chosen.
  */
-export async function openWorkbook(bytes: Buffer, fileName: string, choice: { sheet?: string; headerRow?: number } = {}): Promise<ImportSource> {
+export async function openWorkbook(
+  bytes: Buffer,
+  fileName: string,
+  choice: { sheet?: string; headerRow?: number } = {},
+): Promise<ImportSource> {
   if (/\.ods$/i.test(fileName)) {
-    throw new UnsupportedMediaTypeError('OpenDocument (.ods) workbooks are not read; save the sheet as .xlsx or CSV and upload that.');
+    throw new UnsupportedMediaTypeError(
+      'OpenDocument (.ods) workbooks are not read; save the sheet as .xlsx or CSV and upload that.',
+    );
   }
   let sheets: { sheet: string; data: Cell[][] }[];
   try {
     sheets = (await readXlsxFile(bytes)) as unknown as { sheet: string; data: Cell[][] }[];
   } catch (error) {
-    throw new UnprocessableError(`The workbook could not be read (${error instanceof Error ? error.message.slice(0, 200) : 'unknown error'}); save it again as .xlsx or CSV.`);
+    throw new UnprocessableError(
+      `The workbook could not be read (${error instanceof Error ? error.message.slice(0, 200) : 'unknown error'}); ` +
+        `save it again as .xlsx or CSV.`,
+    );
   }
   const tables = sheets.map(({ sheet, data }) => ({
     name: sheet,
@@ -46,7 +56,11 @@ export async function openWorkbook(bytes: Buffer, fileName: string, choice: { sh
   let chosen: (typeof tables)[number];
   if (choice.sheet !== undefined) {
     const found = tables.find((table) => table.name === choice.sheet);
-    if (!found) throw new UnprocessableError(`The workbook has no sheet "${choice.sheet}" (it has ${names.map((name) => `"${name}"`).join(', ')}).`, { sheets: names });
+    if (!found)
+      throw new UnprocessableError(
+        `The workbook has no sheet "${choice.sheet}" (it has ${names.map((name) => `"${name}"`).join(', ')}).`,
+        { sheets: names },
+      );
     chosen = found;
   } else {
     const scored = tables.map((table) => {
@@ -57,5 +71,10 @@ export async function openWorkbook(bytes: Buffer, fileName: string, choice: { sh
     scored.sort((a, b) => b.score - a.score || b.dataRows - a.dataRows);
     chosen = scored[0].table;
   }
-  return tableSource('xlsx', chosen.rows, { delimiter: null, headerLine: choice.headerRow, sheet: chosen.name, sheets: names });
+  return tableSource('xlsx', chosen.rows, {
+    delimiter: null,
+    headerLine: choice.headerRow,
+    sheet: chosen.name,
+    sheets: names,
+  });
 }

@@ -5,7 +5,11 @@ import { signIn } from '../../auth/sign-in';
 import { toSessionUser } from '../../auth/passport';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { invitationAcceptSchema, tokenParamSchema } from '../../../shared/schemas/auth';
-import { invitationCreateSchema, invitationListQuerySchema, type InvitationPreview } from '../../../shared/schemas/accounts';
+import {
+  invitationCreateSchema,
+  invitationListQuerySchema,
+  type InvitationPreview,
+} from '../../../shared/schemas/accounts';
 import { presentInvitation } from './presenters';
 import * as invitations from './invitations';
 
@@ -52,7 +56,12 @@ invitationsRouter.get(
   allow('public'),
   handle({ params: tokenParamSchema }, async ({ params }, _req, res) => {
     const inv = await invitations.usableInvitation(params.token);
-    const body: InvitationPreview = { email: inv.email, role: inv.role, inviterName: inv.inviter?.name ?? null, expiresAt: inv.expiresAt.toISOString() };
+    const body: InvitationPreview = {
+      email: inv.email,
+      role: inv.role,
+      inviterName: inv.inviter?.name ?? null,
+      expiresAt: inv.expiresAt.toISOString(),
+    };
     res.set('Cache-Control', 'no-store').json(body);
   }),
 );

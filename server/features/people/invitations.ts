@@ -20,12 +20,31 @@ async function mailInvitation(inv: Invitation, token: string, inviterName: strin
     await sendMail(invitationMail({ to: inv.email, token, role: inv.role, inviterName, expiresAt: inv.expiresAt }));
   } catch (err) {
     const reason = err instanceof AppError ? err.message : 'the mail server refused it';
-    throw new AppError(502, 'mail_failed', `The invitation is saved but its e-mail was not sent (${reason}). Use “Resend” once mail works.`);
+    throw new AppError(
+      502,
+      'mail_failed',
+      `The invitation is saved but its e-mail was not sent (${reason}). Use “Resend” once mail works.`,
+    );
   }
 }
 
-const audit = (actorId: number | null, action: string, inv: Invitation, details: Record<string, unknown>, transaction?: Transaction) =>
-  AuditEntry.create({ actorId, action, subjectType: 'invitation', subjectId: String(inv.id), details: { email: inv.email, ...details } }, { transaction });
+const audit = (
+  actorId: number | null,
+  action: string,
+  inv: Invitation,
+  details: Record<string, unknown>,
+  transaction?: Transaction,
+) =>
+  AuditEntry.create(
+    {
+      actorId,
+      action,
+      subjectType: 'invitation',
+      subjectId: String(inv.id),
+      details: { email: inv.email, ...details },
+    },
+    { transaction },
+  );
 
 /** Invites an address with a role and e-mails the link; refuses an address that already has an account or an open invitation. */
 export async function createInvitation(actor: SessionUser, input: InvitationCreate) {
@@ -33,10 +52,16 @@ export async function createInvitation(actor: SessionUser, input: InvitationCrea
   const open = await Invitation.findOne({
     where: { [Op.and]: [where(fn('lower', col('email')), input.email), { acceptedAt: null, revokedAt: null }] },
   });
-  if (open) throw new ConflictError('An invitation to this address is already open: resend or revoke it.', { invitationId: open.id });
+  if (open)
+    throw new ConflictError('An invitation to this address is already open: resend or revoke it.', {
+      invitationId: open.id,
+    });
   const { token, hash } = newToken();
   const inv = await sequelize.transaction(async (transaction) => {
-    const created = await Invitation.create({ email: input.email, role: input.role, tokenHash: hash, invitedBy: actor.id, expiresAt: expiry() }, { transaction });
+    const created = await Invitation.create(
+      { email: input.email, role: input.role, tokenHash: hash, invitedBy: actor.id, expiresAt: expiry() },
+      { transaction },
+    );
     await audit(actor.id, 'invitation.create', created, { role: input.role }, transaction);
     return created;
   });
@@ -57,7 +82,10 @@ export async function resendInvitation(actor: SessionUser, id: number) {
   const { token, hash } = newToken();
   const inv = await sequelize.transaction(async (transaction) => {
     const found = await openInvitation(id, transaction);
-    await found.update({ tokenHash: hash, expiresAt: expiry(), sentCount: found.sentCount + 1, lastSentAt: new Date() }, { transaction });
+    await found.update(
+      { tokenHash: hash, expiresAt: expiry(), sentCount: found.sentCount + 1, lastSentAt: new Date() },
+      { transaction },
+    );
     await audit(actor.id, 'invitation.resend', found, { sentCount: found.sentCount }, transaction);
     return found;
   });
@@ -89,10 +117,22 @@ export async function usableInvitation(token: string, transaction?: Transaction)
   const inv = transaction
     ? await Invitation.findOne({ where, transaction, lock: transaction.LOCK.UPDATE })
     : await Invitation.findOne({ where, ...withInviter });
-  if (!inv) throw new AppError(404, 'invitation_invalid', 'This invitation link is not valid. Ask your group’s admin for a new one.');
-  if (inv.acceptedAt) throw new AppError(410, 'invitation_used', 'This invitation has already been used. Sign in instead.');
-  if (inv.revokedAt) throw new AppError(410, 'invitation_revoked', 'This invitation was withdrawn. Ask your group’s admin if you still need access.');
-  if (inv.expiresAt <= new Date()) throw new AppError(410, 'invitation_expired', 'This invitation has expired. Ask your group’s admin to resend it.');
+  if (!inv)
+    throw new AppError(
+      404,
+      'invitation_invalid',
+      'This invitation link is not valid. Ask your group’s admin for a new one.',
+    );
+  if (inv.acceptedAt)
+    throw new AppError(410, 'invitation_used', 'This invitation has already been used. Sign in instead.');
+  if (inv.revokedAt)
+    throw new AppError(
+      410,
+      'invitation_revoked',
+      'This invitation was withdrawn. Ask your group’s admin if you still need access.',
+    );
+  if (inv.expiresAt <= new Date())
+    throw new AppError(410, 'invitation_expired', 'This invitation has expired. Ask your group’s admin to resend it.');
   return inv as Invitation & { inviter?: User | null };
 }
 
@@ -103,8 +143,12 @@ export async function acceptInvitation(token: string, input: InvitationAccept) {
   const passwordHash = await hashPassword(input.password);
   return sequelize.transaction(async (transaction) => {
     const inv = await usableInvitation(token, transaction);
-    if (await userByEmail(inv.email, transaction)) throw new ConflictError('Someone with this e-mail already has an account. Sign in instead.');
-    const user = await User.create({ email: inv.email, name: input.name, role: inv.role, passwordHash }, { transaction });
+    if (await userByEmail(inv.email, transaction))
+      throw new ConflictError('Someone with this e-mail already has an account. Sign in instead.');
+    const user = await User.create(
+      { email: inv.email, name: input.name, role: inv.role, passwordHash },
+      { transaction },
+    );
     await inv.update({ acceptedAt: new Date(), acceptedUserId: user.id }, { transaction });
     await audit(user.id, 'invitation.accept', inv, { userId: user.id, role: inv.role }, transaction);
     return user;

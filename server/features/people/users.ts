@@ -7,7 +7,12 @@ import type { SessionUser } from '../../../shared/schemas/auth';
 
 /** Everyone in the group, by name. Groups are tens to a few hundred people, so one page holds them all. */
 export function listUsers() {
-  return User.findAll({ order: [['name', 'ASC'], ['id', 'ASC']] });
+  return User.findAll({
+    order: [
+      ['name', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
 }
 
 export async function getUser(id: number) {
@@ -23,7 +28,11 @@ export async function getUser(id: number) {
  */
 export async function updateUser(actor: SessionUser, id: number, change: AdminUserUpdate) {
   return sequelize.transaction(async (transaction) => {
-    const admins = await User.findAll({ where: { role: 'admin', status: 'active' }, transaction, lock: transaction.LOCK.UPDATE });
+    const admins = await User.findAll({
+      where: { role: 'admin', status: 'active' },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     const user = await User.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!user) throw new NotFoundError('User');
     const isActiveAdmin = user.role === 'admin' && user.status === 'active';
@@ -46,7 +55,16 @@ export async function updateUser(actor: SessionUser, id: number, change: AdminUs
       audits.find((a) => a.action === 'user.disable')!.details.sessionsEnded = ended;
     }
     for (const a of audits) {
-      await AuditEntry.create({ actorId: actor.id, action: a.action, subjectType: 'user', subjectId: String(user.id), details: { email: user.email, ...a.details } }, { transaction });
+      await AuditEntry.create(
+        {
+          actorId: actor.id,
+          action: a.action,
+          subjectType: 'user',
+          subjectId: String(user.id),
+          details: { email: user.email, ...a.details },
+        },
+        { transaction },
+      );
     }
     return user;
   });

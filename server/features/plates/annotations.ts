@@ -7,7 +7,11 @@ import type { PhotoAnnotation, PlateAnnotation } from '../../../shared/schemas/p
 type Row = { photo_id: number; revision: number; annotation: PlateAnnotation; saved_by: string | null; saved_at: Date };
 
 const present = (row: Row): PhotoAnnotation => ({
-  photoId: row.photo_id, revision: row.revision, annotation: row.annotation, savedBy: row.saved_by, savedAt: new Date(row.saved_at).toISOString(),
+  photoId: row.photo_id,
+  revision: row.revision,
+  annotation: row.annotation,
+  savedBy: row.saved_by,
+  savedAt: new Date(row.saved_at).toISOString(),
 });
 
 const SELECT = `SELECT a.photo_id, a.revision, a.annotation, u.name AS saved_by, a.saved_at
@@ -26,7 +30,10 @@ async function photoOwner(photoId: number): Promise<{ authorId: number; uploaded
 /** The current annotation of a record photo (its newest revision); 404 when the photo has none. */
 export async function currentAnnotation(photoId: number): Promise<PhotoAnnotation> {
   await photoOwner(photoId);
-  const rows = await sequelize.query<Row>(`${SELECT} WHERE a.photo_id = :photoId ORDER BY a.revision DESC LIMIT 1`, { replacements: { photoId }, type: QueryTypes.SELECT });
+  const rows = await sequelize.query<Row>(`${SELECT} WHERE a.photo_id = :photoId ORDER BY a.revision DESC LIMIT 1`, {
+    replacements: { photoId },
+    type: QueryTypes.SELECT,
+  });
   if (rows.length === 0) throw new NotFoundError('Annotation');
   return present(rows[0]);
 }
@@ -34,7 +41,10 @@ export async function currentAnnotation(photoId: number): Promise<PhotoAnnotatio
 /** Every revision of a photo's annotation, newest first. */
 export async function annotationHistory(photoId: number): Promise<PhotoAnnotation[]> {
   await photoOwner(photoId);
-  const rows = await sequelize.query<Row>(`${SELECT} WHERE a.photo_id = :photoId ORDER BY a.revision DESC`, { replacements: { photoId }, type: QueryTypes.SELECT });
+  const rows = await sequelize.query<Row>(`${SELECT} WHERE a.photo_id = :photoId ORDER BY a.revision DESC`, {
+    replacements: { photoId },
+    type: QueryTypes.SELECT,
+  });
   return rows.map(present);
 }
 
@@ -42,15 +52,28 @@ export async function annotationHistory(photoId: number): Promise<PhotoAnnotatio
  * Saves a new revision of a photo's annotation (the record's author, the photo's uploader, a curator or an admin,
  * as for the photo itself); earlier revisions stay.
  */
-export async function saveAnnotation(photoId: number, annotation: PlateAnnotation, user: SessionUser): Promise<PhotoAnnotation> {
+export async function saveAnnotation(
+  photoId: number,
+  annotation: PlateAnnotation,
+  user: SessionUser,
+): Promise<PhotoAnnotation> {
   const owner = await photoOwner(photoId);
-  const allowed = roleAtLeast(user.role, 'curator') || (user.role === 'member' && (owner.authorId === user.id || owner.uploadedBy === user.id));
-  if (!allowed) throw new ForbiddenError('Only the record’s author, the photo’s uploader, a curator or an admin may mark this photo.');
+  const allowed =
+    roleAtLeast(user.role, 'curator') ||
+    (user.role === 'member' && (owner.authorId === user.id || owner.uploadedBy === user.id));
+  if (!allowed)
+    throw new ForbiddenError(
+      'Only the record’s author, the photo’s uploader, a curator or an admin may mark this photo.',
+    );
   await sequelize.transaction(async (transaction) => {
-    await sequelize.query('SELECT id FROM record_photos WHERE id = :photoId FOR UPDATE', { replacements: { photoId }, transaction });
+    await sequelize.query('SELECT id FROM record_photos WHERE id = :photoId FOR UPDATE', {
+      replacements: { photoId },
+      transaction,
+    });
     await sequelize.query(
       `INSERT INTO photo_annotations (photo_id, revision, annotation, saved_by)
-       SELECT :photoId, COALESCE(MAX(revision), 0) + 1, CAST(:annotation AS jsonb), :userId FROM photo_annotations WHERE photo_id = :photoId`,
+       SELECT :photoId, COALESCE(MAX(revision), 0) + 1, CAST(:annotation AS jsonb), :userId FROM photo_annotations
+         WHERE photo_id = :photoId`,
       { replacements: { photoId, annotation: JSON.stringify(annotation), userId: user.id }, transaction },
     );
   });

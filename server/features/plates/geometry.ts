@@ -86,11 +86,19 @@ export function minAreaRectangleAngle(hull: Point[]): { angle: number; area: num
     let angle = Math.atan2(y1 - y0, x1 - x0);
     while (angle > Math.PI / 4) angle -= Math.PI / 2;
     while (angle <= -Math.PI / 4) angle += Math.PI / 2;
-    const c = Math.cos(angle), s = Math.sin(angle);
-    let minU = Infinity, maxU = -Infinity, minV = Infinity, maxV = -Infinity;
+    const c = Math.cos(angle),
+      s = Math.sin(angle);
+    let minU = Infinity,
+      maxU = -Infinity,
+      minV = Infinity,
+      maxV = -Infinity;
     for (const [x, y] of hull) {
-      const u = c * x + s * y, v = -s * x + c * y;
-      minU = Math.min(minU, u); maxU = Math.max(maxU, u); minV = Math.min(minV, v); maxV = Math.max(maxV, v);
+      const u = c * x + s * y,
+        v = -s * x + c * y;
+      minU = Math.min(minU, u);
+      maxU = Math.max(maxU, u);
+      minV = Math.min(minV, v);
+      maxV = Math.max(maxV, v);
     }
     const area = (maxU - minU) * (maxV - minV);
     if (area < best.area) best = { angle, area };
@@ -104,14 +112,25 @@ export function minAreaRectangleAngle(hull: Point[]): { angle: number; area: num
  * outward normals for any rectangle and stays there under a slight perspective.
  */
 export function quadCorners(hull: Point[], angle: number): Point[] {
-  const c = Math.cos(angle), s = Math.sin(angle);
-  const directions: Point[] = [[-1, -1], [1, -1], [1, 1], [-1, 1]];
+  const c = Math.cos(angle),
+    s = Math.sin(angle);
+  const directions: Point[] = [
+    [-1, -1],
+    [1, -1],
+    [1, 1],
+    [-1, 1],
+  ];
   return directions.map(([du, dv]) => {
-    let best = hull[0], bestScore = -Infinity;
+    let best = hull[0],
+      bestScore = -Infinity;
     for (const p of hull) {
-      const u = c * p[0] + s * p[1], v = -s * p[0] + c * p[1];
+      const u = c * p[0] + s * p[1],
+        v = -s * p[0] + c * p[1];
       const score = du * u + dv * v;
-      if (score > bestScore) { bestScore = score; best = p; }
+      if (score > bestScore) {
+        bestScore = score;
+        best = p;
+      }
     }
     return best;
   });

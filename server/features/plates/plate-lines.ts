@@ -55,13 +55,20 @@ export function findLines(departure: FloatMap): { origin: FrameLine | null; fron
     if (at < 0 || both[at] < needed) return null;
     const ends = profiles.map((profile) => {
       let peak = at;
-      for (let y = Math.max(k, at - 2 * k); y <= Math.min(height - k - 1, at + 2 * k); y++) if (profile[y] > profile[peak]) peak = y;
-      const a = profile[peak - 1] ?? 0, b = profile[peak], c = profile[peak + 1] ?? 0;
+      for (let y = Math.max(k, at - 2 * k); y <= Math.min(height - k - 1, at + 2 * k); y++)
+        if (profile[y] > profile[peak]) peak = y;
+      const a = profile[peak - 1] ?? 0,
+        b = profile[peak],
+        c = profile[peak + 1] ?? 0;
       const curvature = a - 2 * b + c;
       return peak + (curvature < 0 ? (0.5 * (a - c)) / curvature : 0);
     });
     const slope = (ends[1] - ends[0]) / (strips0[1] - strips0[0]);
-    return { left: ends[0] - slope * strips0[0], right: ends[0] + slope * (width - strips0[0]), strength: both[at] / needed };
+    return {
+      left: ends[0] - slope * strips0[0],
+      right: ends[0] + slope * (width - strips0[0]),
+      strength: both[at] / needed,
+    };
   };
   return {
     front: best(Math.max(Math.round(height * 0.02), 3 * k), Math.round(height * 0.45)),

@@ -3,20 +3,41 @@ import { components, fillHoles, morph, peaks, type FloatMap, type Mask } from '.
 
 /** A mark found in the plate frame: its centre, size and strength; a streak also has its top and bottom. */
 export type FrameSpot = {
-  lane: number; x: number; y: number; radius: number; intensity: number; kind: 'spot' | 'circle' | 'streak';
-  top?: number; bottom?: number; confidence: number;
+  lane: number;
+  x: number;
+  y: number;
+  radius: number;
+  intensity: number;
+  kind: 'spot' | 'circle' | 'streak';
+  top?: number;
+  bottom?: number;
+  confidence: number;
 };
 
 type Part = { pixels: number[]; weight: (i: number) => number; circle: boolean };
 
 /** Weighted centre, extent and strength of some pixels of the frame. */
 function describe(pixels: number[], weight: (i: number) => number, width: number, data: Float32Array) {
-  let sum = 0, sx = 0, sy = 0, peak = 0, minY = Infinity, maxY = -Infinity, minX = Infinity, maxX = -Infinity;
+  let sum = 0,
+    sx = 0,
+    sy = 0,
+    peak = 0,
+    minY = Infinity,
+    maxY = -Infinity,
+    minX = Infinity,
+    maxX = -Infinity;
   for (const i of pixels) {
-    const x = i % width, y = (i - x) / width, w = weight(i);
-    sum += w; sx += w * (x + 0.5); sy += w * (y + 0.5);
+    const x = i % width,
+      y = (i - x) / width,
+      w = weight(i);
+    sum += w;
+    sx += w * (x + 0.5);
+    sy += w * (y + 0.5);
     peak = Math.max(peak, data[i]);
-    minY = Math.min(minY, y); maxY = Math.max(maxY, y); minX = Math.min(minX, x); maxX = Math.max(maxX, x);
+    minY = Math.min(minY, y);
+    maxY = Math.max(maxY, y);
+    minX = Math.min(minX, x);
+    maxX = Math.max(maxX, x);
   }
   return { x: sx / (sum || 1), y: sy / (sum || 1), peak, minY, maxY, minX, maxX, weight: sum };
 }
@@ -24,16 +45,21 @@ function describe(pixels: number[], weight: (i: number) => number, width: number
 /** Splits a part into vertical pieces where its row profile dips between two clear peaks (two spots touching). */
 function splitRows(part: Part, width: number, pitch: number): Part[] {
   const rows = new Map<number, number>();
-  let minY = Infinity, maxY = -Infinity;
+  let minY = Infinity,
+    maxY = -Infinity;
   for (const i of part.pixels) {
     const y = Math.floor(i / width);
     rows.set(y, (rows.get(y) ?? 0) + part.weight(i));
-    minY = Math.min(minY, y); maxY = Math.max(maxY, y);
+    minY = Math.min(minY, y);
+    maxY = Math.max(maxY, y);
   }
   const profile = Float64Array.from({ length: maxY - minY + 1 }, (_, k) => rows.get(minY + k) ?? 0);
   const found = peaks(profile).filter((peak) => peak.prominence > 0.3 * Math.max(...profile));
   if (found.length < 2) return [part];
-  const ordered = found.slice(0, 4).map((peak) => peak.index).sort((a, b) => a - b);
+  const ordered = found
+    .slice(0, 4)
+    .map((peak) => peak.index)
+    .sort((a, b) => a - b);
   const cuts: number[] = [];
   for (let j = 1; j < ordered.length; j++) {
     if (ordered[j] - ordered[j - 1] < pitch) continue;
@@ -62,18 +88,27 @@ export type InkMasks = { ink: Mask; closed: Mask; filled: Mask; x0: number; top:
 
 export function inkMasks(departure: FloatMap, band: ReadingBand): InkMasks | null {
   const { width, data } = departure;
-  const top = Math.max(0, band.top), bottom = Math.min(departure.height, band.bottom);
-  const subWidth = band.x1 - band.x0, subHeight = bottom - top;
+  const top = Math.max(0, band.top),
+    bottom = Math.min(departure.height, band.bottom);
+  const subWidth = band.x1 - band.x0,
+    subHeight = bottom - top;
   if (subWidth < 4 || subHeight < 4) return null;
   const ink: Mask = { width: subWidth, height: subHeight, data: new Uint8Array(subWidth * subHeight) };
   for (let sy = 0; sy < subHeight; sy++) {
-    for (let sx = 0; sx < subWidth; sx++) ink.data[sy * subWidth + sx] = data[(sy + top) * width + sx + band.x0] > band.threshold ? 1 : 0;
+    for (let sx = 0; sx < subWidth; sx++)
+      ink.data[sy * subWidth + sx] = data[(sy + top) * width + sx + band.x0] > band.threshold ? 1 : 0;
   }
   const closed = morph(morph(ink, 1, true), 1, false);
   return { ink, closed, filled: fillHoles(closed), x0: band.x0, top };
 }
 
-export function findSpots(departure: FloatMap, band: ReadingBand, masks: InkMasks, lanes: number[], run: number): FrameSpot[] {
+export function findSpots(
+  departure: FloatMap,
+  band: ReadingBand,
+  masks: InkMasks,
+  lanes: number[],
+  run: number,
+): FrameSpot[] {
   const { width, data } = departure;
   const { closed, filled, x0, top } = masks;
   if (lanes.length === 0) return [];
@@ -104,10 +139,15 @@ export function findSpots(departure: FloatMap, band: ReadingBand, masks: InkMask
       for (const part of splitRows({ pixels: lanePixels, weight, circle }, width, run * 0.05)) {
         const shape = describe(part.pixels, weight, width, data);
         if (shape.peak < band.strong || part.pixels.length < minArea * 0.6) continue;
-        const tall = shape.maxY - shape.minY + 1, wide = shape.maxX - shape.minX + 1;
+        const tall = shape.maxY - shape.minY + 1,
+          wide = shape.maxX - shape.minX + 1;
         const streak = !circle && tall > 2.3 * wide && tall > run * 0.12;
         spots.push({
-          lane, x: shape.x, y: shape.y, radius: Math.sqrt(part.pixels.length / Math.PI), intensity: shape.peak,
+          lane,
+          x: shape.x,
+          y: shape.y,
+          radius: Math.sqrt(part.pixels.length / Math.PI),
+          intensity: shape.peak,
           kind: circle ? 'circle' : streak ? 'streak' : 'spot',
           ...(streak ? { top: shape.minY, bottom: shape.maxY + 1 } : {}),
           confidence: Math.min(1, (shape.peak - band.threshold) / (band.strong - band.threshold + 1e-6) / 2),

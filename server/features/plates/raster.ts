@@ -35,22 +35,37 @@ export function boxBlur(map: FloatMap, radius: number): FloatMap {
 
 /** Otsu's threshold on the values of a map (256 bins between its minimum and maximum). */
 export function otsuThreshold(values: Float32Array): number {
-  let min = Infinity, max = -Infinity;
-  for (const value of values) { if (value < min) min = value; if (value > max) max = value; }
+  let min = Infinity,
+    max = -Infinity;
+  for (const value of values) {
+    if (value < min) min = value;
+    if (value > max) max = value;
+  }
   if (!(max > min)) return max;
   const bins = new Float64Array(256);
   const scale = 255 / (max - min);
   for (const value of values) bins[Math.round((value - min) * scale)]++;
-  let total = 0, sumAll = 0;
-  for (let i = 0; i < 256; i++) { total += bins[i]; sumAll += i * bins[i]; }
-  let weightLow = 0, sumLow = 0, best = 0, bestVariance = -1;
+  let total = 0,
+    sumAll = 0;
+  for (let i = 0; i < 256; i++) {
+    total += bins[i];
+    sumAll += i * bins[i];
+  }
+  let weightLow = 0,
+    sumLow = 0,
+    best = 0,
+    bestVariance = -1;
   for (let i = 0; i < 256; i++) {
     weightLow += bins[i];
     if (weightLow === 0 || weightLow === total) continue;
     sumLow += i * bins[i];
-    const meanLow = sumLow / weightLow, meanHigh = (sumAll - sumLow) / (total - weightLow);
+    const meanLow = sumLow / weightLow,
+      meanHigh = (sumAll - sumLow) / (total - weightLow);
     const variance = weightLow * (total - weightLow) * (meanLow - meanHigh) ** 2;
-    if (variance > bestVariance) { bestVariance = variance; best = i; }
+    if (variance > bestVariance) {
+      bestVariance = variance;
+      best = i;
+    }
   }
   return min + (best + 0.5) / scale;
 }
@@ -64,14 +79,22 @@ export function morph(mask: Mask, radius: number, grow: boolean): Mask {
   for (let y = 0; y < height; y++) {
     for (let x = 0; x < width; x++) {
       let value = 1 - hit;
-      for (let k = Math.max(0, x - radius); k <= Math.min(width - 1, x + radius); k++) if (mask.data[y * width + k] === hit) { value = hit; break; }
+      for (let k = Math.max(0, x - radius); k <= Math.min(width - 1, x + radius); k++)
+        if (mask.data[y * width + k] === hit) {
+          value = hit;
+          break;
+        }
       horizontal[y * width + x] = value;
     }
   }
   for (let x = 0; x < width; x++) {
     for (let y = 0; y < height; y++) {
       let value = 1 - hit;
-      for (let k = Math.max(0, y - radius); k <= Math.min(height - 1, y + radius); k++) if (horizontal[k * width + x] === hit) { value = hit; break; }
+      for (let k = Math.max(0, y - radius); k <= Math.min(height - 1, y + radius); k++)
+        if (horizontal[k * width + x] === hit) {
+          value = hit;
+          break;
+        }
       out[y * width + x] = value;
     }
   }
@@ -83,10 +106,22 @@ export function fillHoles(mask: Mask): Mask {
   const { width, height } = mask;
   const outside = new Uint8Array(width * height);
   const queue = new Int32Array(width * height);
-  let head = 0, tail = 0;
-  const seed = (i: number) => { if (!mask.data[i] && !outside[i]) { outside[i] = 1; queue[tail++] = i; } };
-  for (let x = 0; x < width; x++) { seed(x); seed((height - 1) * width + x); }
-  for (let y = 0; y < height; y++) { seed(y * width); seed(y * width + width - 1); }
+  let head = 0,
+    tail = 0;
+  const seed = (i: number) => {
+    if (!mask.data[i] && !outside[i]) {
+      outside[i] = 1;
+      queue[tail++] = i;
+    }
+  };
+  for (let x = 0; x < width; x++) {
+    seed(x);
+    seed((height - 1) * width + x);
+  }
+  for (let y = 0; y < height; y++) {
+    seed(y * width);
+    seed(y * width + width - 1);
+  }
   while (head < tail) {
     const i = queue[head++];
     const x = i % width;
@@ -100,7 +135,15 @@ export function fillHoles(mask: Mask): Mask {
   return { width, height, data: out };
 }
 
-export type Component = { label: number; area: number; minX: number; maxX: number; minY: number; maxY: number; pixels: Int32Array };
+export type Component = {
+  label: number;
+  area: number;
+  minX: number;
+  maxX: number;
+  minY: number;
+  maxY: number;
+  pixels: Int32Array;
+};
 
 /** Connected components (4-neighbours) of a mask, each with its pixel indices and bounding box. */
 export function components(mask: Mask, minArea = 1): Component[] {
@@ -112,15 +155,28 @@ export function components(mask: Mask, minArea = 1): Component[] {
   for (let start = 0; start < labels.length; start++) {
     if (!mask.data[start] || labels[start]) continue;
     next++;
-    let head = 0, tail = 0;
+    let head = 0,
+      tail = 0;
     queue[tail++] = start;
     labels[start] = next;
-    let minX = width, maxX = 0, minY = height, maxY = 0;
+    let minX = width,
+      maxX = 0,
+      minY = height,
+      maxY = 0;
     while (head < tail) {
       const i = queue[head++];
-      const x = i % width, y = (i - x) / width;
-      if (x < minX) minX = x; if (x > maxX) maxX = x; if (y < minY) minY = y; if (y > maxY) maxY = y;
-      const visit = (j: number) => { if (mask.data[j] && !labels[j]) { labels[j] = next; queue[tail++] = j; } };
+      const x = i % width,
+        y = (i - x) / width;
+      if (x < minX) minX = x;
+      if (x > maxX) maxX = x;
+      if (y < minY) minY = y;
+      if (y > maxY) maxY = y;
+      const visit = (j: number) => {
+        if (mask.data[j] && !labels[j]) {
+          labels[j] = next;
+          queue[tail++] = j;
+        }
+      };
       if (x > 0) visit(i - 1);
       if (x < width - 1) visit(i + 1);
       if (y > 0) visit(i - width);
@@ -146,7 +202,8 @@ export function peaks(profile: ArrayLike<number>): { index: number; value: numbe
   for (let i = 0; i < n; i++) {
     const value = profile[i];
     if ((i > 0 && profile[i - 1] >= value) || (i < n - 1 && profile[i + 1] > value)) continue;
-    let leftMin = value, rightMin = value;
+    let leftMin = value,
+      rightMin = value;
     let j = i - 1;
     for (; j >= 0 && profile[j] <= value; j--) leftMin = Math.min(leftMin, profile[j]);
     let k = i + 1;

@@ -15,7 +15,13 @@ const FIND_SIDE_PX = 560;
 
 export type ReadOutcome =
   | { ok: true; reading: PlateReading }
-  | { ok: false; missing: 'plate' | 'origin' | 'front' | 'origin and front'; message: string; width: number; height: number };
+  | {
+      ok: false;
+      missing: 'plate' | 'origin' | 'front' | 'origin and front';
+      message: string;
+      width: number;
+      height: number;
+    };
 
 const round = (value: number, digits = 1) => Number(value.toFixed(digits));
 
@@ -24,7 +30,10 @@ export async function decodePhoto(bytes: Buffer): Promise<{ image: RgbImage; wid
   const oriented = sharp(bytes, { failOn: 'error' }).rotate();
   const { data, info } = await oriented
     .resize({ width: READ_SIDE_PX, height: READ_SIDE_PX, fit: 'inside', withoutEnlargement: true })
-    .removeAlpha().toColourspace('srgb').raw().toBuffer({ resolveWithObject: true });
+    .removeAlpha()
+    .toColourspace('srgb')
+    .raw()
+    .toBuffer({ resolveWithObject: true });
   const metadata = await sharp(bytes).metadata();
   const turned = (metadata.orientation ?? 1) >= 5;
   const width = (turned ? metadata.height : metadata.width) ?? info.width;
@@ -35,7 +44,9 @@ export async function decodePhoto(bytes: Buffer): Promise<{ image: RgbImage; wid
 async function reduce(image: RgbImage, side: number): Promise<RgbImage> {
   if (Math.max(image.width, image.height) <= side) return image;
   const { data, info } = await sharp(image.data, { raw: { width: image.width, height: image.height, channels: 3 } })
-    .resize({ width: side, height: side, fit: 'inside' }).raw().toBuffer({ resolveWithObject: true });
+    .resize({ width: side, height: side, fit: 'inside' })
+    .raw()
+    .toBuffer({ resolveWithObject: true });
   return { width: info.width, height: info.height, data };
 }
 
@@ -51,12 +62,25 @@ export async function readPlates(bytes: Buffer): Promise<ReadOutcome> {
   const toDisplay = width / image.width;
   const found = findPlates(small);
   if (found.length === 0) {
-    return { ok: false, missing: 'plate', width, height, message: 'No TLC plate was found in the photo: photograph the plate on a plain, contrasting surface, whole and filling much of the frame.' };
+    return {
+      ok: false,
+      missing: 'plate',
+      width,
+      height,
+      message:
+        'No TLC plate was found in the photo: photograph the plate on a plain, contrasting surface, whole and filling much of the frame.',
+    };
   }
   const plates: PlateReading['plates'] = [];
   const misses: string[] = [];
   for (const plate of found) {
-    const frame = straighten(image, refineCorners(image, plate.corners.map(([x, y]) => [x * toRead, y * toRead] as Point)));
+    const frame = straighten(
+      image,
+      refineCorners(
+        image,
+        plate.corners.map(([x, y]) => [x * toRead, y * toRead] as Point),
+      ),
+    );
     if (!frame) continue;
     const map = departure(frame);
     const { origin, front } = findLines(map);
@@ -74,7 +98,8 @@ export async function readPlates(bytes: Buffer): Promise<ReadOutcome> {
     const run = (origin.left + origin.right - front.left - front.right) / 2;
     const spots = masks ? findSpots(map, band, masks, laneXs, run) : [];
     const rfAt = (x: number, y: number) => {
-      const o = lineAt(origin, x, frame.width), f = lineAt(front, x, frame.width);
+      const o = lineAt(origin, x, frame.width),
+        f = lineAt(front, x, frame.width);
       return (o - y) / (o - f);
     };
     plates.push({
@@ -82,23 +107,64 @@ export async function readPlates(bytes: Buffer): Promise<ReadOutcome> {
       origin: [display(0, origin.left), display(frame.width, origin.right)],
       front: [display(0, front.left), display(frame.width, front.right)],
       lanes: laneXs.map((laneX, index) => {
-        const laneSpots: PlateReadSpot[] = spots.filter((spot) => spot.lane === index).map((spot) => {
-          const [x, y] = display(spot.x, spot.y);
-          const streakEnds = spot.kind === 'streak' && spot.top !== undefined && spot.bottom !== undefined
-            ? { rfLow: round(rfAt(spot.x, spot.bottom), 3), rfHigh: round(rfAt(spot.x, spot.top), 3) } : {};
-          return {
-            x, y, rf: round(rfAt(spot.x, spot.y), 3), kind: spot.kind, ...streakEnds,
-            size: round((spot.radius * 2 * Math.hypot(frame.toPhoto[0], frame.toPhoto[3])) * toDisplay),
-            intensity: round(spot.intensity), confidence: round(spot.confidence, 2),
-          };
-        });
-        return { x: display(laneX, lineAt(origin, laneX, frame.width))[0], spots: laneSpots.sort((a, b) => a.rf - b.rf) };
+        const laneSpots: PlateReadSpot[] = spots
+          .filter((spot) => spot.lane === index)
+          .map((spot) => {
+            const [x, y] = display(spot.x, spot.y);
+            const streakEnds =
+              spot.kind === 'streak' && spot.top !== undefined && spot.bottom !== undefined
+                ? { rfLow: round(rfAt(spot.x, spot.bottom), 3), rfHigh: round(rfAt(spot.x, spot.top), 3) }
+                : {};
+            return {
+              x,
+              y,
+              rf: round(rfAt(spot.x, spot.y), 3),
+              kind: spot.kind,
+              ...streakEnds,
+              size: round(spot.radius * 2 * Math.hypot(frame.toPhoto[0], frame.toPhoto[3]) * toDisplay),
+              intensity: round(spot.intensity),
+              confidence: round(spot.confidence, 2),
+            };
+          });
+        return {
+          x: display(laneX, lineAt(origin, laneX, frame.width))[0],
+          spots: laneSpots.sort((a, b) => a.rf - b.rf),
+        };
       }),
     });
   }
   if (plates.length === 0) {
-    const which = misses.includes('origin and front') || (misses.includes('origin') && misses.includes('front')) ? 'origin and front' : misses[0] === 'origin' ? 'origin' : 'front';
-    return { ok: false, missing: which, width, height, message: `A plate was found but its ${which === 'origin and front' ? 'origin and solvent front were' : which === 'origin' ? 'origin (pencil start line) was' : 'solvent front was'} not: draw the line, or at least a tick at both edges, in pencil and photograph again.` };
+    const missingWords = {
+      'origin and front': 'origin and solvent front were',
+      origin: 'origin (pencil start line) was',
+      front: 'solvent front was',
+    } as const;
+    const which =
+      misses.includes('origin and front') || (misses.includes('origin') && misses.includes('front'))
+        ? 'origin and front'
+        : misses[0] === 'origin'
+          ? 'origin'
+          : 'front';
+    return {
+      ok: false,
+      missing: which,
+      width,
+      height,
+      message:
+        `A plate was found but its ` +
+        `${missingWords[which]} ` +
+        `not: draw the line, or at least a tick at both edges, in pencil and photograph again.`,
+    };
   }
-  return { ok: true, reading: { width, height, plates, ...(misses.length ? { warnings: misses.map((what) => `One plate was skipped: its ${what} could not be found.`) } : {}) } };
+  return {
+    ok: true,
+    reading: {
+      width,
+      height,
+      plates,
+      ...(misses.length
+        ? { warnings: misses.map((what) => `One plate was skipped: its ${what} could not be found.`) }
+        : {}),
+    },
+  };
 }

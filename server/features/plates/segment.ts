@@ -1,5 +1,15 @@
 import { convexHull, minAreaRectangleAngle, polygonArea, quadCorners, type Point } from './geometry';
-import { boxBlur, components, fillHoles, floatMap, median, morph, otsuThreshold, type FloatMap, type Mask } from './raster';
+import {
+  boxBlur,
+  components,
+  fillHoles,
+  floatMap,
+  median,
+  morph,
+  otsuThreshold,
+  type FloatMap,
+  type Mask,
+} from './raster';
 
 /** An RGB image, 3 bytes a pixel, row by row. */
 export type RgbImage = { width: number; height: number; data: Uint8Array | Buffer };
@@ -27,7 +37,9 @@ export function findPlates(image: RgbImage): FoundPlate[] {
   const bench = border.map((values) => median(values));
   const distance = floatMap(width, height);
   for (let i = 0; i < width * height; i++) {
-    const r = data[i * 3] - bench[0], g = data[i * 3 + 1] - bench[1], b = data[i * 3 + 2] - bench[2];
+    const r = data[i * 3] - bench[0],
+      g = data[i * 3 + 1] - bench[1],
+      b = data[i * 3 + 2] - bench[2];
     distance.data[i] = Math.sqrt(r * r + g * g + b * b);
   }
   const byColour = platesIn(boxBlur(boxBlur(distance, 1), 1), 12);
@@ -41,18 +53,22 @@ export function findPlates(image: RgbImage): FoundPlate[] {
  */
 function smoothness(image: RgbImage, ring: number): FloatMap {
   const { width, height, data } = image;
-  const luma = floatMap(width, height), square = floatMap(width, height);
+  const luma = floatMap(width, height),
+    square = floatMap(width, height);
   for (let i = 0; i < width * height; i++) {
     luma.data[i] = 0.299 * data[i * 3] + 0.587 * data[i * 3 + 1] + 0.114 * data[i * 3 + 2];
     square.data[i] = luma.data[i] ** 2;
   }
-  const mean = boxBlur(luma, 2), meanSquare = boxBlur(square, 2);
+  const mean = boxBlur(luma, 2),
+    meanSquare = boxBlur(square, 2);
   const texture = floatMap(width, height);
-  for (let i = 0; i < width * height; i++) texture.data[i] = Math.sqrt(Math.max(0, meanSquare.data[i] - mean.data[i] ** 2));
+  for (let i = 0; i < width * height; i++)
+    texture.data[i] = Math.sqrt(Math.max(0, meanSquare.data[i] - mean.data[i] ** 2));
   const rim: number[] = [];
-  for (let y = 0; y < height; y++) for (let x = 0; x < width; x++) {
-    if (x < ring || y < ring || x >= width - ring || y >= height - ring) rim.push(texture.data[y * width + x]);
-  }
+  for (let y = 0; y < height; y++)
+    for (let x = 0; x < width; x++) {
+      if (x < ring || y < ring || x >= width - ring || y >= height - ring) rim.push(texture.data[y * width + x]);
+    }
   const rimTexture = median(rim);
   const smooth = boxBlur(boxBlur(texture, 3), 3);
   for (let i = 0; i < width * height; i++) smooth.data[i] = Math.max(0, rimTexture - smooth.data[i]);
@@ -72,18 +88,27 @@ function platesIn(smooth: FloatMap, floor: number): FoundPlate[] {
   const kept: FoundPlate[] = [];
   for (const candidate of candidates) {
     const [cx, cy] = centreOf(candidate.corners);
-    if (kept.some((plate) => insideQuad(plate.corners, cx, cy) || insideQuad(candidate.corners, ...centreOf(plate.corners)))) continue;
+    if (
+      kept.some(
+        (plate) => insideQuad(plate.corners, cx, cy) || insideQuad(candidate.corners, ...centreOf(plate.corners)),
+      )
+    )
+      continue;
     kept.push(candidate);
   }
   return kept.sort((a, b) => a.corners[0][0] + a.corners[3][0] - b.corners[0][0] - b.corners[3][0]);
 }
 
-const centreOf = (corners: Point[]): [number, number] => [corners.reduce((s, p) => s + p[0], 0) / 4, corners.reduce((s, p) => s + p[1], 0) / 4];
+const centreOf = (corners: Point[]): [number, number] => [
+  corners.reduce((s, p) => s + p[0], 0) / 4,
+  corners.reduce((s, p) => s + p[1], 0) / 4,
+];
 
 function insideQuad(corners: Point[], x: number, y: number): boolean {
   let sign = 0;
   for (let i = 0; i < 4; i++) {
-    const [x0, y0] = corners[i], [x1, y1] = corners[(i + 1) % 4];
+    const [x0, y0] = corners[i],
+      [x1, y1] = corners[(i + 1) % 4];
     const cross = Math.sign((x1 - x0) * (y - y0) - (y1 - y0) * (x - x0));
     if (cross !== 0 && sign !== 0 && cross !== sign) return false;
     if (cross !== 0) sign = cross;
@@ -103,7 +128,8 @@ function platesAt(smooth: FloatMap, threshold: number): FoundPlate[] {
     if (blob.minX === 0 || blob.minY === 0 || blob.maxX === width - 1 || blob.maxY === height - 1) continue;
     const edge: Point[] = [];
     for (const i of blob.pixels) {
-      const x = i % width, y = (i - x) / width;
+      const x = i % width,
+        y = (i - x) / width;
       const inside = opened.data[i - 1] && opened.data[i + 1] && opened.data[i - width] && opened.data[i + width];
       if (!inside) edge.push([x + 0.5, y + 0.5]);
     }

@@ -13,7 +13,8 @@ export async function readPhotoPlates(bytes: Buffer): Promise<ReadOutcome> {
   try {
     return await readPlates(bytes);
   } catch (error) {
-    const undecodable = error instanceof Error && /vips|decode|corrupt|premature|truncat|marker|input/i.test(error.message);
+    const undecodable =
+      error instanceof Error && /vips|decode|corrupt|premature|truncat|marker|input/i.test(error.message);
     if (!undecodable) logger.error({ err: error }, 'plate reading failed');
     throw new UnprocessableError(
       undecodable

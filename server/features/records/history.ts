@@ -8,7 +8,10 @@ export async function recordHistory(recordId: number): Promise<RecordHistory> {
   const revisions = (await RecordRevision.findAll({
     where: { recordId },
     include: [{ model: User, as: 'author', attributes: ['id', 'name'] }],
-    order: [['number', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['number', 'DESC'],
+      ['id', 'DESC'],
+    ],
   })) as (RecordRevision & { author: User | null })[];
   return {
     recordId,

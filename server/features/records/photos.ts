@@ -17,18 +17,30 @@ export const THUMB_SIZE_PX = 320;
 /** The thumbnail; an image whose header reads but whose pixels do not (truncated, damaged) is refused with 422. */
 async function thumbnail(bytes: Buffer, contentType: PhotoContentType): Promise<Buffer> {
   try {
-    return await sharp(bytes).rotate().resize({ width: THUMB_SIZE_PX, height: THUMB_SIZE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
+    return await sharp(bytes)
+      .rotate()
+      .resize({ width: THUMB_SIZE_PX, height: THUMB_SIZE_PX, fit: 'inside', withoutEnlargement: true })
+      .webp({ quality: 78 })
+      .toBuffer();
   } catch {
-    throw new UnprocessableError(`The file starts like ${contentType} but its image data cannot be decoded (truncated or damaged); upload the photo again.`);
+    throw new UnprocessableError(
+      `The file starts like ${contentType} but its image data cannot be decoded (truncated or damaged); upload the photo again.`,
+    );
   }
 }
 
 /** Adds a plate photo to a record (author, curator or admin): stores the bytes and a thumbnail, and a revision. */
-export async function addPhoto(recordId: number, file: { buffer: Buffer; originalname?: string }, user: SessionUser): Promise<RecordPhoto> {
+export async function addPhoto(
+  recordId: number,
+  file: { buffer: Buffer; originalname?: string },
+  user: SessionUser,
+): Promise<RecordPhoto> {
   const record = await ConditionRecord.findByPk(recordId);
   if (!record) throw new NotFoundError('Record');
-  if (!canEditRecord(user, record)) throw new ForbiddenError('Only the record’s author, a curator or an admin may add photos.');
-  if (record.status === 'merged') throw new ConflictError(`This record was merged into record ${record.mergedIntoId}; add the photo there.`);
+  if (!canEditRecord(user, record))
+    throw new ForbiddenError('Only the record’s author, a curator or an admin may add photos.');
+  if (record.status === 'merged')
+    throw new ConflictError(`This record was merged into record ${record.mergedIntoId}; add the photo there.`);
   const { contentType, width, height } = await sniffPhoto(file.buffer);
   const thumb = await thumbnail(file.buffer, contentType);
   return sequelize.transaction(async (transaction) => {
@@ -37,8 +49,18 @@ export async function addPhoto(recordId: number, file: { buffer: Buffer; origina
     const thumbKey = await storage.put(thumb, 'image/webp', transaction);
     const photo = await RecordPhoto.create(
       {
-        recordId, originRecordId: recordId, uploadedBy: user.id, blobKey, thumbKey, contentType, byteSize: file.buffer.length, width, height,
-        sha256: createHash('sha256').update(file.buffer).digest('hex'), originalName: file.originalname?.slice(0, 200) ?? null, caption: null,
+        recordId,
+        originRecordId: recordId,
+        uploadedBy: user.id,
+        blobKey,
+        thumbKey,
+        contentType,
+        byteSize: file.buffer.length,
+        width,
+        height,
+        sha256: createHash('sha256').update(file.buffer).digest('hex'),
+        originalName: file.originalname?.slice(0, 200) ?? null,
+        caption: null,
       },
       { transaction },
     );
@@ -52,8 +74,12 @@ export async function removePhoto(photoId: number, user: SessionUser): Promise<v
   const photo = await RecordPhoto.findByPk(photoId);
   if (!photo || photo.removedAt) throw new NotFoundError('Photo');
   const record = await ConditionRecord.findByPk(photo.recordId, { rejectOnEmpty: true });
-  const allowed = canEditRecord(user, record) || (user.id === photo.uploadedBy && user.role !== 'viewer') || roleAtLeast(user.role, 'curator');
-  if (!allowed) throw new ForbiddenError('Only the record’s author, the uploader, a curator or an admin may remove this photo.');
+  const allowed =
+    canEditRecord(user, record) ||
+    (user.id === photo.uploadedBy && user.role !== 'viewer') ||
+    roleAtLeast(user.role, 'curator');
+  if (!allowed)
+    throw new ForbiddenError('Only the record’s author, the uploader, a curator or an admin may remove this photo.');
   await sequelize.transaction(async (transaction) => {
     await photo.update({ removedAt: new Date(), removedBy: user.id }, { transaction });
     await addRevision(record.id, user.id, 'photo-remove', [{ field: 'photos', from: photo.id, to: null }], transaction);

@@ -22,9 +22,12 @@ async function findRecord(id: number): Promise<ConditionRecord> {
 }
 
 function requireEditable(user: SessionUser, record: ConditionRecord) {
-  if (!canEditRecord(user, record)) throw new ForbiddenError('Only the record’s author, a curator or an admin may change it.');
+  if (!canEditRecord(user, record))
+    throw new ForbiddenError('Only the record’s author, a curator or an admin may change it.');
   if (record.status === 'merged') {
-    throw new ConflictError(`This record was merged into record ${record.mergedIntoId}; change that record instead.`, { mergedIntoId: record.mergedIntoId });
+    throw new ConflictError(`This record was merged into record ${record.mergedIntoId}; change that record instead.`, {
+      mergedIntoId: record.mergedIntoId,
+    });
   }
 }
 
@@ -41,21 +44,30 @@ export async function createRecord(input: RecordInputParsed, user: SessionUser):
 export async function updateRecord(id: number, patch: RecordUpdateParsed, user: SessionUser): Promise<ConditionRecord> {
   requireEditable(user, await findRecord(id));
   return sequelize.transaction(async (transaction) => {
-    const record = await ConditionRecord.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE, rejectOnEmpty: true });
+    const record = await ConditionRecord.findByPk(id, {
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+      rejectOnEmpty: true,
+    });
     if (patch.expectedRevision !== undefined && patch.expectedRevision !== record.revision) {
-      throw new ConflictError(`The record changed since you opened it (revision ${record.revision}, yours ${patch.expectedRevision}); reload and edit again.`, { revision: record.revision });
+      throw new ConflictError(
+        `The record changed since you opened it (revision ${record.revision}, yours ${patch.expectedRevision}); reload and edit again.`,
+        { revision: record.revision },
+      );
     }
     const before = await loadRecordState(id, transaction);
-    const compoundId = patch.structure !== undefined || patch.compoundId !== undefined
-      ? (await resolveCompound(patch, user.id, transaction)).id
-      : record.compoundId;
+    const compoundId =
+      patch.structure !== undefined || patch.compoundId !== undefined
+        ? (await resolveCompound(patch, user.id, transaction)).id
+        : record.compoundId;
     const content: RecordContent = {
       compoundId,
       technique: patch.technique ?? record.technique,
       stationaryPhase: patch.stationaryPhase ?? record.stationaryPhase,
-      stationaryPhaseOther: patch.stationaryPhaseOther !== undefined ? patch.stationaryPhaseOther : record.stationaryPhaseOther,
+      stationaryPhaseOther:
+        patch.stationaryPhaseOther !== undefined ? patch.stationaryPhaseOther : record.stationaryPhaseOther,
       eluent: patch.eluent ?? record.eluent,
-      spots: patch.spots ?? before.spots.map((spot) => ({ ...spot })) as RecordContent['spots'],
+      spots: patch.spots ?? (before.spots.map((spot) => ({ ...spot })) as RecordContent['spots']),
       visualisation: patch.visualisation ?? before.visualisations,
       outcome: patch.outcome ?? record.outcome,
       outcomeReason: patch.outcomeReason !== undefined ? patch.outcomeReason : record.outcomeReason,
@@ -65,13 +77,12 @@ export async function updateRecord(id: number, patch: RecordUpdateParsed, user: 
       runOn: patch.runOn !== undefined ? patch.runOn : record.runOn,
     };
     if (content.stationaryPhase === 'other' && !content.stationaryPhaseOther) {
-      throw new ValidationError('stationaryPhaseOther: Name the stationary phase when choosing "other".', [{ path: 'body.stationaryPhaseOther', message: 'Name the stationary phase when choosing "other".' }]);
+      throw new ValidationError('stationaryPhaseOther: Name the stationary phase when choosing "other".', [
+        { path: 'body.stationaryPhaseOther', message: 'Name the stationary phase when choosing "other".' },
+      ]);
     }
     if (content.stationaryPhase !== 'other') content.stationaryPhaseOther = null;
-    await record.update(
-      contentColumns(content),
-      { transaction },
-    );
+    await record.update(contentColumns(content), { transaction });
     if (patch.spots) {
       await RecordSpot.destroy({ where: { recordId: id }, transaction });
       await writeSpots(id, patch.spots, transaction);

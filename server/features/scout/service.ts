@@ -15,7 +15,10 @@ interface ReadStructure {
   descriptors: CompoundDescriptors;
   classes: string[];
   svg: string;
-  /** Fingerprint of the neutral parent from its ID code, as stored ones are; computed in the worker pool on first need (a stored compound's is used instead). */
+  /**
+   * Fingerprint of the neutral parent from its ID code, as stored ones are; computed in the worker pool on first need
+   * (a stored compound's is used instead).
+   */
   parentFingerprint: () => Promise<Int32Array>;
 }
 
@@ -29,11 +32,16 @@ function readStructure(text: string): ReadStructure {
   const { idcode, canonicalSmiles } = analysis.identity;
   let fingerprint: Promise<Int32Array> | undefined;
   const read: ReadStructure = {
-    idcode, canonicalSmiles, descriptors: analysis.descriptors, classes: analysis.classes, svg: analysis.svg,
-    parentFingerprint: () => (fingerprint ??= fingerprintOfIdcode(idcode).catch((error: unknown) => {
-      fingerprint = undefined;
-      throw error;
-    })),
+    idcode,
+    canonicalSmiles,
+    descriptors: analysis.descriptors,
+    classes: analysis.classes,
+    svg: analysis.svg,
+    parentFingerprint: () =>
+      (fingerprint ??= fingerprintOfIdcode(idcode).catch((error: unknown) => {
+        fingerprint = undefined;
+        throw error;
+      })),
   };
   readStructures.set(text, read);
   return read;
@@ -47,16 +55,36 @@ function readStructure(text: string): ReadStructure {
 export async function runScout(input: ScoutInputParsed, stamp?: string): Promise<ScoutResult> {
   const structure = readStructure(input.structure);
   const existing = await Compound.findOne({ where: { idcode: structure.idcode }, attributes: ['id', 'fingerprint'] });
-  const fingerprint = existing?.fingerprint ? fingerprintFromBytes(existing.fingerprint) : await structure.parentFingerprint();
+  const fingerprint = existing?.fingerprint
+    ? fingerprintFromBytes(existing.fingerprint)
+    : await structure.parentFingerprint();
   const model = await currentScoutModel(stamp ?? (await contentStamp()));
-  const query = { id: existing?.id ?? null, smiles: structure.canonicalSmiles, descriptors: structure.descriptors, classes: structure.classes, fingerprint };
+  const query = {
+    id: existing?.id ?? null,
+    smiles: structure.canonicalSmiles,
+    descriptors: structure.descriptors,
+    classes: structure.classes,
+    fingerprint,
+  };
   try {
-    const result = scout(model, query, { targetRf: input.targetRf, solventPair: input.solventPair, phase: input.phase });
+    const result = scout(model, query, {
+      targetRf: input.targetRf,
+      solventPair: input.solventPair,
+      phase: input.phase,
+    });
     const { descriptors } = structure;
     return {
       query: {
-        canonicalSmiles: structure.canonicalSmiles, formula: descriptors.formula, mw: descriptors.mw, clogp: descriptors.clogp, tpsa: descriptors.tpsa,
-        hbd: descriptors.hbd, hba: descriptors.hba, classes: structure.classes, svg: structure.svg, existingCompoundId: existing?.id ?? null,
+        canonicalSmiles: structure.canonicalSmiles,
+        formula: descriptors.formula,
+        mw: descriptors.mw,
+        clogp: descriptors.clogp,
+        tpsa: descriptors.tpsa,
+        hbd: descriptors.hbd,
+        hba: descriptors.hba,
+        classes: structure.classes,
+        svg: structure.svg,
+        existingCompoundId: existing?.id ?? null,
       },
       ...result,
     };

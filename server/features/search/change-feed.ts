@@ -27,7 +27,10 @@ export class ChangeFeed {
   /** Failed attempts since the feed last listened (only the first is logged as a warning). */
   private failures = 0;
 
-  constructor(private readonly url: string, private readonly handlers: ChangeFeedHandlers) {}
+  constructor(
+    private readonly url: string,
+    private readonly handlers: ChangeFeedHandlers,
+  ) {}
 
   /** Connects and listens; resolves once listening (or after the first failed attempt, retrying in the background). */
   async start(): Promise<void> {

@@ -19,10 +19,13 @@ export const RETENTION_DAYS = 7;
 
 /** pg_snapshot_xmin of the current snapshot: every change it cannot see has an xid at or above it. */
 export async function snapshotHorizon(transaction?: Transaction): Promise<bigint> {
-  const [row] = await sequelize.query<{ horizon: string }>('SELECT pg_snapshot_xmin(pg_current_snapshot())::text AS horizon', {
-    type: QueryTypes.SELECT,
-    transaction,
-  });
+  const [row] = await sequelize.query<{ horizon: string }>(
+    'SELECT pg_snapshot_xmin(pg_current_snapshot())::text AS horizon',
+    {
+      type: QueryTypes.SELECT,
+      transaction,
+    },
+  );
   return BigInt(row.horizon);
 }
 

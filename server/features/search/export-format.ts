@@ -10,14 +10,40 @@ import { phaseLabel, visualisationLabel, type ExportRecord, type LoadedRecord } 
  * and `MW (g/mol)` are for reading and are ignored on import.
  */
 export const exportColumns = [
-  'record id', 'compound', 'smiles', 'formula', 'MW (g/mol)', 'technique', 'stationary phase', 'eluent', 'additive', 'rf', 'rf sm',
-  'rf impurity', 'stain', 'outcome', 'outcome reason', 'notes', 'notebook', 'yield (%)', 'column diameter (mm)', 'cartridge', 'silica (g)',
-  'sample mass (mg)', 'load', 'fraction size (mL)', 'fractions pooled', 'date', 'author',
+  'record id',
+  'compound',
+  'smiles',
+  'formula',
+  'MW (g/mol)',
+  'technique',
+  'stationary phase',
+  'eluent',
+  'additive',
+  'rf',
+  'rf sm',
+  'rf impurity',
+  'stain',
+  'outcome',
+  'outcome reason',
+  'notes',
+  'notebook',
+  'yield (%)',
+  'column diameter (mm)',
+  'cartridge',
+  'silica (g)',
+  'sample mass (mg)',
+  'load',
+  'fraction size (mL)',
+  'fractions pooled',
+  'date',
+  'author',
 ] as const;
 export type ExportColumn = (typeof exportColumns)[number];
 
-const number = (value: number | null | undefined) => (value === null || value === undefined ? '' : String(Math.round(value * 1e4) / 1e4));
-const spotRf = (record: LoadedRecord, role: string) => number(record.spots.filter((spot) => spot.role === role).sort((a, b) => a.position - b.position)[0]?.rf);
+const number = (value: number | null | undefined) =>
+  value === null || value === undefined ? '' : String(Math.round(value * 1e4) / 1e4);
+const spotRf = (record: LoadedRecord, role: string) =>
+  number(record.spots.filter((spot) => spot.role === role).sort((a, b) => a.position - b.position)[0]?.rf);
 
 /** One record as export cells: eluent without additives (they have a column of their own), stains joined by "; ". */
 export function exportCells(record: LoadedRecord): Record<ExportColumn, string> {
@@ -31,11 +57,16 @@ export function exportCells(record: LoadedRecord): Record<ExportColumn, string> 
     technique: techniqueLabels[record.technique],
     'stationary phase': phaseLabel(record.stationaryPhase, record.stationaryPhaseOther),
     eluent: formatEluent({ ...eluent, additives: [] }),
-    additive: eluent.additives.map((item) => `${item.percent}% ${additiveByKey(item.additive)?.label ?? item.additive}`).join(' + '),
+    additive: eluent.additives
+      .map((item) => `${item.percent}% ${additiveByKey(item.additive)?.label ?? item.additive}`)
+      .join(' + '),
     rf: number(record.targetRf),
     'rf sm': spotRf(record, 'starting_material'),
     'rf impurity': spotRf(record, 'by_product'),
-    stain: [...record.visualisations].sort((a, b) => a.position - b.position).map((item) => visualisationLabel(item.method, item.note)).join('; '),
+    stain: [...record.visualisations]
+      .sort((a, b) => a.position - b.position)
+      .map((item) => visualisationLabel(item.method, item.note))
+      .join('; '),
     outcome: record.outcome,
     'outcome reason': record.outcomeReason ?? '',
     notes: record.notes ?? '',
@@ -71,7 +102,12 @@ export function toCsv(records: LoadedRecord[]): string {
 }
 
 /** A data item's value on SD lines: no blank lines (they end an item), no line starting with "$$$$". */
-const sdValue = (value: string) => value.replace(/\r\n?/g, '\n').split('\n').filter((line) => line.trim() !== '' && !line.startsWith('$$$$')).join('\n');
+const sdValue = (value: string) =>
+  value
+    .replace(/\r\n?/g, '\n')
+    .split('\n')
+    .filter((line) => line.trim() !== '' && !line.startsWith('$$$$'))
+    .join('\n');
 
 /**
  * Records as an SD file (MDL CTfile format): each record's compound molfile (its name on the title line)
@@ -83,7 +119,9 @@ export function toSdf(records: ExportRecord[]): string {
       const cells = exportCells(record);
       const lines = record.compound.molfile.replace(/\r\n?/g, '\n').replace(/\n+$/, '').split('\n');
       lines[0] = (record.compound.name ?? '').replace(/\s+/g, ' ').slice(0, 80);
-      const items = exportColumns.filter((column) => sdValue(cells[column]) !== '').map((column) => `> <${column}>\n${sdValue(cells[column])}\n`);
+      const items = exportColumns
+        .filter((column) => sdValue(cells[column]) !== '')
+        .map((column) => `> <${column}>\n${sdValue(cells[column])}\n`);
       return `${lines.join('\n')}\n${items.join('\n')}\n$$$$\n`;
     })
     .join('');

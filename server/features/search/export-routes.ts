@@ -20,12 +20,20 @@ function sendFile(res: Response, body: string, type: string, extension: string, 
   res.send(body);
 }
 
-exportRouter.get('/export.csv', allow('viewer'), handle({ query: exportQuerySchema }, async ({ query }, _req, res) => {
-  const { records, total } = await recordsToExport(query);
-  sendFile(res, toCsv(records), 'text/csv; charset=utf-8', 'csv', total);
-}));
+exportRouter.get(
+  '/export.csv',
+  allow('viewer'),
+  handle({ query: exportQuerySchema }, async ({ query }, _req, res) => {
+    const { records, total } = await recordsToExport(query);
+    sendFile(res, toCsv(records), 'text/csv; charset=utf-8', 'csv', total);
+  }),
+);
 
-exportRouter.get('/export.sdf', allow('viewer'), handle({ query: exportQuerySchema }, async ({ query }, _req, res) => {
-  const { records, total } = await recordsToExport(query);
-  sendFile(res, toSdf(records), 'chemical/x-mdl-sdfile; charset=utf-8', 'sdf', total);
-}));
+exportRouter.get(
+  '/export.sdf',
+  allow('viewer'),
+  handle({ query: exportQuerySchema }, async ({ query }, _req, res) => {
+    const { records, total } = await recordsToExport(query);
+    sendFile(res, toSdf(records), 'chemical/x-mdl-sdfile; charset=utf-8', 'sdf', total);
+  }),
+);

@@ -12,6 +12,7 @@ export async function recordsToExport(query: ExportQueryParsed): Promise<{ recor
   const { rows } = await rankedMatches(query);
   const ids = rows.slice(0, EXPORT_LIMIT).map((row) => row.id);
   const records: ExportRecord[] = [];
-  for (let start = 0; start < ids.length; start += CHUNK) records.push(...(await loadListRecords(ids.slice(start, start + CHUNK), { withMolfile: true })).records);
+  for (let start = 0; start < ids.length; start += CHUNK)
+    records.push(...(await loadListRecords(ids.slice(start, start + CHUNK), { withMolfile: true })).records);
   return { records, total: rows.length };
 }

@@ -30,7 +30,8 @@ export class FuzzyDocIndex {
   set(id: number, fields: WeightedFields): void {
     this.remove(id);
     const words = new Map<string, number>();
-    for (const field of fields) for (const word of tokenize(field.text)) words.set(word, Math.max(words.get(word) ?? 0, field.weight));
+    for (const field of fields)
+      for (const word of tokenize(field.text)) words.set(word, Math.max(words.get(word) ?? 0, field.weight));
     this.wordsOf.set(id, [...words.keys()]);
     for (const [word, weight] of words) {
       let posting = this.postings.get(word);

@@ -32,7 +32,11 @@ interface RecordRow {
   notes: string | null;
   notebook_ref: string | null;
   outcome_reason: string | null;
-  eluent: { components?: { solvent: string }[]; steps?: { components?: { solvent: string }[] }[]; additives?: { additive: string }[] } | null;
+  eluent: {
+    components?: { solvent: string }[];
+    steps?: { components?: { solvent: string }[] }[];
+    additives?: { additive: string }[];
+  } | null;
   stains: { method: string; note: string | null }[] | null;
 }
 
@@ -43,7 +47,10 @@ interface RecordRow {
  */
 export function conditionWords(row: Pick<RecordRow, 'eluent' | 'stains'>): string {
   const words = new Set<string>();
-  const solventKeys = [...(row.eluent?.components ?? []), ...(row.eluent?.steps ?? []).flatMap((step) => step.components ?? [])].map((part) => part.solvent);
+  const solventKeys = [
+    ...(row.eluent?.components ?? []),
+    ...(row.eluent?.steps ?? []).flatMap((step) => step.components ?? []),
+  ].map((part) => part.solvent);
   for (const key of solventKeys) {
     const solvent = solventByKey(key);
     words.add(solvent ? `${solvent.label} ${solvent.name}` : key);
@@ -78,7 +85,10 @@ export async function loadIndexedCompounds(ids?: number[], transaction?: Transac
 }
 
 /** Records for the text index: all active ones, or the given ids split into active docs and inactive ids. */
-export async function loadRecordDocs(ids?: number[], transaction?: Transaction): Promise<{ active: RecordDoc[]; inactiveIds: number[] }> {
+export async function loadRecordDocs(
+  ids?: number[],
+  transaction?: Transaction,
+): Promise<{ active: RecordDoc[]; inactiveIds: number[] }> {
   if (ids && ids.length === 0) return { active: [], inactiveIds: [] };
   const rows = await sequelize.query<RecordRow>(
     `SELECT r.id, r.compound_id, r.status, r.notes, r.notebook_ref, r.outcome_reason, r.eluent,

@@ -16,7 +16,9 @@ export function presentConditions(record: RecordListItem): ConditionSummary {
     strongPercent: record.eluentSummary.strongPercent,
     targetRf: record.targetRf,
     stains: record.visualisations.map((item) => item.label),
-    additives: record.eluent.additives.map((item) => `${item.percent}% ${additiveByKey(item.additive)?.label ?? item.additive}`),
+    additives: record.eluent.additives.map(
+      (item) => `${item.percent}% ${additiveByKey(item.additive)?.label ?? item.additive}`,
+    ),
     outcome: record.outcome,
   };
 }
@@ -24,7 +26,14 @@ export function presentConditions(record: RecordListItem): ConditionSummary {
 const round = (value: number | null) => (value === null ? null : Math.round(value * 1000) / 1000);
 
 export function presentRecordHit(row: RankedRow, record: RecordListItem): SearchRecordHit {
-  return { kind: 'record', recordId: row.id, compoundId: row.compoundId, similarity: round(row.similarity), relevance: round(row.relevance), record };
+  return {
+    kind: 'record',
+    recordId: row.id,
+    compoundId: row.compoundId,
+    similarity: round(row.similarity),
+    relevance: round(row.relevance),
+    record,
+  };
 }
 
 const outcomeRank = { clean: 0, partial: 1, failed: 2 } as const;
@@ -41,7 +50,9 @@ export function conditionsFirst(rows: RankedRow[], count: number): RankedRow[] {
 export function presentCompoundHit(rows: RankedRow[], shown: RecordListItem[]): SearchCompoundHit {
   const outcomes = { clean: 0, partial: 0, failed: 0 };
   for (const row of rows) outcomes[row.outcome] += 1;
-  const relevance = rows.some((row) => row.relevance !== null) ? Math.max(...rows.map((row) => row.relevance ?? 0)) : null;
+  const relevance = rows.some((row) => row.relevance !== null)
+    ? Math.max(...rows.map((row) => row.relevance ?? 0))
+    : null;
   return {
     kind: 'compound',
     id: rows[0].compoundId,

@@ -16,19 +16,30 @@ export const searchRouter = Router();
  * Answers are the same for every reader, so they are kept per content stamp (db/data-stamp.ts): any content write
  * makes the next search compute afresh. `tookMs` (last in the answer) is this request's time on the server.
  */
-searchRouter.get('/', allow('viewer'), handle({ query: searchQuerySchema }, async ({ query }, req, res) => {
-  const started = performance.now();
-  const stamp = await requestContentStamp(req);
-  const kept = await responseCache.get(`search:${JSON.stringify(query)}`, stamp, async () => {
-    const { tookMs: _tookMs, ...answer } = await search(query);
-    const bytes = Buffer.from(JSON.stringify(answer).slice(0, -1));
-    return { bytes, etag: `W/"${createHash('sha1').update(bytes).digest('base64url')}"` };
-  });
-  const tookMs = Math.round((performance.now() - started) * 10) / 10;
-  res.set('ETag', kept.etag).type('application/json').send(Buffer.concat([kept.bytes, Buffer.from(`,"tookMs":${tookMs}}`)]));
-}));
+searchRouter.get(
+  '/',
+  allow('viewer'),
+  handle({ query: searchQuerySchema }, async ({ query }, req, res) => {
+    const started = performance.now();
+    const stamp = await requestContentStamp(req);
+    const kept = await responseCache.get(`search:${JSON.stringify(query)}`, stamp, async () => {
+      const { tookMs: _tookMs, ...answer } = await search(query);
+      const bytes = Buffer.from(JSON.stringify(answer).slice(0, -1));
+      return { bytes, etag: `W/"${createHash('sha1').update(bytes).digest('base64url')}"` };
+    });
+    const tookMs = Math.round((performance.now() - started) * 10) / 10;
+    res
+      .set('ETag', kept.etag)
+      .type('application/json')
+      .send(Buffer.concat([kept.bytes, Buffer.from(`,"tookMs":${tookMs}}`)]));
+  }),
+);
 
 /** The people the contributor filter offers. */
-searchRouter.get('/contributors', allow('viewer'), handle({}, async (_input, _req, res) => {
-  res.json(await searchContributors());
-}));
+searchRouter.get(
+  '/contributors',
+  allow('viewer'),
+  handle({}, async (_input, _req, res) => {
+    res.json(await searchContributors());
+  }),
+);

@@ -33,7 +33,10 @@ export async function findCandidates(indexes: SearchIndexes, input: CandidateInp
   if (input.mode !== 'text' && input.structure) {
     const query = await readStructureQuery(input.structure);
     if (input.mode === 'similar') {
-      const hits = indexes.structures.similar({ fingerprint: query.fingerprint, idcode: query.idcode, graph: query.graph }, { limit: input.limit, threshold: input.threshold });
+      const hits = indexes.structures.similar(
+        { fingerprint: query.fingerprint, idcode: query.idcode, graph: query.graph },
+        { limit: input.limit, threshold: input.threshold },
+      );
       candidates.structure = {
         compoundIds: hits.map((hit) => hit.id),
         similarity: new Map(hits.map((hit) => [hit.id, hit.similarity])),
@@ -42,7 +45,12 @@ export async function findCandidates(indexes: SearchIndexes, input: CandidateInp
       };
     } else {
       const found = indexes.structures.substructure(query.input, { limit: input.limit });
-      candidates.structure = { compoundIds: found.ids, similarity: new Map(), truncated: found.ids.length >= input.limit, query };
+      candidates.structure = {
+        compoundIds: found.ids,
+        similarity: new Map(),
+        truncated: found.ids.length >= input.limit,
+        query,
+      };
     }
   }
   if (input.q) candidates.text = indexes.text.search(input.q);

@@ -38,7 +38,8 @@ export class SearchIndexes {
     this.feed = new ChangeFeed(url, {
       onNotice: () => void this.sync().catch((error) => logger.warn({ err: error }, 'search index sync failed')),
       onListening: (reconnect) => {
-        if (reconnect) void this.catchUp().catch((error) => logger.warn({ err: error }, 'search index catch-up failed'));
+        if (reconnect)
+          void this.catchUp().catch((error) => logger.warn({ err: error }, 'search index catch-up failed'));
       },
     });
   }
@@ -52,7 +53,10 @@ export class SearchIndexes {
   async start(): Promise<void> {
     await this.feed.start();
     await this.rebuild();
-    this.pruneTimer = setInterval(() => void pruneChangeLog().catch((error) => logger.warn({ err: error }, 'change-log pruning failed')), PRUNE_EVERY_MS);
+    this.pruneTimer = setInterval(
+      () => void pruneChangeLog().catch((error) => logger.warn({ err: error }, 'change-log pruning failed')),
+      PRUNE_EVERY_MS,
+    );
     this.pruneTimer.unref();
   }
 
@@ -79,9 +83,16 @@ export class SearchIndexes {
       this.again = false;
       if (!this.reader) return;
       const batch = await this.reader.read();
-      const [compounds, records] = await Promise.all([loadIndexedCompounds(batch.compoundIds), loadRecordDocs(batch.recordIds)]);
+      const [compounds, records] = await Promise.all([
+        loadIndexedCompounds(batch.compoundIds),
+        loadRecordDocs(batch.recordIds),
+      ]);
       for (const compound of compounds) this.upsertStructure(compound, graphOfIdcode(compound.idcode));
-      this.text.apply(compounds.map((compound) => compound.doc), records.active, records.inactiveIds);
+      this.text.apply(
+        compounds.map((compound) => compound.doc),
+        records.active,
+        records.inactiveIds,
+      );
       this.lastSyncAt = Date.now();
     } while (this.again);
   }
@@ -96,25 +107,39 @@ export class SearchIndexes {
   async rebuild(): Promise<void> {
     const started = performance.now();
     const generation = ++this.generation;
-    const { horizon, compounds, records } = await sequelize.transaction({ isolationLevel: 'REPEATABLE READ' as never, readOnly: true }, async (transaction) => ({
-      horizon: await snapshotHorizon(transaction),
-      compounds: await loadIndexedCompounds(undefined, transaction),
-      records: await loadRecordDocs(undefined, transaction),
-    }));
+    const { horizon, compounds, records } = await sequelize.transaction(
+      { isolationLevel: 'REPEATABLE READ' as never, readOnly: true },
+      async (transaction) => ({
+        horizon: await snapshotHorizon(transaction),
+        compounds: await loadIndexedCompounds(undefined, transaction),
+        records: await loadRecordDocs(undefined, transaction),
+      }),
+    );
     for (const compound of compounds) this.upsertStructure(compound);
-    this.text.load(compounds.map((compound) => compound.doc), records.active);
+    this.text.load(
+      compounds.map((compound) => compound.doc),
+      records.active,
+    );
     this.reader = new ChangeLogReader(horizon);
     this.lastSyncAt = Date.now();
     this.rebuildMs = performance.now() - started;
-    logger.info({ compounds: this.structures.size, records: records.active.length, ms: Math.round(this.rebuildMs) }, 'search indexes built');
+    logger.info(
+      { compounds: this.structures.size, records: records.active.length, ms: Math.round(this.rebuildMs) },
+      'search indexes built',
+    );
     const needGraphs = compounds.filter((compound) => compound.fingerprint).map(({ id, idcode }) => ({ id, idcode }));
-    this.graphsReady = attachGraphsInBackground(this.structures, needGraphs, () => generation !== this.generation).catch((error) => {
+    this.graphsReady = attachGraphsInBackground(
+      this.structures,
+      needGraphs,
+      () => generation !== this.generation,
+    ).catch((error) => {
       logger.warn({ err: error }, 'search graphs could not be attached; substructure search falls back to SSSearcher');
     });
   }
 
   private upsertStructure(compound: IndexedCompound, graph?: Uint8Array): void {
-    if (compound.fingerprint) this.structures.upsert({ id: compound.id, idcode: compound.idcode, fingerprint: compound.fingerprint, graph });
+    if (compound.fingerprint)
+      this.structures.upsert({ id: compound.id, idcode: compound.idcode, fingerprint: compound.fingerprint, graph });
     else this.structures.remove(compound.id);
   }
 }

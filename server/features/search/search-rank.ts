@@ -51,9 +51,11 @@ export function rankRows(rows: SearchRow[], candidates: Candidates, sort: Search
   const similarity = similarityOf(candidates);
   const relevance = relevanceOf(candidates);
   const ranked = rows.map((row) => ({ ...row, similarity: similarity(row), relevance: relevance(row) }));
-  const compare = sort === 'relevance'
-    ? (a: RankedRow, b: RankedRow) => (b.similarity ?? 0) - (a.similarity ?? 0) || (b.relevance ?? 0) - (a.relevance ?? 0) || newestFirst(a, b)
-    : comparators[sort];
+  const compare =
+    sort === 'relevance'
+      ? (a: RankedRow, b: RankedRow) =>
+          (b.similarity ?? 0) - (a.similarity ?? 0) || (b.relevance ?? 0) - (a.relevance ?? 0) || newestFirst(a, b)
+      : comparators[sort];
   return ranked.sort(compare);
 }
 

@@ -24,8 +24,16 @@ const FROM = 'FROM condition_records r JOIN compounds c ON c.id = r.compound_id 
 /** The records filters (server/core/record-filters.ts) for active records only. */
 function filterSql(filters: SearchFilters) {
   return recordFilterSql({
-    status: 'active', class: filters.class, phase: filters.phase, solvent: filters.solvent, stain: filters.stain, outcome: filters.outcome,
-    technique: filters.technique, author: filters.contributor, from: filters.from, to: filters.to,
+    status: 'active',
+    class: filters.class,
+    phase: filters.phase,
+    solvent: filters.solvent,
+    stain: filters.stain,
+    outcome: filters.outcome,
+    technique: filters.technique,
+    author: filters.contributor,
+    from: filters.from,
+    to: filters.to,
   });
 }
 
@@ -51,7 +59,11 @@ function candidateSql(candidates: Candidates, replacements: Record<string, unkno
 }
 
 /** Every active record passing the filters and the indexes' candidates (light rows, unsorted). */
-export async function matchingRows(filters: SearchFilters, candidates: Candidates, withFingerprints: boolean): Promise<SearchRow[]> {
+export async function matchingRows(
+  filters: SearchFilters,
+  candidates: Candidates,
+  withFingerprints: boolean,
+): Promise<SearchRow[]> {
   const { where, replacements } = filterSql(filters);
   const limitTo = candidateSql(candidates, replacements);
   if (limitTo === null) return [];
@@ -75,10 +87,16 @@ const sortSql: Record<SearchSort, string> = {
 /** One page of record ids when neither words nor a structure narrow the search (sorted and paged in SQL). */
 export async function browseRecordIds(filters: SearchFilters, sort: SearchSort, page: number, pageSize: number) {
   const { where, replacements } = filterSql(filters);
-  const [{ total }] = await sequelize.query<{ total: string }>(`SELECT count(*) AS total ${FROM} WHERE ${where}`, { replacements, type: QueryTypes.SELECT });
-  const rows = await sequelize.query<{ id: number }>(`SELECT r.id ${FROM} WHERE ${where} ORDER BY ${sortSql[sort]}, r.id DESC LIMIT :limit OFFSET :offset`, {
-    replacements: { ...replacements, limit: pageSize, offset: (page - 1) * pageSize },
+  const [{ total }] = await sequelize.query<{ total: string }>(`SELECT count(*) AS total ${FROM} WHERE ${where}`, {
+    replacements,
     type: QueryTypes.SELECT,
   });
+  const rows = await sequelize.query<{ id: number }>(
+    `SELECT r.id ${FROM} WHERE ${where} ORDER BY ${sortSql[sort]}, r.id DESC LIMIT :limit OFFSET :offset`,
+    {
+      replacements: { ...replacements, limit: pageSize, offset: (page - 1) * pageSize },
+      type: QueryTypes.SELECT,
+    },
+  );
   return { ids: rows.map((row) => row.id), total: Number(total) };
 }

@@ -19,7 +19,9 @@ async function presented(ids: number[]) {
 }
 
 /** Every matching active record, scored and sorted (export uses this too). */
-export async function rankedMatches(query: Omit<SearchQueryParsed, 'page' | 'pageSize' | 'view'>): Promise<{ rows: RankedRow[]; candidates: Candidates }> {
+export async function rankedMatches(
+  query: Omit<SearchQueryParsed, 'page' | 'pageSize' | 'view'>,
+): Promise<{ rows: RankedRow[]; candidates: Candidates }> {
   const indexes = await currentSearchIndexes();
   const candidates = await findCandidates(indexes, query);
   const rows = await matchingRows(query, candidates, query.mode === 'substructure');
@@ -40,7 +42,18 @@ export async function search(query: SearchQueryParsed): Promise<SearchResponse> 
     const records = await presented(ids);
     const items = ids.flatMap((id) => {
       const record = records.get(id);
-      return record ? [{ kind: 'record' as const, recordId: id, compoundId: record.compound.id, similarity: null, relevance: null, record }] : [];
+      return record
+        ? [
+            {
+              kind: 'record' as const,
+              recordId: id,
+              compoundId: record.compound.id,
+              similarity: null,
+              relevance: null,
+              record,
+            },
+          ]
+        : [];
     });
     return { ...base, items, total, truncated: false, structureSmiles: null, tookMs: elapsed(started) };
   }
@@ -57,7 +70,9 @@ export async function search(query: SearchQueryParsed): Promise<SearchResponse> 
     return { ...base, items, total: rows.length, truncated, structureSmiles, tookMs: elapsed(started) };
   }
   const groups = groupByCompound(rows);
-  const page = groups.slice(offset, offset + query.pageSize).map((group) => ({ group, shown: conditionsFirst(group, CONDITIONS_PER_COMPOUND) }));
+  const page = groups
+    .slice(offset, offset + query.pageSize)
+    .map((group) => ({ group, shown: conditionsFirst(group, CONDITIONS_PER_COMPOUND) }));
   const records = await presented(page.flatMap(({ shown }) => shown.map((row) => row.id)));
   const items = page.flatMap(({ group, shown }) => {
     const loaded = shown.flatMap((row) => records.get(row.id) ?? []);

@@ -43,7 +43,13 @@ export async function readStructureQuery(text: string): Promise<StructureQuery> 
   const idcode = parent.getIDCode();
   const query = Compound.findOne({ where: { idcode }, attributes: ['fingerprint'] })
     .then((stored) => fingerprintOfIdcode(idcode, stored?.fingerprint))
-    .then((fingerprint): StructureQuery => ({ input, fingerprint, smiles, idcode, graph: searchGraphMolecule(parent) }));
+    .then((fingerprint): StructureQuery => ({
+      input,
+      fingerprint,
+      smiles,
+      idcode,
+      graph: searchGraphMolecule(parent),
+    }));
   cache.set(key, query);
   query.catch(() => {
     if (cache.get(key) === query) cache.delete(key);

@@ -82,7 +82,8 @@ export class TextIndex {
     const records = this.records.search(text);
     let best = Number.POSITIVE_INFINITY;
     for (const hits of [compounds, records]) for (const score of hits.values()) best = Math.min(best, score);
-    for (const hits of [compounds, records]) for (const [id, score] of hits) if (score > best + RELATIVE_CUTOFF) hits.delete(id);
+    for (const hits of [compounds, records])
+      for (const [id, score] of hits) if (score > best + RELATIVE_CUTOFF) hits.delete(id);
     return { compounds, records };
   }
 }

@@ -56,7 +56,10 @@ export class TokenVocabulary {
   /** Words of the vocabulary matching a query word, with Fuse scores (0 best). */
   match(word: string): Map<string, number> {
     const threshold = thresholdFor(word.length);
-    const candidates = word.length < 2 ? [...this.counts.keys()].filter((token) => token.startsWith(word)) : this.candidates(word, threshold);
+    const candidates =
+      word.length < 2
+        ? [...this.counts.keys()].filter((token) => token.startsWith(word))
+        : this.candidates(word, threshold);
     const found = new Map<string, number>();
     if (candidates.length === 0) return found;
     const fuse = new Fuse(candidates, { includeScore: true, ignoreLocation: true, threshold, isCaseSensitive: true });
@@ -69,7 +72,8 @@ export class TokenVocabulary {
     const errors = Math.floor(threshold * word.length);
     const needed = Math.max(1, grams.size - 2 * errors);
     const shared = new Map<string, number>();
-    for (const gram of grams) for (const token of this.byBigram.get(gram) ?? []) shared.set(token, (shared.get(token) ?? 0) + 1);
+    for (const gram of grams)
+      for (const token of this.byBigram.get(gram) ?? []) shared.set(token, (shared.get(token) ?? 0) + 1);
     return [...shared].filter(([, count]) => count >= needed).map(([token]) => token);
   }
 }

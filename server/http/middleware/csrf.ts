@@ -26,6 +26,9 @@ export const requireCsrf: RequestHandler = (req, _res, next) => {
   // Digests have one length whatever was sent (a non-ASCII token of the right length has more bytes).
   const digest = (text: string) => createHash('sha256').update(text, 'utf8').digest();
   const ok = expected.length > 0 && timingSafeEqual(digest(sent), digest(expected));
-  if (!ok) return next(new AppError(403, 'csrf', 'Missing or stale CSRF token: fetch GET /api/auth/csrf and send it in X-CSRF-Token.'));
+  if (!ok)
+    return next(
+      new AppError(403, 'csrf', 'Missing or stale CSRF token: fetch GET /api/auth/csrf and send it in X-CSRF-Token.'),
+    );
   next();
 };

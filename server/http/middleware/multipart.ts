@@ -12,6 +12,12 @@ export function readableMultipart(parse: RequestHandler): RequestHandler {
     parse(req, res, (error?: unknown) => {
       if (!error || error instanceof MulterError || error instanceof AppError) return next(error);
       const reason = error instanceof Error ? error.message : String(error);
-      next(new AppError(400, 'bad_upload', `The upload could not be read as multipart/form-data (${reason}); send the file in a well-formed multipart body.`));
+      next(
+        new AppError(
+          400,
+          'bad_upload',
+          `The upload could not be read as multipart/form-data (${reason}); send the file in a well-formed multipart body.`,
+        ),
+      );
     });
 }

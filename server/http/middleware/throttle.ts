@@ -21,9 +21,15 @@ function counters(prefix: string) {
 function tooMany(what: string): RequestHandler {
   return (req, res) => {
     const resetTime = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-    const minutes = resetTime ? Math.max(1, Math.ceil((resetTime.getTime() - Date.now()) / 60_000)) : env().SIGNIN_WINDOW_MINUTES;
+    const minutes = resetTime
+      ? Math.max(1, Math.ceil((resetTime.getTime() - Date.now()) / 60_000))
+      : env().SIGNIN_WINDOW_MINUTES;
     res.status(429).json({
-      error: { code: 'too_many_attempts', message: `Too many failed ${what}. Try again in ${minutes} min.`, details: [{ path: '', message: 'Wait before trying again.', retryAfterMinutes: minutes }] },
+      error: {
+        code: 'too_many_attempts',
+        message: `Too many failed ${what}. Try again in ${minutes} min.`,
+        details: [{ path: '', message: 'Wait before trying again.', retryAfterMinutes: minutes }],
+      },
     });
   };
 }
@@ -33,14 +39,18 @@ const waitStores = new Map<string, AttemptStore>();
 function attemptStore(): AttemptStore {
   const kind = env().SIGNIN_THROTTLE_STORE ?? (env().NODE_ENV === 'production' ? 'postgres' : 'memory');
   let store = waitStores.get(kind);
-  if (!store) waitStores.set(kind, (store = kind === 'postgres' ? new PgAttemptStore('signin-wait:') : new MemoryAttemptStore()));
+  if (!store)
+    waitStores.set(kind, (store = kind === 'postgres' ? new PgAttemptStore('signin-wait:') : new MemoryAttemptStore()));
   return store;
 }
 
 const rules = () => {
   const { SIGNIN_FREE_FAILURES_PER_ACCOUNT, SIGNIN_FREE_FAILURES_PER_ADDRESS, SIGNIN_MAX_WAIT_SECONDS } = env();
   const shared = { maxWaitMs: SIGNIN_MAX_WAIT_SECONDS * 1000, windowMs: windowMs() };
-  return { account: { ...shared, free: SIGNIN_FREE_FAILURES_PER_ACCOUNT }, address: { ...shared, free: SIGNIN_FREE_FAILURES_PER_ADDRESS } };
+  return {
+    account: { ...shared, free: SIGNIN_FREE_FAILURES_PER_ACCOUNT },
+    address: { ...shared, free: SIGNIN_FREE_FAILURES_PER_ADDRESS },
+  };
 };
 
 /** Called when an account's free allowance of failed sign-ins has just been used up (once per run of failures). */
@@ -63,16 +73,24 @@ export const signInWaits: RequestHandler = async (req, res, next) => {
     const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase().slice(0, 254) : '';
     const keys = [{ key: `address:${ipKeyGenerator(req.ip ?? '')}`, rule: address, what: 'from this address' }];
     // A browser where the owner signed in before skips the account's wait (auth/known-device.ts).
-    if (email && !isKnownDevice(req, email)) keys.push({ key: `account:${email}`, rule: account, what: 'for this account' });
+    if (email && !isKnownDevice(req, email))
+      keys.push({ key: `account:${email}`, rule: account, what: 'for this account' });
     const claims = await Promise.all(keys.map(({ key, rule }) => store.claim(key, rule)));
     const refused = claims.flatMap((claim, i) => (claim.ok ? [] : [{ ms: claim.retryAfterMs, what: keys[i].what }]));
     if (refused.length > 0) {
       await Promise.all(keys.filter((_, i) => claims[i].ok).map(({ key }) => store.giveBack(key)));
       const longest = refused.reduce((a, b) => (b.ms > a.ms ? b : a));
       const seconds = Math.max(1, Math.ceil(longest.ms / 1000));
-      res.set('Retry-After', String(seconds)).status(429).json({
-        error: { code: 'too_many_attempts', message: `Too many failed sign-ins ${longest.what}. Try again in ${seconds} s.`, details: [{ path: '', message: 'Wait before trying again.', retryAfterSeconds: seconds }] },
-      });
+      res
+        .set('Retry-After', String(seconds))
+        .status(429)
+        .json({
+          error: {
+            code: 'too_many_attempts',
+            message: `Too many failed sign-ins ${longest.what}. Try again in ${seconds} s.`,
+            details: [{ path: '', message: 'Wait before trying again.', retryAfterSeconds: seconds }],
+          },
+        });
       return;
     }
     const accountKey = keys[1]?.key;
@@ -80,7 +98,8 @@ export const signInWaits: RequestHandler = async (req, res, next) => {
     res.on('finish', () => {
       const settle = async () => {
         if (res.statusCode === 401) {
-          if (accountClaim?.ok && accountClaim.attempts === account.free) onAccountGuessed(email, accountClaim.attempts);
+          if (accountClaim?.ok && accountClaim.attempts === account.free)
+            onAccountGuessed(email, accountClaim.attempts);
           return;
         }
         await store.giveBack(keys[0].key);

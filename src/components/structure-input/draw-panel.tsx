@@ -12,7 +12,8 @@ class EditorLoadBoundary extends Component<{ children: ReactNode }, { failed: bo
     if (this.state.failed) {
       return (
         <p role="alert" className="p-4 text-sm text-failed">
-          The drawing editor could not load (network or browser problem). Paste a SMILES or molfile instead, or reload the page.
+          The drawing editor could not load (network or browser problem). Paste a SMILES or molfile instead, or reload
+          the page.
         </p>
       );
     }
@@ -31,7 +32,13 @@ export function DrawPanel({ value, onChange, labelledBy }: DrawPanelProps) {
   return (
     <div className="h-[26rem] w-full overflow-hidden rounded-plate border border-line bg-surface">
       <EditorLoadBoundary>
-        <Suspense fallback={<p className="p-4 text-sm text-ink-soft" role="status">Loading the drawing editor…</p>}>
+        <Suspense
+          fallback={
+            <p className="p-4 text-sm text-ink-soft" role="status">
+              Loading the drawing editor…
+            </p>
+          }
+        >
           <OclEditor value={value} onChange={onChange} labelledBy={labelledBy} />
         </Suspense>
       </EditorLoadBoundary>

@@ -11,12 +11,30 @@ export const tabId = (base: string, mode: InputMode) => `${base}-tab-${mode}`;
 export const panelId = (base: string, mode: InputMode) => `${base}-panel-${mode}`;
 
 /** Two tabs with arrow-key, Home and End movement (one tab stop, as the ARIA tabs pattern asks). */
-export function ModeTabs({ base, active, onSelect, labelledBy }: { base: string; active: InputMode; onSelect: (m: InputMode) => void; labelledBy: string }) {
+export function ModeTabs({
+  base,
+  active,
+  onSelect,
+  labelledBy,
+}: {
+  base: string;
+  active: InputMode;
+  onSelect: (m: InputMode) => void;
+  labelledBy: string;
+}) {
   const refs = useRef<Record<InputMode, HTMLButtonElement | null>>({ draw: null, paste: null });
   function onKeyDown(e: KeyboardEvent) {
     const i = modes.findIndex((m) => m.mode === active);
     const next =
-      e.key === 'ArrowRight' ? (i + 1) % modes.length : e.key === 'ArrowLeft' ? (i + modes.length - 1) % modes.length : e.key === 'Home' ? 0 : e.key === 'End' ? modes.length - 1 : -1;
+      e.key === 'ArrowRight'
+        ? (i + 1) % modes.length
+        : e.key === 'ArrowLeft'
+          ? (i + modes.length - 1) % modes.length
+          : e.key === 'Home'
+            ? 0
+            : e.key === 'End'
+              ? modes.length - 1
+              : -1;
     if (next < 0) return;
     e.preventDefault();
     onSelect(modes[next].mode);

@@ -64,7 +64,13 @@ export default function OclEditor({ value, onChange, labelledBy }: OclEditorProp
 
   return (
     <div className="relative h-full w-full">
-      <div ref={host} role="application" aria-labelledby={labelledBy} aria-roledescription="structure drawing editor" className="h-full w-full" />
+      <div
+        ref={host}
+        role="application"
+        aria-labelledby={labelledBy}
+        aria-roledescription="structure drawing editor"
+        className="h-full w-full"
+      />
       {undrawable && (
         <p className="absolute inset-x-2 bottom-2 rounded-plate bg-surface/95 p-2 text-xs text-ink-soft shadow-sm">
           The text in Paste cannot be drawn as it stands; the check below says why. Drawing here replaces it.

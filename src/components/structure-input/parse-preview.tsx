@@ -24,13 +24,19 @@ function IdentityNotes({ parsed }: { parsed: ParsedStructure }) {
     <>
       {(parsed.isSalt || parsed.isMixture) && (
         <p className="mt-1 text-xs text-ink-soft">
-          {parsed.isSalt ? 'Salt' : 'Mixture'}: the compound is identified by its largest organic part; descriptors are of that parent. Your full input is kept.
+          {parsed.isSalt ? 'Salt' : 'Mixture'}: the compound is identified by its largest organic part; descriptors are
+          of that parent. Your full input is kept.
         </p>
       )}
       {parsed.existingCompoundId !== null && (
         <p className="mt-1 text-xs text-ink">
           Already in the group's base:{' '}
-          <a href={`/compounds/${parsed.existingCompoundId}`} target="_blank" rel="noopener" className="text-front underline underline-offset-2">
+          <a
+            href={`/compounds/${parsed.existingCompoundId}`}
+            target="_blank"
+            rel="noopener"
+            className="text-front underline underline-offset-2"
+          >
             open its compound page
           </a>{' '}
           (new tab, your input stays here).
@@ -64,7 +70,9 @@ export function ParsePreview({ parsed, stale }: { parsed: ParsedStructure; stale
         <Figure term="HBD / HBA">
           {parsed.hbd} / {parsed.hba}
         </Figure>
-        {parsed.charge !== 0 && <Figure term="Net charge">{parsed.charge > 0 ? `+${parsed.charge}` : parsed.charge}</Figure>}
+        {parsed.charge !== 0 && (
+          <Figure term="Net charge">{parsed.charge > 0 ? `+${parsed.charge}` : parsed.charge}</Figure>
+        )}
       </dl>
       {parsed.classes.length > 0 && (
         <ul className="mt-2 flex flex-wrap gap-1" aria-label="Compound classes">
@@ -78,7 +86,8 @@ export function ParsePreview({ parsed, stale }: { parsed: ParsedStructure; stale
         </ul>
       )}
       <p className="mt-2 text-2xs text-ink-soft">
-        Computed on the server with OpenChemLib; cLogP and TPSA are its estimates. Classes come from the group's substructure catalogue.
+        Computed on the server with OpenChemLib; cLogP and TPSA are its estimates. Classes come from the group's
+        substructure catalogue.
       </p>
       <p className="figure mt-1 break-all text-2xs text-ink-soft" title="Canonical SMILES">
         {parsed.canonicalSmiles}

@@ -32,7 +32,8 @@ export function ParseProblem({ error, text }: { error: unknown; text: string }) 
   if (!(error instanceof ApiRequestError)) {
     return (
       <div role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-sm text-failed">
-        Could not reach the server to check this structure. Your text is kept; it will be checked again when you edit it.
+        Could not reach the server to check this structure. Your text is kept; it will be checked again when you edit
+        it.
       </div>
     );
   }

@@ -16,7 +16,9 @@ export function ParseStatus({ value, check }: { value: string; check: ReturnType
         {line.text}
       </p>
       {!value.trim() && (
-        <p className="text-sm text-ink-soft">Draw the structure or paste a SMILES or molfile; its formula, weight and classes appear here.</p>
+        <p className="text-sm text-ink-soft">
+          Draw the structure or paste a SMILES or molfile; its formula, weight and classes appear here.
+        </p>
       )}
       {check.error && !check.isChecking ? <ParseProblem error={check.error} text={value} /> : null}
       {check.parsed && !check.error && <ParsePreview parsed={check.parsed} stale={!check.isCurrent} />}

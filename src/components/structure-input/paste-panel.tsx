@@ -36,7 +36,12 @@ export function PastePanel({ value, onChange, onFile, required, invalid, describ
         className={`${controlClass} figure text-sm`}
       />
       <div className="flex flex-wrap items-center gap-2 text-sm text-ink-soft">
-        <label className="inline-flex min-h-10 cursor-pointer items-center rounded-plate border border-line bg-surface px-3 font-medium text-ink hover:bg-plate focus-within:outline-2 focus-within:outline-front">
+        <label
+          className={
+            'inline-flex min-h-10 cursor-pointer items-center rounded-plate border ' +
+            'border-line bg-surface px-3 font-medium text-ink hover:bg-plate focus-within:outline-2 focus-within:outline-front'
+          }
+        >
           Open a file…
           <input
             type="file"

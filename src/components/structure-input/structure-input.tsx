@@ -27,7 +27,15 @@ export interface StructureInputProps {
 }
 
 /** The one structure input of the app: draw, paste or drop, with the server's live check beside it. */
-export function StructureInput({ value, onChange, label = 'Structure', required, error, defaultMode = 'draw', extra }: StructureInputProps) {
+export function StructureInput({
+  value,
+  onChange,
+  label = 'Structure',
+  required,
+  error,
+  defaultMode = 'draw',
+  extra,
+}: StructureInputProps) {
   const base = useId();
   const [mode, setMode] = useState<InputMode>(defaultMode);
   const [drawOpened, setDrawOpened] = useState(defaultMode === 'draw');
@@ -87,7 +95,10 @@ export function StructureInput({ value, onChange, label = 'Structure', required,
         }}
         onDragLeave={() => setDragging(false)}
         onDrop={onDrop}
-        className={`mt-1 rounded-plate border bg-surface ${dragging ? 'border-front ring-2 ring-front/30' : invalid ? 'border-failed/60' : 'border-line'}`}
+        className={
+          `mt-1 rounded-plate border bg-surface ` +
+          `${dragging ? 'border-front ring-2 ring-front/30' : invalid ? 'border-failed/60' : 'border-line'}`
+        }
       >
         <div className="flex items-center justify-between gap-2 border-b border-line px-2">
           <ModeTabs base={base} active={mode} onSelect={select} labelledBy={labelId} />
@@ -105,15 +116,33 @@ export function StructureInput({ value, onChange, label = 'Structure', required,
                 aria-labelledby={tabId(base, 'draw')}
                 className={mode === 'draw' ? '' : 'invisible absolute inset-x-0 top-0'}
               >
-                <p className="mb-2 text-xs text-ink-soft sm:hidden">The editor wants a fine pointer; with a thumb, Paste a SMILES or pick a recent compound.</p>
+                <p className="mb-2 text-xs text-ink-soft sm:hidden">
+                  The editor wants a fine pointer; with a thumb, Paste a SMILES or pick a recent compound.
+                </p>
                 <DrawPanel value={value} onChange={edit} labelledBy={labelId} />
               </div>
             )}
-            <div role="tabpanel" id={panelId(base, 'paste')} aria-labelledby={tabId(base, 'paste')} hidden={mode !== 'paste'}>
-              <PastePanel value={value} onChange={edit} onFile={takeFile} required={required} invalid={invalid} describedBy={errorId} />
+            <div
+              role="tabpanel"
+              id={panelId(base, 'paste')}
+              aria-labelledby={tabId(base, 'paste')}
+              hidden={mode !== 'paste'}
+            >
+              <PastePanel
+                value={value}
+                onChange={edit}
+                onFile={takeFile}
+                required={required}
+                invalid={invalid}
+                describedBy={errorId}
+              />
               {extra}
             </div>
-            {note && <p className="mt-2 text-xs text-ink-soft" role="status">{note}</p>}
+            {note && (
+              <p className="mt-2 text-xs text-ink-soft" role="status">
+                {note}
+              </p>
+            )}
           </div>
           <ParseStatus value={value} check={check} />
         </div>

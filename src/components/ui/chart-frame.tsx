@@ -9,7 +9,12 @@ export interface ChartAxis {
 }
 
 export const frame = { width: 400, height: 260, left: 50, right: 12, top: 24, bottom: 42 };
-export const plotBox = { x0: frame.left, x1: frame.width - frame.right, y0: frame.height - frame.bottom, y1: frame.top };
+export const plotBox = {
+  x0: frame.left,
+  x1: frame.width - frame.right,
+  y0: frame.height - frame.bottom,
+  y1: frame.top,
+};
 
 export const axisTitle = (a: ChartAxis) => (a.unit ? `${a.label} (${a.unit})` : a.label);
 
@@ -51,7 +56,11 @@ export function Axes({ x, y, xDomain, yDomain, sx, sy }: AxesProps) {
       <text x={(plotBox.x0 + plotBox.x1) / 2} y={frame.height - 6} textAnchor="middle" className="fill-ink">
         {axisTitle(x)}
       </text>
-      <text transform={`translate(13 ${(plotBox.y0 + plotBox.y1) / 2}) rotate(-90)`} textAnchor="middle" className="fill-ink">
+      <text
+        transform={`translate(13 ${(plotBox.y0 + plotBox.y1) / 2}) rotate(-90)`}
+        textAnchor="middle"
+        className="fill-ink"
+      >
         {axisTitle(y)}
       </text>
     </g>
@@ -59,11 +68,26 @@ export function Axes({ x, y, xDomain, yDomain, sx, sy }: AxesProps) {
 }
 
 /** A captioned figure: the SVG is one image for assistive technology, with the numbers in a hidden table. */
-export function ChartFigure({ title, summary, table, children }: { title: string; summary: string; table: ReactNode; children: ReactNode }) {
+export function ChartFigure({
+  title,
+  summary,
+  table,
+  children,
+}: {
+  title: string;
+  summary: string;
+  table: ReactNode;
+  children: ReactNode;
+}) {
   return (
     <figure className="relative w-full">
       <figcaption className="mb-1 text-sm font-medium text-ink">{title}</figcaption>
-      <svg role="img" aria-label={`${title}. ${summary}`} viewBox={`0 0 ${frame.width} ${frame.height}`} className="h-auto w-full max-w-lg">
+      <svg
+        role="img"
+        aria-label={`${title}. ${summary}`}
+        viewBox={`0 0 ${frame.width} ${frame.height}`}
+        className="h-auto w-full max-w-lg"
+      >
         {children}
       </svg>
       {/* In a hidden box, not a hidden table: a table never shrinks below its content, and would widen the page. */}

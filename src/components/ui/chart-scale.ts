@@ -42,7 +42,11 @@ export interface Bin {
 /** Counts values into equal bins of `width` starting at `from` (a value on an edge goes to the upper bin; the last bin is closed). */
 export function binValues(values: number[], from: number, to: number, width: number): Bin[] {
   const n = Math.max(1, Math.ceil((to - from) / width - 1e-9));
-  const bins: Bin[] = Array.from({ length: n }, (_, i) => ({ from: from + i * width, to: Math.min(to, from + (i + 1) * width), count: 0 }));
+  const bins: Bin[] = Array.from({ length: n }, (_, i) => ({
+    from: from + i * width,
+    to: Math.min(to, from + (i + 1) * width),
+    count: 0,
+  }));
   for (const v of values) {
     if (!Number.isFinite(v) || v < from || v > to) continue;
     bins[Math.min(n - 1, Math.floor((v - from) / width + 1e-9))].count++;

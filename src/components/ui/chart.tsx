@@ -38,7 +38,9 @@ export function Scatter({ title, x, y, points, fit }: ScatterProps) {
         .map((p, i) => `${i ? 'L' : 'M'}${sx(p.vx).toFixed(1)} ${sy(p.vy).toFixed(1)}`)
         .join(' ')
     : '';
-  const summary = `${points.length} point${points.length === 1 ? '' : 's'} of ${axisTitle(y)} against ${axisTitle(x)}${fit ? `; line: ${fit.label}` : ''}.`;
+  const summary =
+    `${points.length} point${points.length === 1 ? '' : 's'} of ${axisTitle(y)} against ` +
+    `${axisTitle(x)}${fit ? `; line: ${fit.label}` : ''}.`;
   return (
     <ChartFigure
       title={title}
@@ -61,10 +63,22 @@ export function Scatter({ title, x, y, points, fit }: ScatterProps) {
       }
     >
       <Axes x={x} y={y} xDomain={xDomain} yDomain={yDomain} sx={sx} sy={sy} />
-      {curve && <path data-part="fit" d={curve} fill="none" className="stroke-front" strokeWidth={1.5} strokeDasharray="5 3" />}
+      {curve && (
+        <path data-part="fit" d={curve} fill="none" className="stroke-front" strokeWidth={1.5} strokeDasharray="5 3" />
+      )}
       {points.map((p, i) => (
-        <circle key={i} data-part="point" cx={sx(p.x)} cy={sy(p.y)} r={p.highlight ? 5 : 4} className={p.highlight ? 'fill-spot stroke-spot-dark' : 'fill-ink-soft/80 stroke-surface'}>
-          <title>{`${p.label ? p.label + ': ' : ''}${fmt(p.x)}${x.unit ? ' ' + x.unit : ''}, ${fmt(p.y)}${y.unit ? ' ' + y.unit : ''}`}</title>
+        <circle
+          key={i}
+          data-part="point"
+          cx={sx(p.x)}
+          cy={sy(p.y)}
+          r={p.highlight ? 5 : 4}
+          className={p.highlight ? 'fill-spot stroke-spot-dark' : 'fill-ink-soft/80 stroke-surface'}
+        >
+          <title>
+            {`${p.label ? p.label + ': ' : ''}${fmt(p.x)}${x.unit ? ' ' + x.unit : ''}, ` +
+              `${fmt(p.y)}${y.unit ? ' ' + y.unit : ''}`}
+          </title>
         </circle>
       ))}
       {fit && (
@@ -114,13 +128,29 @@ export function Histogram({ title, x, countLabel, bins, marker }: HistogramProps
     >
       <Axes x={x} y={{ label: countLabel }} xDomain={xDomain} yDomain={[0, yDomain[1]]} sx={sx} sy={sy} />
       {bins.map((b, i) => (
-        <rect key={i} data-part="bar" x={sx(b.from) + 1} width={Math.max(0, sx(b.to) - sx(b.from) - 2)} y={sy(b.count)} height={plotBox.y0 - sy(b.count)} className="fill-front/75">
+        <rect
+          key={i}
+          data-part="bar"
+          x={sx(b.from) + 1}
+          width={Math.max(0, sx(b.to) - sx(b.from) - 2)}
+          y={sy(b.count)}
+          height={plotBox.y0 - sy(b.count)}
+          className="fill-front/75"
+        >
           <title>{`${fmt(b.from)}–${fmt(b.to)}${x.unit ? ' ' + x.unit : ''}: ${b.count} ${countLabel}`}</title>
         </rect>
       ))}
       {marker && (
         <g className="fill-spot-dark">
-          <line x1={sx(marker.value)} x2={sx(marker.value)} y1={plotBox.y0} y2={plotBox.y1 - 4} className="stroke-spot-dark" strokeWidth={2} strokeDasharray="4 2" />
+          <line
+            x1={sx(marker.value)}
+            x2={sx(marker.value)}
+            y1={plotBox.y0}
+            y2={plotBox.y1 - 4}
+            className="stroke-spot-dark"
+            strokeWidth={2}
+            strokeDasharray="4 2"
+          />
           <text x={sx(marker.value)} y={plotBox.y1 - 8} fontSize={11} textAnchor="middle">
             {marker.label}
           </text>

@@ -33,7 +33,9 @@ export function Field({ label, hint, error, required, children, className = '' }
         {label}
         {required && <span className="ml-1 text-xs font-normal text-ink-soft">(required)</span>}
       </label>
-      <div className="mt-1">{children({ id, 'aria-describedby': describedBy, 'aria-invalid': error ? true : undefined })}</div>
+      <div className="mt-1">
+        {children({ id, 'aria-describedby': describedBy, 'aria-invalid': error ? true : undefined })}
+      </div>
       {hint && (
         <p id={hintId} className="mt-1 text-xs text-ink-soft">
           {hint}
@@ -51,7 +53,14 @@ export function Field({ label, hint, error, required, children, className = '' }
 type Common = { label: ReactNode; hint?: ReactNode; error?: ReactNode; className?: string };
 
 /** A labelled text input (`mono` for SMILES, ratios and other figures). */
-export function TextField({ label, hint, error, className, mono, ...input }: Common & { mono?: boolean } & InputHTMLAttributes<HTMLInputElement>) {
+export function TextField({
+  label,
+  hint,
+  error,
+  className,
+  mono,
+  ...input
+}: Common & { mono?: boolean } & InputHTMLAttributes<HTMLInputElement>) {
   return (
     <Field label={label} hint={hint} error={error} required={input.required} className={className}>
       {(ids) => <input {...input} {...ids} className={`${controlClass} ${mono ? 'figure' : ''}`} />}
@@ -60,7 +69,14 @@ export function TextField({ label, hint, error, className, mono, ...input }: Com
 }
 
 /** A labelled multi-line text box. */
-export function TextAreaField({ label, hint, error, className, mono, ...area }: Common & { mono?: boolean } & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+export function TextAreaField({
+  label,
+  hint,
+  error,
+  className,
+  mono,
+  ...area
+}: Common & { mono?: boolean } & TextareaHTMLAttributes<HTMLTextAreaElement>) {
   return (
     <Field label={label} hint={hint} error={error} required={area.required} className={className}>
       {(ids) => <textarea {...area} {...ids} className={`${controlClass} ${mono ? 'figure text-sm' : ''}`} />}

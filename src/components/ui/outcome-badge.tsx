@@ -5,7 +5,12 @@ export type Outcome = (typeof outcomes)[number];
 
 const looks: Record<Outcome, { label: string; mark: string; className: string; meaning: string }> = {
   clean: { label: 'Clean', mark: '●', className: 'border-clean/40 text-clean', meaning: 'target isolated pure' },
-  partial: { label: 'Partial', mark: '◐', className: 'border-partial/40 text-partial', meaning: 'some mixed fractions' },
+  partial: {
+    label: 'Partial',
+    mark: '◐',
+    className: 'border-partial/40 text-partial',
+    meaning: 'some mixed fractions',
+  },
   failed: { label: 'Failed', mark: '✕', className: 'border-failed/40 text-failed', meaning: 'no useful separation' },
 };
 

@@ -39,18 +39,35 @@ const subscribe = (listener: () => void) => {
 
 /** Where toasts appear: bottom right, above the page, mounted once in the app layout. */
 export function Toaster() {
-  const current = useSyncExternalStore(subscribe, () => toasts, () => toasts);
+  const current = useSyncExternalStore(
+    subscribe,
+    () => toasts,
+    () => toasts,
+  );
   return (
-    <div aria-live="polite" className="pointer-events-none fixed bottom-4 right-4 z-50 flex w-80 max-w-[calc(100vw-2rem)] flex-col gap-2">
+    <div
+      aria-live="polite"
+      className="pointer-events-none fixed bottom-4 right-4 z-50 flex w-80 max-w-[calc(100vw-2rem)] flex-col gap-2"
+    >
       {current.map((toast) => (
         <div
           key={toast.id}
           role="status"
-          className={`pointer-events-auto rounded-plate border bg-surface px-4 py-3 shadow-md ${toast.tone === 'problem' ? 'border-failed' : 'border-front'}`}
+          className={
+            `pointer-events-auto rounded-plate border bg-surface px-4 py-3 shadow-md ` +
+            `${toast.tone === 'problem' ? 'border-failed' : 'border-front'}`
+          }
         >
           <div className="flex items-start justify-between gap-3">
-            <p className={`text-sm font-semibold ${toast.tone === 'problem' ? 'text-failed' : 'text-front-dark'}`}>{toast.title}</p>
-            <button type="button" onClick={() => dismissToast(toast.id)} className="text-ink-soft hover:text-ink" aria-label="Dismiss">
+            <p className={`text-sm font-semibold ${toast.tone === 'problem' ? 'text-failed' : 'text-front-dark'}`}>
+              {toast.title}
+            </p>
+            <button
+              type="button"
+              onClick={() => dismissToast(toast.id)}
+              className="text-ink-soft hover:text-ink"
+              aria-label="Dismiss"
+            >
               ×
             </button>
           </div>

@@ -28,7 +28,8 @@ export interface FuzzContext {
 const notFuzzed = new Set(['POST /api/auth/logout']);
 
 function expectStatus(res: { status: number; body: unknown }, want: number[], what: string) {
-  if (!want.includes(res.status)) throw new Error(`fuzz setup: ${what} answered ${res.status} ${JSON.stringify(res.body)}`);
+  if (!want.includes(res.status))
+    throw new Error(`fuzz setup: ${what} answered ${res.status} ${JSON.stringify(res.body)}`);
 }
 
 /** A fresh admin signed in through the API, holding its session cookie and CSRF token. */
@@ -36,7 +37,10 @@ async function signedInAdmin(target: Express | string): Promise<Agent> {
   const admin = await createUser('admin');
   const agent = request.agent(target as Express) as Agent;
   const { token } = (await agent.get('/api/auth/csrf')).body as { token: string };
-  const login = await agent.post('/api/auth/login').set('X-CSRF-Token', token).send({ email: admin.email, password: TEST_PASSWORD });
+  const login = await agent
+    .post('/api/auth/login')
+    .set('X-CSRF-Token', token)
+    .send({ email: admin.email, password: TEST_PASSWORD });
   expectStatus(login, [200], 'POST /api/auth/login');
   agent.csrf = login.body.csrfToken;
   agent.user = admin;
@@ -54,13 +58,25 @@ export async function prepareFuzz(app: Express, target: Express | string = app):
   const second = await postRecord(agent, { notes: 'fuzz target two', spots: [{ role: 'target', rf: 0.31 }] });
   expectStatus(first, [201], 'POST /api/records');
   expectStatus(second, [201], 'POST /api/records');
-  const png = await sharp({ create: { width: 40, height: 90, channels: 3, background: '#dde8d0' } }).png().toBuffer();
-  const photo = await agent.post(`/api/records/${first.body.id}/photos`).set('X-CSRF-Token', agent.csrf).attach('photo', png, 'plate.png');
+  const png = await sharp({ create: { width: 40, height: 90, channels: 3, background: '#dde8d0' } })
+    .png()
+    .toBuffer();
+  const photo = await agent
+    .post(`/api/records/${first.body.id}/photos`)
+    .set('X-CSRF-Token', agent.csrf)
+    .attach('photo', png, 'plate.png');
   expectStatus(photo, [201], 'POST /api/records/:id/photos');
-  const bookmark = await agent.post('/api/bookmarks').set('X-CSRF-Token', agent.csrf).send({ recordId: second.body.id });
+  const bookmark = await agent
+    .post('/api/bookmarks')
+    .set('X-CSRF-Token', agent.csrf)
+    .send({ recordId: second.body.id });
   expectStatus(bookmark, [201], 'POST /api/bookmarks');
-  const csv = 'name,smiles,eluent,rf\nbenzyl alcohol,OCc1ccccc1,EtOAc/hexanes 1:4,0.28\nbad row,C1CC,EtOAc/hexanes 1:4,1.7\n';
-  const imported = await agent.post('/api/imports?wait=10000').set('X-CSRF-Token', agent.csrf).attach('file', Buffer.from(csv), 'fuzz.csv');
+  const csv =
+    'name,smiles,eluent,rf\nbenzyl alcohol,OCc1ccccc1,EtOAc/hexanes 1:4,0.28\nbad row,C1CC,EtOAc/hexanes 1:4,1.7\n';
+  const imported = await agent
+    .post('/api/imports?wait=10000')
+    .set('X-CSRF-Token', agent.csrf)
+    .attach('file', Buffer.from(csv), 'fuzz.csv');
   expectStatus(imported, [201, 202], 'POST /api/imports');
   const api = routeTable(app).filter((route) => route.path.startsWith('/api/'));
   return {
@@ -71,7 +87,9 @@ export async function prepareFuzz(app: Express, target: Express | string = app):
     bookmarkId: bookmark.body.id,
     importId: imported.body.id,
     victimUserId: victim.id,
-    writeRoutes: api.filter((route) => ['POST', 'PATCH'].includes(route.method) && !notFuzzed.has(`${route.method} ${route.path}`)),
+    writeRoutes: api.filter(
+      (route) => ['POST', 'PATCH'].includes(route.method) && !notFuzzed.has(`${route.method} ${route.path}`),
+    ),
     paramRoutes: api.filter((route) => route.method === 'GET' && route.path.includes(':')),
     png,
   };

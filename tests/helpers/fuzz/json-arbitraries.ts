@@ -3,16 +3,84 @@ import { exampleRecordBody } from '../records';
 
 /** Field names the API's bodies use: bodies built from them reach past "unknown shape" into each schema's checks. */
 const apiKeys = [
-  'structure', 'compoundId', 'name', 'technique', 'stationaryPhase', 'stationaryPhaseOther', 'eluent', 'components', 'solvent', 'parts',
-  'additives', 'additive', 'percent', 'gradient', 'spots', 'role', 'rf', 'lane', 'visualisation', 'method', 'note', 'outcome',
-  'outcomeReason', 'column', 'diameterMm', 'silicaG', 'sampleMg', 'loadMethod', 'notebookRef', 'notes', 'expectedRevision', 'email',
-  'password', 'status', 'currentPassword', 'newPassword', 'recordId', 'recordIds', 'reason', 'survivorId', 'mergedIds', 'fields',
-  'targetRf', 'solventPair', 'weak', 'strong', 'phase', 'rfTarget', 'rfImpurity', 'from', 'to', 'adsorbent', '__proto__', 'constructor',
+  'structure',
+  'compoundId',
+  'name',
+  'technique',
+  'stationaryPhase',
+  'stationaryPhaseOther',
+  'eluent',
+  'components',
+  'solvent',
+  'parts',
+  'additives',
+  'additive',
+  'percent',
+  'gradient',
+  'spots',
+  'role',
+  'rf',
+  'lane',
+  'visualisation',
+  'method',
+  'note',
+  'outcome',
+  'outcomeReason',
+  'column',
+  'diameterMm',
+  'silicaG',
+  'sampleMg',
+  'loadMethod',
+  'notebookRef',
+  'notes',
+  'expectedRevision',
+  'email',
+  'password',
+  'status',
+  'currentPassword',
+  'newPassword',
+  'recordId',
+  'recordIds',
+  'reason',
+  'survivorId',
+  'mergedIds',
+  'fields',
+  'targetRf',
+  'solventPair',
+  'weak',
+  'strong',
+  'phase',
+  'rfTarget',
+  'rfImpurity',
+  'from',
+  'to',
+  'adsorbent',
+  '__proto__',
+  'constructor',
 ];
 
 const hostileValue = fc.oneof(
   fc.jsonValue({ maxDepth: 2 }),
-  fc.constantFrom(1e308, -1e308, 5e-324, -0, 0, -1, 2 ** 31, 2 ** 53 + 1, 1.5, '1', '', ' ', 'NaN', 'true', null, [], {}, [[[[]]]]),
+  fc.constantFrom(
+    1e308,
+    -1e308,
+    5e-324,
+    -0,
+    0,
+    -1,
+    2 ** 31,
+    2 ** 53 + 1,
+    1.5,
+    '1',
+    '',
+    ' ',
+    'NaN',
+    'true',
+    null,
+    [],
+    {},
+    [[[[]]]],
+  ),
   fc.integer({ min: 1_000, max: 300_000 }).map((n) => 'z'.repeat(n)),
   fc.string({ unit: 'binary', maxLength: 30 }),
 );
@@ -30,13 +98,15 @@ const apiShaped: fc.Arbitrary<unknown> = fc.letrec<{ node: unknown }>((tie) => (
 /** A valid body with one field replaced by a hostile value, dropped, or wrapped in an array. */
 function mutatedBody(valid: Record<string, unknown>): fc.Arbitrary<unknown> {
   const keys = Object.keys(valid);
-  return fc.tuple(fc.constantFrom(...keys), fc.constantFrom('replace', 'drop', 'wrap'), hostileValue).map(([key, how, value]) => {
-    const body: Record<string, unknown> = { ...valid };
-    if (how === 'drop') delete body[key];
-    else if (how === 'wrap') body[key] = [body[key]];
-    else body[key] = value;
-    return body;
-  });
+  return fc
+    .tuple(fc.constantFrom(...keys), fc.constantFrom('replace', 'drop', 'wrap'), hostileValue)
+    .map(([key, how, value]) => {
+      const body: Record<string, unknown> = { ...valid };
+      if (how === 'drop') delete body[key];
+      else if (how === 'wrap') body[key] = [body[key]];
+      else body[key] = value;
+      return body;
+    });
 }
 
 /** Valid bodies of the routes where a near-miss reaches deepest (paths as the route table names them). */
@@ -44,7 +114,12 @@ export const validBodies: Record<string, Record<string, unknown>> = {
   'POST /api/records': exampleRecordBody(),
   'PATCH /api/records/:id': { outcome: 'partial', outcomeReason: 'Tailing.', spots: [{ role: 'target', rf: 0.3 }] },
   'POST /api/structures/parse': { structure: 'OCc1ccccc1' },
-  'POST /api/scout': { structure: 'OCc1ccccc1', targetRf: 0.3, solventPair: { weak: 'hexanes', strong: 'EtOAc' }, phase: 'silica' },
+  'POST /api/scout': {
+    structure: 'OCc1ccccc1',
+    targetRf: 0.3,
+    solventPair: { weak: 'hexanes', strong: 'EtOAc' },
+    phase: 'silica',
+  },
   'POST /api/tools/column-plan': { sampleMg: 250, rfTarget: 0.3, rfImpurity: 0.45 },
   'POST /api/tools/translate-eluent': { from: 'EtOAc/hexanes 1:4', to: { weak: 'heptane', strong: 'EtOAc' } },
   'POST /api/bookmarks': { recordId: 1, note: 'fuzz' },
@@ -69,4 +144,11 @@ export const rawBody = fc.oneof(
   fc.constant(`{"notes":"${'n'.repeat(1_100_000)}"}`),
   fc.string({ unit: 'binary', maxLength: 50 }),
 );
-export const contentTypes = ['application/json', 'text/plain', 'application/x-www-form-urlencoded', 'multipart/form-data; boundary=x', 'application/json; charset=latin1', 'application/xml'];
+export const contentTypes = [
+  'application/json',
+  'text/plain',
+  'application/x-www-form-urlencoded',
+  'multipart/form-data; boundary=x',
+  'application/json; charset=latin1',
+  'application/xml',
+];

@@ -15,7 +15,9 @@ export async function expectNoServerErrors(ctx: FuzzContext, cases: fc.Arbitrary
     fc.asyncProperty(cases, async (fuzzCase) => {
       const answer = answerOf(await fuzzCase.send(ctx.agent));
       const verdict = verdictOf(answer);
-      const detail = `${fuzzCase.endpoint} ← ${fuzzCase.input}\n→ ${answer.status} ${JSON.stringify(answer.body).slice(0, 400)} ${unexplained(answer) ?? ''}`;
+      const detail =
+        `${fuzzCase.endpoint} ← ${fuzzCase.input}\n→ ${answer.status} ` +
+        `${JSON.stringify(answer.body).slice(0, 400)} ${unexplained(answer) ?? ''}`;
       expect(verdict, detail).not.toBe('server_error');
       expect(verdict, detail).not.toBe('unexplained_refusal');
     }),

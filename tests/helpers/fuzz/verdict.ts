@@ -8,7 +8,8 @@ export interface Answer {
 }
 
 /** Messages that name no reason: a refusal must say what was wrong. */
-const generic = /^(bad request|error|invalid( input| request)?|not found|forbidden|unprocessable( entity)?|failed|something went wrong)\.?$/i;
+const generic =
+  /^(bad request|error|invalid( input| request)?|not found|forbidden|unprocessable( entity)?|failed|something went wrong)\.?$/i;
 
 /** Why a refusal's body does not explain itself, or null when it does (`{ error: { code, message } }`, a real reason). */
 export function unexplained(answer: Answer): string | null {
@@ -16,7 +17,8 @@ export function unexplained(answer: Answer): string | null {
   const error = (answer.body as { error?: { code?: unknown; message?: unknown } } | null)?.error;
   if (!error || typeof error !== 'object') return 'no { error } object';
   if (typeof error.code !== 'string' || error.code.length === 0) return 'no error.code';
-  if (typeof error.message !== 'string' || error.message.trim().length < 12) return `message too short to say why: ${JSON.stringify(error.message)}`;
+  if (typeof error.message !== 'string' || error.message.trim().length < 12)
+    return `message too short to say why: ${JSON.stringify(error.message)}`;
   if (generic.test(error.message.trim())) return `generic message: ${error.message}`;
   return null;
 }
@@ -35,7 +37,12 @@ export class FuzzTally {
 
   add(endpoint: string, input: string, answer: Answer): Verdict {
     const verdict = verdictOf(answer);
-    const counts = this.byEndpoint.get(endpoint) ?? { accepted: 0, refused: 0, server_error: 0, unexplained_refusal: 0 };
+    const counts = this.byEndpoint.get(endpoint) ?? {
+      accepted: 0,
+      refused: 0,
+      server_error: 0,
+      unexplained_refusal: 0,
+    };
     counts[verdict]++;
     this.byEndpoint.set(endpoint, counts);
     if ((verdict === 'server_error' || verdict === 'unexplained_refusal') && this.offences.length < 50) {
@@ -47,7 +54,10 @@ export class FuzzTally {
 
   total(verdict?: Verdict): number {
     let n = 0;
-    for (const counts of this.byEndpoint.values()) n += verdict ? counts[verdict] : counts.accepted + counts.refused + counts.server_error + counts.unexplained_refusal;
+    for (const counts of this.byEndpoint.values())
+      n += verdict
+        ? counts[verdict]
+        : counts.accepted + counts.refused + counts.server_error + counts.unexplained_refusal;
     return n;
   }
 }

@@ -7,7 +7,13 @@ const idOf = (text: string) => identify(parseStructure(text).molecule);
 
 /** The same compounds written as different SMILES (atom order, ring labels, Kekulé vs aromatic, branches). */
 const SAME_COMPOUND: Record<string, string[]> = {
-  aspirin: ['CC(=O)Oc1ccccc1C(=O)O', 'OC(=O)c1ccccc1OC(C)=O', 'CC(=O)OC1=CC=CC=C1C(O)=O', 'c1cccc(C(=O)O)c1OC(=O)C', 'O=C(O)c1c(OC(C)=O)cccc1'],
+  aspirin: [
+    'CC(=O)Oc1ccccc1C(=O)O',
+    'OC(=O)c1ccccc1OC(C)=O',
+    'CC(=O)OC1=CC=CC=C1C(O)=O',
+    'c1cccc(C(=O)O)c1OC(=O)C',
+    'O=C(O)c1c(OC(C)=O)cccc1',
+  ],
   caffeine: ['Cn1cnc2c1c(=O)n(C)c(=O)n2C', 'CN1C=NC2=C1C(=O)N(C)C(=O)N2C', 'O=c1n(C)c(=O)c2n(C)cnc2n1C'],
   naphthalene: ['c1ccc2ccccc2c1', 'C1=CC=C2C=CC=CC2=C1', 'c12ccccc1cccc2'],
   indole: ['c1ccc2[nH]ccc2c1', 'N1C=CC2=CC=CC=C12', '[nH]1ccc2ccccc12'],

@@ -5,7 +5,8 @@ import { parseStructure } from '../../../server/chem/parse';
 
 /** Phenol as OpenChemLib writes it in V3000 (MDL CTfile format, V3000 connection table). */
 const phenolV3000 = () => Molecule.fromSmiles('Oc1ccccc1').toMolfileV3().split('\n');
-const atomLine = (lines: string[], n: number) => lines.findIndex((line) => line.startsWith(`M  V30 ${n} `) && !line.includes('COUNTS'));
+const atomLine = (lines: string[], n: number) =>
+  lines.findIndex((line) => line.startsWith(`M  V30 ${n} `) && !line.includes('COUNTS'));
 
 function refusal(text: string): StructureError {
   try {

@@ -30,7 +30,9 @@ describe('parseStructure reads the formats it is given', () => {
   });
 
   it('reads a molfile whose blank header lines were trimmed away when pasted', () => {
-    expect(parseStructure(alanineMolfile.trimStart()).molecule.getIDCode()).toBe(parseStructure(alanineMolfile).molecule.getIDCode());
+    expect(parseStructure(alanineMolfile.trimStart()).molecule.getIDCode()).toBe(
+      parseStructure(alanineMolfile).molecule.getIDCode(),
+    );
   });
 
   it('reads one SDF record with its data items', () => {
@@ -97,7 +99,7 @@ describe('parseStructure refuses bad input with a reason and a place', () => {
     expect(refusal('c1ccccc1*')).toMatchObject({ code: 'pseudo_atom', details: { position: 9 } });
   });
 
-  it('passes on the SMILES parser\'s own reason with the position counted from 1', () => {
+  it("passes on the SMILES parser's own reason with the position counted from 1", () => {
     const error = refusal('CCQ');
     expect(error.code).toBe('smiles_syntax');
     expect(error.details?.position).toBe(3);
@@ -121,16 +123,27 @@ describe('parseStructure refuses bad input with a reason and a place', () => {
   });
 
   it('refuses a garbage molfile whose counts line OpenChemLib would read as an empty molecule', () => {
-    expect(refusal('\n\n\n  0  0  0  0  0  0  0  0  0  0999 V2000\nM  END\n')).toMatchObject({ code: 'structure_empty' });
-    expect(refusal('title\nprogram\n\n  x  y  0  0  0  0  0  0  0  0999 V2000\n')).toMatchObject({ code: 'molfile_invalid', details: { line: 4 } });
+    expect(refusal('\n\n\n  0  0  0  0  0  0  0  0  0  0999 V2000\nM  END\n')).toMatchObject({
+      code: 'structure_empty',
+    });
+    expect(refusal('title\nprogram\n\n  x  y  0  0  0  0  0  0  0  0999 V2000\n')).toMatchObject({
+      code: 'molfile_invalid',
+      details: { line: 4 },
+    });
   });
 
   it('refuses an unknown element in a molfile as a pseudo atom on its line', () => {
-    expect(refusal(alanineMolfile.replace(' N   0', ' Xx  0'))).toMatchObject({ code: 'pseudo_atom', details: { line: 7 } });
+    expect(refusal(alanineMolfile.replace(' N   0', ' Xx  0'))).toMatchObject({
+      code: 'pseudo_atom',
+      details: { line: 7 },
+    });
   });
 
   it('refuses SDF text with several records when one structure is expected', () => {
-    expect(refusal(`${alanineMolfile}$$$$\n${alanineMolfile}$$$$\n`)).toMatchObject({ status: 422, code: 'sdf_several_records' });
+    expect(refusal(`${alanineMolfile}$$$$\n${alanineMolfile}$$$$\n`)).toMatchObject({
+      status: 422,
+      code: 'sdf_several_records',
+    });
   });
 });
 

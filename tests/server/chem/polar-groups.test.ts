@@ -1,11 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import { Molecule } from 'openchemlib';
-import { polarGroupCounts, polarGroupCountsOfSmiles, polarGroupKeys, type PolarGroupKey } from '../../../server/chem/polar-groups';
+import {
+  polarGroupCounts,
+  polarGroupCountsOfSmiles,
+  polarGroupKeys,
+  type PolarGroupKey,
+} from '../../../server/chem/polar-groups';
 
 /** The counted groups of a SMILES as a key → count record (zeros left out). */
 function groupsOf(smiles: string): Partial<Record<PolarGroupKey, number>> {
   const counts = polarGroupCounts(Molecule.fromSmiles(smiles));
-  return Object.fromEntries(polarGroupKeys.map((key, index) => [key, counts[index]]).filter(([, count]) => count !== 0));
+  return Object.fromEntries(
+    polarGroupKeys.map((key, index) => [key, counts[index]]).filter(([, count]) => count !== 0),
+  );
 }
 
 /** Functional-group assignments checked by hand (common practice). */
@@ -31,17 +38,25 @@ describe('polar group counts for Scout', () => {
     ['c1ccsc1', { 'thiophene-s': 1 }],
   ])('when %s is counted, then its polar groups are %o', (smiles, expected) => {
     const groups = groupsOf(smiles);
-    const polar = Object.fromEntries(Object.entries(groups).filter(([key]) => !['aromatic-carbon', 'aliphatic-carbon', 'alkene-carbon', 'polar-total'].includes(key)));
+    const polar = Object.fromEntries(
+      Object.entries(groups).filter(
+        ([key]) => !['aromatic-carbon', 'aliphatic-carbon', 'alkene-carbon', 'polar-total'].includes(key),
+      ),
+    );
     expect(polar).toEqual(expected);
     expect(groups['polar-total']).toBe(Object.values(expected).reduce((sum, count) => sum + count, 0));
   });
 
-  it('when a donor sits next to a carbonyl or nitro group (salicylaldehyde, 2-nitrophenol), then an intramolecular H-bond is counted, and not for the para isomers', () => {
-    expect(groupsOf('Oc1ccccc1C=O')['intramolecular-h-bond']).toBe(1);
-    expect(groupsOf('Oc1ccccc1[N+](=O)[O-]')['intramolecular-h-bond']).toBe(1);
-    expect(groupsOf('Oc1ccc(C=O)cc1')['intramolecular-h-bond']).toBeUndefined();
-    expect(groupsOf('Oc1ccc([N+](=O)[O-])cc1')['intramolecular-h-bond']).toBeUndefined();
-  });
+  it(
+    'when a donor sits next to a carbonyl or nitro group (salicylaldehyde, 2-nitrophenol), then an ' +
+      'intramolecular H-bond is counted, and not for the para isomers',
+    () => {
+      expect(groupsOf('Oc1ccccc1C=O')['intramolecular-h-bond']).toBe(1);
+      expect(groupsOf('Oc1ccccc1[N+](=O)[O-]')['intramolecular-h-bond']).toBe(1);
+      expect(groupsOf('Oc1ccc(C=O)cc1')['intramolecular-h-bond']).toBeUndefined();
+      expect(groupsOf('Oc1ccc([N+](=O)[O-])cc1')['intramolecular-h-bond']).toBeUndefined();
+    },
+  );
 
   it('when both ring neighbours of a pyridine nitrogen carry substituents (2,6-lutidine), then it is counted as shielded', () => {
     expect(groupsOf('Cc1cccc(C)n1')).toMatchObject({ 'pyridine-n-shielded': 1 });

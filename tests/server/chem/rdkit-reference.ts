@@ -21,7 +21,21 @@ export interface RdkitModule {
 }
 
 const SYMBOLS: Record<number, string> = {
-  1: 'H', 5: 'B', 6: 'C', 7: 'N', 8: 'O', 9: 'F', 11: 'Na', 14: 'Si', 15: 'P', 16: 'S', 17: 'Cl', 19: 'K', 34: 'Se', 35: 'Br', 53: 'I',
+  1: 'H',
+  5: 'B',
+  6: 'C',
+  7: 'N',
+  8: 'O',
+  9: 'F',
+  11: 'Na',
+  14: 'Si',
+  15: 'P',
+  16: 'S',
+  17: 'Cl',
+  19: 'K',
+  34: 'Se',
+  35: 'Br',
+  53: 'I',
 };
 
 let module: Promise<RdkitModule> | null = null;

@@ -2,7 +2,7 @@
 export function averageRanks(values: readonly number[]): number[] {
   const order = values.map((value, index) => ({ value, index })).sort((a, b) => a.value - b.value);
   const ranks = new Array<number>(values.length);
-  for (let start = 0; start < order.length; ) {
+  for (let start = 0; start < order.length;) {
     let end = start;
     while (end + 1 < order.length && order[end + 1].value === order[start].value) end += 1;
     for (let at = start; at <= end; at += 1) ranks[order[at].index] = (start + end) / 2 + 1;

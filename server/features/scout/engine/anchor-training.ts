@@ -40,7 +40,12 @@ export function pairOffset(target: PairData, other: PairData, epsilon: number): 
 }
 
 /** Training values of every compound at one anchor: measured there, read off its own line, or carried over. */
-export function anchorTraining(data: PairData, anchor: Anchor, others: readonly PairData[], compoundCount: number): AnchorTraining {
+export function anchorTraining(
+  data: PairData,
+  anchor: Anchor,
+  others: readonly PairData[],
+  compoundCount: number,
+): AnchorTraining {
   const rows: { index: number; y: number; weight: number; source: TrainingSource; via: string | null }[] = [];
   const offsets = new Map<string, number>();
   for (let compound = 0; compound < compoundCount; compound++) {
@@ -51,10 +56,18 @@ export function anchorTraining(data: PairData, anchor: Anchor, others: readonly 
     }
     const line = data.lines.get(compound);
     if (line) {
-      rows.push({ index: compound, y: lineAt(line, anchor.epsilon), weight: imputedWeight * Math.exp(-distanceToSpan(line, anchor.epsilon) / fadeScale), source: 'own-line', via: null });
+      rows.push({
+        index: compound,
+        y: lineAt(line, anchor.epsilon),
+        weight: imputedWeight * Math.exp(-distanceToSpan(line, anchor.epsilon) / fadeScale),
+        source: 'own-line',
+        via: null,
+      });
       continue;
     }
-    const best = others.filter((other) => other.lines.has(compound)).sort((a, b) => (b.lines.get(compound)?.points ?? 0) - (a.lines.get(compound)?.points ?? 0))[0];
+    const best = others
+      .filter((other) => other.lines.has(compound))
+      .sort((a, b) => (b.lines.get(compound)?.points ?? 0) - (a.lines.get(compound)?.points ?? 0))[0];
     if (!best) continue;
     if (!offsets.has(best.key)) offsets.set(best.key, pairOffset(data, best, anchor.epsilon));
     const otherLine = best.lines.get(compound)!;
@@ -66,7 +79,9 @@ export function anchorTraining(data: PairData, anchor: Anchor, others: readonly 
       via: best.key,
     });
   }
-  const kept = rows.sort((a, b) => Number(b.source === 'measured') - Number(a.source === 'measured') || b.weight - a.weight).slice(0, maxTraining);
+  const kept = rows
+    .sort((a, b) => Number(b.source === 'measured') - Number(a.source === 'measured') || b.weight - a.weight)
+    .slice(0, maxTraining);
   return {
     indices: Int32Array.from(kept, (row) => row.index),
     y: Float64Array.from(kept, (row) => row.y),

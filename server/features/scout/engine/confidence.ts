@@ -28,17 +28,42 @@ export const confidenceWidths = { high: 0.3, medium: 0.5 } as const;
 export function judgeConfidence(input: ConfidenceInput): Confidence {
   const { suggestion, basis, best, closeInPair, compoundsInPair } = input;
   const width = suggestion.interval[1] - suggestion.interval[0];
-  const byWidth: Confidence['level'] = width <= confidenceWidths.high + 1e-9 ? 'high' : width <= confidenceWidths.medium + 1e-9 ? 'medium' : 'low';
+  const byWidth: Confidence['level'] =
+    width <= confidenceWidths.high + 1e-9 ? 'high' : width <= confidenceWidths.medium + 1e-9 ? 'medium' : 'low';
   // Thin evidence caps the word (never raises it): an interval computed from next to nothing is not a reason to be sure.
-  const thin = basis === 'descriptors-only' || suggestion.found.borrowedFrom !== null || compoundsInPair < 5 || suggestion.reach !== 'within';
+  const thin =
+    basis === 'descriptors-only' ||
+    suggestion.found.borrowedFrom !== null ||
+    compoundsInPair < 5 ||
+    suggestion.reach !== 'within';
   const level: Confidence['level'] = thin ? 'low' : byWidth;
-  const rule = byWidth === 'low' ? `wider than ${confidenceWidths.medium.toFixed(2)} Rf` : `at most ${confidenceWidths[byWidth].toFixed(2)} Rf wide`;
-  const reasons = [`The 90 % interval spans ${two(width)} Rf (${two(suggestion.interval[0])}–${two(suggestion.interval[1])}); ${byWidth} means ${rule}${thin && byWidth !== 'low' ? ', but the evidence below is thin, so low' : ''}.`];
-  if (basis === 'descriptors-only') reasons.push(`No recorded compound is close (best similarity ${best ? two(best.similarity) : 'none'}): the estimate comes from descriptors alone.`);
-  else reasons.push(`Nearest recorded compound: similarity ${best ? two(best.similarity) : 'none'}; ${closeInPair} close neighbour${closeInPair === 1 ? '' : 's'} (≥ 0.7) recorded in this pair.`);
-  if (suggestion.found.borrowedFrom) reasons.push('Nothing was recorded in this pair; the ratio is translated from another pair at equal ε°.');
-  if (compoundsInPair < 5) reasons.push(`Only ${compoundsInPair} compound${compoundsInPair === 1 ? '' : 's'} recorded in this pair.`);
-  if (suggestion.reach !== 'within') reasons.push(suggestion.reach === 'too-polar' ? 'Even the pure strong solvent is predicted to leave the spot below the target.' : 'Even the weak solvent alone is predicted to move the spot past the target.');
+  const rule =
+    byWidth === 'low'
+      ? `wider than ${confidenceWidths.medium.toFixed(2)} Rf`
+      : `at most ${confidenceWidths[byWidth].toFixed(2)} Rf wide`;
+  const reasons = [
+    `The 90 % interval spans ${two(width)} Rf (${two(suggestion.interval[0])}–${two(suggestion.interval[1])}); ` +
+      `${byWidth} means ${rule}${thin && byWidth !== 'low' ? ', but the evidence below is thin, so low' : ''}.`,
+  ];
+  if (basis === 'descriptors-only')
+    reasons.push(
+      `No recorded compound is close (best similarity ${best ? two(best.similarity) : 'none'}): the estimate comes from descriptors alone.`,
+    );
+  else
+    reasons.push(
+      `Nearest recorded compound: similarity ${best ? two(best.similarity) : 'none'}; ${closeInPair} ` +
+        `close neighbour${closeInPair === 1 ? '' : 's'} (≥ 0.7) recorded in this pair.`,
+    );
+  if (suggestion.found.borrowedFrom)
+    reasons.push('Nothing was recorded in this pair; the ratio is translated from another pair at equal ε°.');
+  if (compoundsInPair < 5)
+    reasons.push(`Only ${compoundsInPair} compound${compoundsInPair === 1 ? '' : 's'} recorded in this pair.`);
+  if (suggestion.reach !== 'within')
+    reasons.push(
+      suggestion.reach === 'too-polar'
+        ? 'Even the pure strong solvent is predicted to leave the spot below the target.'
+        : 'Even the weak solvent alone is predicted to move the spot past the target.',
+    );
   if (suggestion.point.extrapolated) reasons.push('The ratio lies outside the compositions recorded in this pair.');
   return { level, reasons };
 }

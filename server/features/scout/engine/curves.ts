@@ -43,12 +43,18 @@ export function pooledSlope(groups: Iterable<readonly RetentionPoint[]>): number
 const slopePriorWeight = 0.2;
 /** With three or more strengths the data carry the slope: the prior is kept only as a weak tie-breaker. */
 const bentSlopePriorWeight = 0.002;
-/** Ridge on the curvature c (RM per ε°²), tiny: ε° steps of a pair are ~0.02–0.1, so x⁴ terms are ~1e-6 and a real bend needs c of order 10–1000. */
+/**
+ * Ridge on the curvature c (RM per ε°²), tiny: ε° steps of a pair are ~0.02–0.1, so x⁴ terms are ~1e-6 and a real bend
+ * needs c of order 10–1000.
+ */
 const curvaturePenalty = 1e-7;
 
 /** Solves a 3 × 3 linear system by Cramer's rule (null when singular). */
 function solve3(m: number[][], r: number[]): [number, number, number] | null {
-  const det = (a: number[][]) => a[0][0] * (a[1][1] * a[2][2] - a[1][2] * a[2][1]) - a[0][1] * (a[1][0] * a[2][2] - a[1][2] * a[2][0]) + a[0][2] * (a[1][0] * a[2][1] - a[1][1] * a[2][0]);
+  const det = (a: number[][]) =>
+    a[0][0] * (a[1][1] * a[2][2] - a[1][2] * a[2][1]) -
+    a[0][1] * (a[1][0] * a[2][2] - a[1][2] * a[2][0]) +
+    a[0][2] * (a[1][0] * a[2][1] - a[1][1] * a[2][0]);
   const d = det(m);
   if (Math.abs(d) < 1e-12) return null;
   const column = (k: number) => m.map((row, i) => row.map((value, j) => (j === k ? r[i] : value)));
@@ -89,7 +95,14 @@ export function fitLine(points: readonly RetentionPoint[], prior: number, centre
   const span: [number, number] = [Math.min(...strengths), Math.max(...strengths)];
   const distinct = new Set(strengths.map((value) => Math.round(value * 1e4))).size;
   if (distinct >= 3) {
-    const solved = solve3([[n, sx, sxx], [sx, sxx + bentSlopePriorWeight, sx3], [sxx, sx3, sx4 + curvaturePenalty]], [sy, sxy + bentSlopePriorWeight * prior, sxxy]);
+    const solved = solve3(
+      [
+        [n, sx, sxx],
+        [sx, sxx + bentSlopePriorWeight, sx3],
+        [sxx, sx3, sx4 + curvaturePenalty],
+      ],
+      [sy, sxy + bentSlopePriorWeight * prior, sxxy],
+    );
     if (solved) return { a: solved[0], b: solved[1], c: solved[2], centre, span, points: n };
   }
   const b11 = sxx + slopePriorWeight;
@@ -109,4 +122,5 @@ export function lineAt(line: RetentionLine, epsilon: number): number {
 }
 
 /** Distance in ε° from a strength to the span a line was measured over (0 inside it). */
-export const distanceToSpan = (line: RetentionLine, epsilon: number) => Math.max(line.span[0] - epsilon, epsilon - line.span[1], 0);
+export const distanceToSpan = (line: RetentionLine, epsilon: number) =>
+  Math.max(line.span[0] - epsilon, epsilon - line.span[1], 0);

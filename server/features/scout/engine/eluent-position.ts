@@ -34,7 +34,13 @@ export function pairEpsilon(pair: SolventPair, strongFraction: number, adsorbent
   const key = `${adsorbent}|${pair.weak}|${pair.strong}|${strongFraction.toFixed(5)}`;
   let epsilon = strengthCache.get(key);
   if (epsilon === undefined) {
-    const result = mixtureStrength([{ solvent: pair.weak, parts: 1 - strongFraction }, { solvent: pair.strong, parts: strongFraction }].filter((part) => part.parts > 0), adsorbent);
+    const result = mixtureStrength(
+      [
+        { solvent: pair.weak, parts: 1 - strongFraction },
+        { solvent: pair.strong, parts: strongFraction },
+      ].filter((part) => part.parts > 0),
+      adsorbent,
+    );
     if (!result.ok) throw new RangeError(result.message);
     epsilon = result.epsilon;
     if (strengthCache.size > 50_000) strengthCache.clear();
@@ -62,7 +68,10 @@ export function orderPair(a: string, b: string, adsorbent: Adsorbent): SolventPa
  * The position of an eluent given as parts by volume: a pure solvent or a two-solvent pair. Mixtures of
  * three or more solvents, and solvents with no ε° on the adsorbent, have no position (null).
  */
-export function positionOf(components: readonly { solvent: string; parts: number }[], adsorbent: Adsorbent): EluentPosition | null {
+export function positionOf(
+  components: readonly { solvent: string; parts: number }[],
+  adsorbent: Adsorbent,
+): EluentPosition | null {
   const present = components.filter((part) => part.parts > 0);
   if (present.length === 1) {
     const epsilon = solventEpsilon(present[0].solvent, adsorbent);
@@ -73,7 +82,13 @@ export function positionOf(components: readonly { solvent: string; parts: number
   if (!pair) return null;
   const total = present[0].parts + present[1].parts;
   const strongFraction = (present.find((part) => part.solvent === pair.strong) as { parts: number }).parts / total;
-  return { kind: 'pair', pair, key: pairKey(pair), strongFraction, epsilon: pairEpsilon(pair, strongFraction, adsorbent) };
+  return {
+    kind: 'pair',
+    pair,
+    key: pairKey(pair),
+    strongFraction,
+    epsilon: pairEpsilon(pair, strongFraction, adsorbent),
+  };
 }
 
 /** The pair's label as chemists write it, strong first: "EtOAc/hexanes". */

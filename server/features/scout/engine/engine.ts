@@ -36,14 +36,23 @@ export function chooseVariant(ranked: readonly SimilarCompound[]): ModelVariant 
 }
 
 /** The query's predicted Rf in an eluent on a phase (for evaluation and checks); same model as `scout`. */
-export function predictRf(model: ScoutModel, query: ScoutQuery, phase: string, components: readonly { solvent: string; parts: number }[]): EluentPrediction | null {
+export function predictRf(
+  model: ScoutModel,
+  query: ScoutQuery,
+  phase: string,
+  components: readonly { solvent: string; parts: number }[],
+): EluentPrediction | null {
   const adsorbent = adsorbentOf(phase);
   if (!adsorbent) return null;
   const variant = chooseVariant(rankBySimilarity(model, query));
   return predictInEluent(model, adsorbent, components, variant, model.queryKernel(query, variant));
 }
 
-function curvePoints(model: ScoutModel, suggestion: RatioSuggestion, adsorbent: NonNullable<ReturnType<typeof adsorbentOf>>) {
+function curvePoints(
+  model: ScoutModel,
+  suggestion: RatioSuggestion,
+  adsorbent: NonNullable<ReturnType<typeof adsorbentOf>>,
+) {
   return ladderSteps().map((step) => {
     const point = curveAt(suggestion.found.curve, pairEpsilon(suggestion.pair, step.strongFraction, adsorbent));
     const [lower, upper] = rfInterval(point.rm, point.sd, model.readingError);
@@ -57,7 +66,8 @@ function curvePoints(model: ScoutModel, suggestion: RatioSuggestion, adsorbent: 
  */
 export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOptions = {}): ScoutEngineResult {
   const targetRf = options.targetRf ?? 0.3;
-  if (!(targetRf >= scoutTargetRange[0] && targetRf <= scoutTargetRange[1])) throw new ScoutOptionError(`The target Rf must lie between ${scoutTargetRange[0]} and ${scoutTargetRange[1]}.`);
+  if (!(targetRf >= scoutTargetRange[0] && targetRf <= scoutTargetRange[1]))
+    throw new ScoutOptionError(`The target Rf must lie between ${scoutTargetRange[0]} and ${scoutTargetRange[1]}.`);
   const k = options.k ?? 8;
   const ranked = rankBySimilarity(model, query);
   const close = ranked.slice(0, 2 * k).filter((item) => item.similarity >= closeSimilarity);
@@ -70,11 +80,18 @@ export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOption
   let suggestion: RatioSuggestion | null = null;
   let pairNote: string | null = null;
   let noSuggestion: string | null = null;
-  if (!adsorbent) noSuggestion = `Scout's strength model (Snyder's ε°) covers silica and alumina only; for ${phase.name}, see the neighbours' conditions.`;
+  if (!adsorbent)
+    noSuggestion =
+      `Scout's strength model (Snyder's ε°) covers silica and alumina only; for ${phase.name}, ` +
+      `see the neighbours' conditions.`;
   else {
     if (options.solventPair) {
       const pair = orderPair(options.solventPair.weak, options.solventPair.strong, adsorbent);
-      if (!pair) throw new ScoutOptionError(`No strength order is known for ${options.solventPair.weak} and ${options.solventPair.strong} on ${adsorbent} (ε° missing or equal).`);
+      if (!pair)
+        throw new ScoutOptionError(
+          `No strength order is known for ${options.solventPair.weak} and ${options.solventPair.strong} ` +
+            `on ${adsorbent} (ε° missing or equal).`,
+        );
       suggestion = suggestRatio(model, adsorbent, pair, variant, kernel, targetRf);
     } else {
       const vote = voteForPair(model, ranked, adsorbent, own);
@@ -82,13 +99,23 @@ export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOption
       if (suggestion) pairNote = vote.note;
       else suggestion = suggestBestPair(model, adsorbent, variant, kernel, targetRf);
     }
-    if (!suggestion) noSuggestion = `No Rf has been recorded on ${adsorbent} yet; record a few plates and Scout will learn from them.`;
+    if (!suggestion)
+      noSuggestion = `No Rf has been recorded on ${adsorbent} yet; record a few plates and Scout will learn from them.`;
   }
-  const weighted = suggestion ? contributions(model, suggestion.found.curve.data, variant, kernel, suggestion.point) : [];
+  const weighted = suggestion
+    ? contributions(model, suggestion.found.curve.data, variant, kernel, suggestion.point)
+    : [];
   const shares = new Map(weighted.map((item) => [item.index, item.share]));
   const stains = stainAdvice(model, close, query.classes);
   const headline = firstPlate({
-    model, query, ranked, suggestion, phase, options, targetRf, pairNote,
+    model,
+    query,
+    ranked,
+    suggestion,
+    phase,
+    options,
+    targetRf,
+    pairNote,
     suggestIn: (pair) => (adsorbent ? suggestRatio(model, adsorbent, pair, variant, kernel, targetRf) : null),
   });
   const basis = variant === 'full' ? 'neighbours-and-descriptors' : 'descriptors-only';
@@ -99,13 +126,30 @@ export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOption
     const label = ratioLabel(suggestion.pair, suggestion.parts);
     const data = suggestion.found.curve.data;
     const closeInPair = ranked.filter((item) => item.similarity >= 0.7 && data.points.has(item.index)).length;
-    confidence = judgeConfidence({ suggestion, basis, best: ranked[0], closeInPair, compoundsInPair: suggestion.found.borrowedFrom ? 0 : compoundsIn(data) });
+    confidence = judgeConfidence({
+      suggestion,
+      basis,
+      best: ranked[0],
+      closeInPair,
+      compoundsInPair: suggestion.found.borrowedFrom ? 0 : compoundsIn(data),
+    });
     evidence = suggestionEvidence(model, suggestion, adsorbent, targetRf, weighted, label.label, ranked);
     const pairOut = (pair: { weak: string; strong: string }) => ({ ...pair, label: pairLabel(pair) });
     output = {
-      phase, pair: pairOut(suggestion.pair), parts: suggestion.parts, strongPercent: 100 * suggestion.strongFraction, notation: label.notation, label: label.label,
-      epsilon: suggestion.epsilon, predictedRf: suggestion.rf, interval: suggestion.interval, reach: suggestion.reach, basis,
-      borrowedFrom: suggestion.found.borrowedFrom ? pairOut(suggestion.found.borrowedFrom) : null, curve: curvePoints(model, suggestion, adsorbent), components: label.components,
+      phase,
+      pair: pairOut(suggestion.pair),
+      parts: suggestion.parts,
+      strongPercent: 100 * suggestion.strongFraction,
+      notation: label.notation,
+      label: label.label,
+      epsilon: suggestion.epsilon,
+      predictedRf: suggestion.rf,
+      interval: suggestion.interval,
+      reach: suggestion.reach,
+      basis,
+      borrowedFrom: suggestion.found.borrowedFrom ? pairOut(suggestion.found.borrowedFrom) : null,
+      curve: curvePoints(model, suggestion, adsorbent),
+      components: label.components,
     };
   }
   return {
@@ -118,8 +162,17 @@ export function scout(model: ScoutModel, query: ScoutQuery, options: ScoutOption
     additives: additiveAdvice(model, close, query.classes).filter((item) => groups[item.purpose]),
     stains,
     confidence,
-    warnings: failureWarnings(model, own === undefined || close.some((item) => item.index === own) ? close : [{ index: own, similarity: 1 }, ...close], groups),
+    warnings: failureWarnings(
+      model,
+      own === undefined || close.some((item) => item.index === own) ? close : [{ index: own, similarity: 1 }, ...close],
+      groups,
+    ),
     evidence,
-    cautions: cautionsFor({ solventKeys: (headline?.components ?? output?.components ?? []).map((part) => part.solvent), stainKeys: stains.map((item) => item.stain), flashColumn: true, handlesSilica: true }),
+    cautions: cautionsFor({
+      solventKeys: (headline?.components ?? output?.components ?? []).map((part) => part.solvent),
+      stainKeys: stains.map((item) => item.stain),
+      flashColumn: true,
+      handlesSilica: true,
+    }),
   };
 }

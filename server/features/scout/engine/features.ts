@@ -6,7 +6,8 @@ const elements = ['C', 'H', 'N', 'O', 'S', 'F', 'Cl', 'Br', 'I', 'P', 'Si', 'B']
 /** Element counts read from a Hill formula ("C9H8O4", "C4H12N+"). */
 export function elementCounts(formula: string): Record<string, number> {
   const counts: Record<string, number> = {};
-  for (const [, symbol, count] of formula.matchAll(/([A-Z][a-z]?)(\d*)/g)) counts[symbol] = (counts[symbol] ?? 0) + (count ? Number(count) : 1);
+  for (const [, symbol, count] of formula.matchAll(/([A-Z][a-z]?)(\d*)/g))
+    counts[symbol] = (counts[symbol] ?? 0) + (count ? Number(count) : 1);
   return counts;
 }
 
@@ -19,10 +20,19 @@ export function descriptorVector(descriptors: ScoutDescriptors): number[] {
   const counts = elementCounts(descriptors.formula);
   const heavy = elements.filter((symbol) => symbol !== 'H').reduce((sum, symbol) => sum + (counts[symbol] ?? 0), 0);
   return [
-    descriptors.clogp, descriptors.tpsa, descriptors.hbd, descriptors.hba, descriptors.rotatableBonds, descriptors.aromaticRings,
-    descriptors.mw, descriptors.stereocentres, descriptors.charge,
+    descriptors.clogp,
+    descriptors.tpsa,
+    descriptors.hbd,
+    descriptors.hba,
+    descriptors.rotatableBonds,
+    descriptors.aromaticRings,
+    descriptors.mw,
+    descriptors.stereocentres,
+    descriptors.charge,
     ...elements.map((symbol) => counts[symbol] ?? 0),
-    heavy, descriptors.tpsa / Math.max(heavy, 1), descriptors.clogp / Math.max(heavy, 1),
+    heavy,
+    descriptors.tpsa / Math.max(heavy, 1),
+    descriptors.clogp / Math.max(heavy, 1),
   ];
 }
 
@@ -39,7 +49,10 @@ export class Standardiser {
 
   constructor(rows: readonly number[][]) {
     const width = rows[0]?.length ?? 0;
-    this.means = Array.from({ length: width }, (_, column) => rows.reduce((sum, row) => sum + row[column], 0) / Math.max(rows.length, 1));
+    this.means = Array.from(
+      { length: width },
+      (_, column) => rows.reduce((sum, row) => sum + row[column], 0) / Math.max(rows.length, 1),
+    );
     this.sds = this.means.map((mean, column) => {
       const variance = rows.reduce((sum, row) => sum + (row[column] - mean) ** 2, 0) / Math.max(rows.length, 1);
       return variance > 1e-12 ? Math.sqrt(variance) : 1;
@@ -48,6 +61,8 @@ export class Standardiser {
 
   /** Standardised values, clipped to ±6 sd so one extreme descriptor cannot dominate a kernel. */
   apply(row: readonly number[]): Float64Array {
-    return Float64Array.from(row, (value, column) => Math.max(-6, Math.min(6, (value - this.means[column]) / this.sds[column])));
+    return Float64Array.from(row, (value, column) =>
+      Math.max(-6, Math.min(6, (value - this.means[column]) / this.sds[column])),
+    );
   }
 }

@@ -5,11 +5,17 @@ import type { ScoutMeasurement, SolventPair } from './types';
 
 /** A measurement's eluent as records write it ("EtOAc : hexanes 1 : 4 + 1% Et3N"); a gradient names its last step. */
 export function measurementNotation(measurement: ScoutMeasurement): string {
-  const notation = formatEluent({ components: measurement.components, additives: measurement.additives, mode: 'isocratic', steps: [] });
+  const notation = formatEluent({
+    components: measurement.components,
+    additives: measurement.additives,
+    mode: 'isocratic',
+    steps: [],
+  });
   return measurement.mode === 'gradient' ? `gradient ending ${notation}` : notation;
 }
 
-export const measurementStrongPercent = (measurement: ScoutMeasurement) => strongPercentOf(measurement.components, measurement.phase);
+export const measurementStrongPercent = (measurement: ScoutMeasurement) =>
+  strongPercentOf(measurement.components, measurement.phase);
 
 /** % v/v with at most one decimal ("20", "16.7"). */
 export const formatPercent = (percent: number) => formatNumber(percent, 1);
@@ -25,14 +31,23 @@ export function ratioLabel(pair: SolventPair, parts: readonly [number, number]):
   const strong = requireSolvent(pair.strong).label;
   const weak = requireSolvent(pair.weak).label;
   const [strongParts, weakParts] = parts;
-  if (weakParts === 0) return { notation: `100 % ${strong}`, label: `100 % ${strong}`, components: [{ solvent: pair.strong, parts: 1 }] };
-  if (strongParts === 0) return { notation: `100 % ${weak}`, label: `100 % ${weak} (no ${strong})`, components: [{ solvent: pair.weak, parts: 1 }] };
+  if (weakParts === 0)
+    return { notation: `100 % ${strong}`, label: `100 % ${strong}`, components: [{ solvent: pair.strong, parts: 1 }] };
+  if (strongParts === 0)
+    return {
+      notation: `100 % ${weak}`,
+      label: `100 % ${weak} (no ${strong})`,
+      components: [{ solvent: pair.weak, parts: 1 }],
+    };
   const notation = `${strong} : ${weak} ${formatParts(strongParts)} : ${formatParts(weakParts)}`;
   const percent = (100 * strongParts) / (strongParts + weakParts);
   return {
     notation,
     label: `${notation} (${formatPercent(percent)} % ${strong})`,
-    components: [{ solvent: pair.strong, parts: strongParts }, { solvent: pair.weak, parts: weakParts }],
+    components: [
+      { solvent: pair.strong, parts: strongParts },
+      { solvent: pair.weak, parts: weakParts },
+    ],
   };
 }
 

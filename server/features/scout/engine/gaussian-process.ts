@@ -35,7 +35,13 @@ function quantile(values: number[], q: number): number {
 }
 
 /** Fits the process; `kernel(i, j)` is evaluated on positions in `indices`. */
-export function fitGp(indices: Int32Array, y: Float64Array, weights: Float64Array, noise: number, kernel: (i: number, j: number) => number): GpFit {
+export function fitGp(
+  indices: Int32Array,
+  y: Float64Array,
+  weights: Float64Array,
+  noise: number,
+  kernel: (i: number, j: number) => number,
+): GpFit {
   const n = indices.length;
   let weightSum = 0;
   let mean = 0;
@@ -54,11 +60,16 @@ export function fitGp(indices: Int32Array, y: Float64Array, weights: Float64Arra
     matrix[i * n + i] += noise / weights[i];
   }
   const lower = cholesky(matrix, n);
-  const alpha = solveCholesky(lower, n, Float64Array.from(y, (value) => value - mean));
+  const alpha = solveCholesky(
+    lower,
+    n,
+    Float64Array.from(y, (value) => value - mean),
+  );
   const inverse = inverseDiagonal(lower, n);
   const squared: number[] = [];
   for (let i = 0; i < n; i++) if (weights[i] >= 1) squared.push(alpha[i] ** 2 / inverse[i]);
-  const calibration = squared.length >= 5 ? Math.min(6, Math.max(0.01, quantile(squared, calibrationLevel) / z90 ** 2)) : 1;
+  const calibration =
+    squared.length >= 5 ? Math.min(6, Math.max(0.01, quantile(squared, calibrationLevel) / z90 ** 2)) : 1;
   return { indices, mean, lower, alpha, noise, calibration };
 }
 

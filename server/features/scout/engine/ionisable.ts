@@ -11,7 +11,15 @@ export interface IonisableGroups {
   base: boolean;
 }
 
-const baseClasses = new Set(['primary-amine', 'secondary-amine', 'tertiary-amine', 'pyridine', 'imidazole', 'amino-acid', 'ammonium-salt']);
+const baseClasses = new Set([
+  'primary-amine',
+  'secondary-amine',
+  'tertiary-amine',
+  'pyridine',
+  'imidazole',
+  'amino-acid',
+  'ammonium-salt',
+]);
 const acidClasses = new Set(['carboxylic-acid', 'amino-acid']);
 const sulfonicCache = new Map<string, boolean>();
 
@@ -30,7 +38,8 @@ function hasSulfonicAcid(smiles: string): boolean {
         const other = mol.getConnAtom(atom, i);
         if (mol.getAtomicNo(other) !== 8) continue;
         if (mol.getConnBondOrder(atom, i) === 2) doubleO += 1;
-        else if (mol.getConnAtoms(other) === 1 && (mol.getAllHydrogens(other) > 0 || mol.getAtomCharge(other) < 0)) acidicO += 1;
+        else if (mol.getConnAtoms(other) === 1 && (mol.getAllHydrogens(other) > 0 || mol.getAtomCharge(other) < 0))
+          acidicO += 1;
       }
       found = doubleO >= 2 && acidicO >= 1;
     }
@@ -45,7 +54,9 @@ function hasSulfonicAcid(smiles: string): boolean {
 export function ionisableGroups(compound: { smiles: string; classes: readonly string[] }): IonisableGroups {
   return {
     base: compound.classes.some((key) => baseClasses.has(key)),
-    acid: compound.classes.some((key) => acidClasses.has(key)) || (compound.smiles.includes('S') && hasSulfonicAcid(compound.smiles)),
+    acid:
+      compound.classes.some((key) => acidClasses.has(key)) ||
+      (compound.smiles.includes('S') && hasSulfonicAcid(compound.smiles)),
   };
 }
 
@@ -56,4 +67,7 @@ export function groupsQueryLacks(query: IonisableGroups, other: IonisableGroups)
 
 export const sameGroups = (a: IonisableGroups, b: IonisableGroups) => a.acid === b.acid && a.base === b.base;
 
-export const groupWords = { base: 'a basic amine or pyridine-like nitrogen', acid: 'a carboxylic or sulfonic acid' } as const;
+export const groupWords = {
+  base: 'a basic amine or pyridine-like nitrogen',
+  acid: 'a carboxylic or sulfonic acid',
+} as const;

@@ -26,7 +26,13 @@ export interface KernelWeights {
   constant: number;
 }
 
-export const defaultKernelWeights: KernelWeights = { tanimoto: 1, descriptors: 1, classes: 0.5, gaussian: 0.5, constant: 1 };
+export const defaultKernelWeights: KernelWeights = {
+  tanimoto: 1,
+  descriptors: 1,
+  classes: 0.5,
+  gaussian: 0.5,
+  constant: 1,
+};
 
 /** Tanimoto coefficient of two 512-bit fingerprints (16 int32): common bits / bits in either. */
 export function tanimoto(a: Int32Array, aBits: number, b: Int32Array, bBits: number): number {
@@ -49,14 +55,20 @@ interface KernelInput {
 }
 
 /** Descriptors (features.ts) followed by the polar group counts (server/chem/polar-groups.ts). */
-const numericFeatures = (compound: KernelInput) => [...descriptorVector(compound.descriptors), ...polarGroupCountsOfSmiles(compound.smiles)];
+const numericFeatures = (compound: KernelInput) => [
+  ...descriptorVector(compound.descriptors),
+  ...polarGroupCountsOfSmiles(compound.smiles),
+];
 
 /** Prepares kernel points with standardisers fitted on the knowledge set's compounds. */
 export class KernelSpace {
   private readonly descriptorScale: Standardiser;
   private readonly classScale: Standardiser;
 
-  constructor(compounds: readonly KernelInput[], readonly weights: KernelWeights = defaultKernelWeights) {
+  constructor(
+    compounds: readonly KernelInput[],
+    readonly weights: KernelWeights = defaultKernelWeights,
+  ) {
     this.descriptorScale = new Standardiser(compounds.map(numericFeatures));
     this.classScale = new Standardiser(compounds.map((compound) => classVector(compound.classes)));
   }

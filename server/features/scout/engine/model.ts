@@ -17,7 +17,8 @@ export interface AnchorFit {
   gp: GpFit;
 }
 
-const variantWeights = (variant: ModelVariant): KernelWeights => (variant === 'full' ? defaultKernelWeights : { ...defaultKernelWeights, tanimoto: 0 });
+const variantWeights = (variant: ModelVariant): KernelWeights =>
+  variant === 'full' ? defaultKernelWeights : { ...defaultKernelWeights, tanimoto: 0 };
 
 /**
  * The Scout model of one knowledge set: compounds as kernel points, measurements placed on Snyder's ε° scale
@@ -70,7 +71,9 @@ export class ScoutModel {
   placedOn(adsorbent: Adsorbent): PlacedMeasurement[] {
     let placed = this.placed.get(adsorbent);
     if (!placed) {
-      const all = this.measurementsOf.flatMap((list, compound) => list.map((measurement) => ({ compound, measurement })));
+      const all = this.measurementsOf.flatMap((list, compound) =>
+        list.map((measurement) => ({ compound, measurement })),
+      );
       placed = placeMeasurements(all, adsorbent, adsorbentOf);
       this.placed.set(adsorbent, placed);
     }
@@ -121,7 +124,12 @@ export class ScoutModel {
       const others = this.pairsOn(data.adsorbent).filter((other) => other.key !== data.key);
       fits = data.anchors.map((anchor) => {
         const training = anchorTraining(data, anchor, others, this.compounds.length);
-        return { training, gp: fitGp(training.indices, training.y, training.weights, measurementNoise, (i, j) => this.kernel(variant, i, j)) };
+        return {
+          training,
+          gp: fitGp(training.indices, training.y, training.weights, measurementNoise, (i, j) =>
+            this.kernel(variant, i, j),
+          ),
+        };
       });
       this.fits.set(key, fits);
     }
@@ -132,7 +140,10 @@ export class ScoutModel {
   queryKernel(query: ScoutQuery, variant: ModelVariant): { values: Float64Array; self: number } {
     const point = this.space.point(query);
     const weights = variantWeights(variant);
-    return { values: Float64Array.from(this.points, (other) => this.space.value(point, other, weights)), self: this.space.value(point, point, weights) };
+    return {
+      values: Float64Array.from(this.points, (other) => this.space.value(point, other, weights)),
+      self: this.space.value(point, point, weights),
+    };
   }
 }
 
@@ -143,10 +154,17 @@ function repeatReadingError(measurementsOf: readonly ScoutMeasurement[][]): numb
     for (const item of list) {
       if (item.rf === null || item.mode !== 'isocratic') continue;
       const total = item.components.reduce((sum, part) => sum + part.parts, 0);
-      const key = `${item.phase}|${[...item.components].sort((a, b) => a.solvent.localeCompare(b.solvent)).map((part) => `${part.solvent}:${(part.parts / total).toFixed(3)}`).join('|')}|${item.additives.map((a) => a.additive).sort().join(',')}`;
+      const key = `${item.phase}|${[...item.components]
+        .sort((a, b) => a.solvent.localeCompare(b.solvent))
+        .map((part) => `${part.solvent}:${(part.parts / total).toFixed(3)}`)
+        .join('|')}|${item.additives
+        .map((a) => a.additive)
+        .sort()
+        .join(',')}`;
       byEluent.set(key, [...(byEluent.get(key) ?? []), item.rf]);
     }
-    for (const rfs of byEluent.values()) for (let i = 1; i < rfs.length; i++) differences.push(Math.abs(rfs[i] - rfs[0]));
+    for (const rfs of byEluent.values())
+      for (let i = 1; i < rfs.length; i++) differences.push(Math.abs(rfs[i] - rfs[0]));
   }
   if (differences.length < 10) return 0.05;
   differences.sort((a, b) => a - b);

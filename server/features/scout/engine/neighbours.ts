@@ -46,7 +46,15 @@ export function rankBySimilarity(model: ScoutModel, query: ScoutQuery): SimilarC
       const keys = tanimoto(point.fingerprint, point.bits, other.fingerprint, other.bits);
       const otherPairs = queryPairs ? atomPairsOfSmiles(compound.smiles) : null;
       const identical = (query.id !== null && compound.id === query.id) || compound.smiles === query.smiles;
-      return { index, keys, similarity: fusedSimilarity(keys, queryPairs && otherPairs ? atomPairTanimoto(queryPairs, otherPairs) : null, identical) };
+      return {
+        index,
+        keys,
+        similarity: fusedSimilarity(
+          keys,
+          queryPairs && otherPairs ? atomPairTanimoto(queryPairs, otherPairs) : null,
+          identical,
+        ),
+      };
     })
     .sort((a, b) => b.similarity - a.similarity || a.index - b.index);
 }
@@ -57,7 +65,12 @@ const outcomeOrder = { clean: 0, partial: 1, failed: 2 } as const;
 /** A neighbour's recorded conditions: plates with an Rf first, clean before partial before failed. */
 export function conditionsOf(measurements: readonly ScoutMeasurement[]): Neighbour['conditions'] {
   return [...measurements]
-    .sort((a, b) => Number(b.rf !== null) - Number(a.rf !== null) || outcomeOrder[a.outcome] - outcomeOrder[b.outcome] || (a.rf ?? 0) - (b.rf ?? 0))
+    .sort(
+      (a, b) =>
+        Number(b.rf !== null) - Number(a.rf !== null) ||
+        outcomeOrder[a.outcome] - outcomeOrder[b.outcome] ||
+        (a.rf ?? 0) - (b.rf ?? 0),
+    )
     .slice(0, conditionLimit)
     .map((measurement) => ({
       recordId: measurement.recordId,
@@ -74,7 +87,12 @@ export function conditionsOf(measurements: readonly ScoutMeasurement[]): Neighbo
 }
 
 /** The k nearest compounds with their conditions; `weights` gives each one's share of the prediction, when known. */
-export function listNeighbours(model: ScoutModel, ranked: readonly SimilarCompound[], k: number, weights: ReadonlyMap<number, number>): Neighbour[] {
+export function listNeighbours(
+  model: ScoutModel,
+  ranked: readonly SimilarCompound[],
+  k: number,
+  weights: ReadonlyMap<number, number>,
+): Neighbour[] {
   return ranked.slice(0, k).map(({ index, similarity }) => {
     const compound = model.compounds[index];
     return {

@@ -20,11 +20,20 @@ export const compoundsIn = (data: PairData) => data.points.size;
  * The query's curve in a pair. With nothing recorded in the pair, the best-recorded pair on the adsorbent lends
  * its curve: both sit on Snyder's ε° scale, so equal ε° is read as equal retention (no selectivity offset known).
  */
-export function pairCurve(model: ScoutModel, adsorbent: Adsorbent, pair: SolventPair, variant: ModelVariant, kernel: QueryKernel): PairCurve | null {
+export function pairCurve(
+  model: ScoutModel,
+  adsorbent: Adsorbent,
+  pair: SolventPair,
+  variant: ModelVariant,
+  kernel: QueryKernel,
+): PairCurve | null {
   const data = model.pairData(adsorbent, pair);
   const own = queryCurve(model, data, variant, kernel);
   if (own) return { pair: data.pair, curve: own, borrowedFrom: null };
-  const lender = model.pairsOn(adsorbent).filter((other) => other.anchors.length > 0).sort((a, b) => compoundsIn(b) - compoundsIn(a))[0];
+  const lender = model
+    .pairsOn(adsorbent)
+    .filter((other) => other.anchors.length > 0)
+    .sort((a, b) => compoundsIn(b) - compoundsIn(a))[0];
   if (!lender) return null;
   const curve = queryCurve(model, lender, variant, kernel);
   return curve ? { pair: data.pair, curve, borrowedFrom: lender.pair } : null;
@@ -63,18 +72,32 @@ export function rfInterval(rm: number, sd: number, readingError = 0): [number, n
  * in that pair — for a pure solvent, the recorded pair containing it with most compounds. Null for mixtures of
  * three or more solvents or solvents without ε°.
  */
-export function predictInEluent(model: ScoutModel, adsorbent: Adsorbent, components: readonly { solvent: string; parts: number }[], variant: ModelVariant, kernel: QueryKernel): EluentPrediction | null {
+export function predictInEluent(
+  model: ScoutModel,
+  adsorbent: Adsorbent,
+  components: readonly { solvent: string; parts: number }[],
+  variant: ModelVariant,
+  kernel: QueryKernel,
+): EluentPrediction | null {
   const position = positionOf(components, adsorbent);
   if (!position) return null;
   let pair: SolventPair | null = position.kind === 'pair' ? position.pair : null;
   if (position.kind === 'pure') {
-    const holders = model.pairsOn(adsorbent).filter((data) => data.pair.weak === position.solvent || data.pair.strong === position.solvent);
+    const holders = model
+      .pairsOn(adsorbent)
+      .filter((data) => data.pair.weak === position.solvent || data.pair.strong === position.solvent);
     pair = holders.sort((a, b) => compoundsIn(b) - compoundsIn(a))[0]?.pair ?? null;
   }
   if (!pair) return null;
   const found = pairCurve(model, adsorbent, pair, variant, kernel);
   if (!found) return null;
   const point = curveAt(found.curve, position.epsilon);
-  return { rf: rmToRf(point.rm), interval: rfInterval(point.rm, point.sd, model.readingError), rm: point.rm, sd: point.sd, epsilon: position.epsilon, pair: found.pair };
+  return {
+    rf: rmToRf(point.rm),
+    interval: rfInterval(point.rm, point.sd, model.readingError),
+    rm: point.rm,
+    sd: point.sd,
+    epsilon: position.epsilon,
+    pair: found.pair,
+  };
 }
-

@@ -41,10 +41,15 @@ export interface PairData {
 export const rmOfRf = (rf: number) => rfToRm(Math.min(Math.max(rf, rfClampRange[0]), rfClampRange[1]));
 
 /** Isocratic measurements with a target Rf, placed on the adsorbent's ε° scale (others have no place). */
-export function placeMeasurements(measurements: readonly { compound: number; measurement: ScoutMeasurement }[], adsorbent: Adsorbent, adsorbentOf: (phase: string) => Adsorbent | null): PlacedMeasurement[] {
+export function placeMeasurements(
+  measurements: readonly { compound: number; measurement: ScoutMeasurement }[],
+  adsorbent: Adsorbent,
+  adsorbentOf: (phase: string) => Adsorbent | null,
+): PlacedMeasurement[] {
   const placed: PlacedMeasurement[] = [];
   for (const { compound, measurement } of measurements) {
-    if (measurement.rf === null || measurement.mode !== 'isocratic' || adsorbentOf(measurement.phase) !== adsorbent) continue;
+    if (measurement.rf === null || measurement.mode !== 'isocratic' || adsorbentOf(measurement.phase) !== adsorbent)
+      continue;
     const position = positionOf(measurement.components, adsorbent);
     if (position) placed.push({ compound, position, rm: rmOfRf(measurement.rf) });
   }
@@ -70,18 +75,24 @@ export function buildPairData(pair: SolventPair, adsorbent: Adsorbent, placed: r
     points.set(item.compound, list);
   }
   const byFraction = new Map<number, Set<number>>();
-  for (const [compound, list] of points) for (const point of list) {
-    const set = byFraction.get(fractionKey(point.fraction)) ?? new Set<number>();
-    set.add(compound);
-    byFraction.set(fractionKey(point.fraction), set);
-  }
-  const ranked = [...byFraction].map(([fraction, set]) => ({ fraction: fraction / 1000, compounds: set.size })).sort((a, b) => b.compounds - a.compounds || a.fraction - b.fraction);
+  for (const [compound, list] of points)
+    for (const point of list) {
+      const set = byFraction.get(fractionKey(point.fraction)) ?? new Set<number>();
+      set.add(compound);
+      byFraction.set(fractionKey(point.fraction), set);
+    }
+  const ranked = [...byFraction]
+    .map(([fraction, set]) => ({ fraction: fraction / 1000, compounds: set.size }))
+    .sort((a, b) => b.compounds - a.compounds || a.fraction - b.fraction);
   const anchors = ranked
     .filter((anchor, index) => index === 0 || anchor.compounds >= 2)
     .slice(0, maxAnchors)
     .map((anchor) => ({ ...anchor, epsilon: pairEpsilon(pair, anchor.fraction, adsorbent) }))
     .sort((a, b) => a.epsilon - b.epsilon);
-  const centre = anchors.length > 0 ? anchors.reduce((sum, anchor) => sum + anchor.epsilon, 0) / anchors.length : pairEpsilon(pair, 0.2, adsorbent);
+  const centre =
+    anchors.length > 0
+      ? anchors.reduce((sum, anchor) => sum + anchor.epsilon, 0) / anchors.length
+      : pairEpsilon(pair, 0.2, adsorbent);
   const slope = pooledSlope(points.values());
   const lines = new Map<number, RetentionLine>();
   for (const [compound, list] of points) lines.set(compound, fitLine(list, slope, centre));
@@ -90,7 +101,9 @@ export function buildPairData(pair: SolventPair, adsorbent: Adsorbent, placed: r
 
 /** The compound's mean RM measured at an anchor's composition, or null. */
 export function measuredAt(data: PairData, compound: number, anchor: Anchor): number | null {
-  const list = data.points.get(compound)?.filter((point) => fractionKey(point.fraction) === fractionKey(anchor.fraction));
+  const list = data.points
+    .get(compound)
+    ?.filter((point) => fractionKey(point.fraction) === fractionKey(anchor.fraction));
   if (!list || list.length === 0) return null;
   return list.reduce((sum, point) => sum + point.rm, 0) / list.length;
 }

@@ -19,16 +19,28 @@ export interface PairVote {
  * record on the adsorbent votes with its compound's similarity. A pair needs half the weight and two records;
  * a second pair with a quarter of the weight is named, so the chemist sees the other family the group used.
  */
-export function voteForPair(model: ScoutModel, ranked: readonly SimilarCompound[], adsorbent: Adsorbent, own: number | undefined): PairVote {
+export function voteForPair(
+  model: ScoutModel,
+  ranked: readonly SimilarCompound[],
+  adsorbent: Adsorbent,
+  own: number | undefined,
+): PairVote {
   const votes = new Map<string, { pair: SolventPair; weight: number; records: number; compounds: Set<number> }>();
   let total = 0;
-  for (const { index, similarity } of ranked.filter((item) => item.index === own || item.similarity >= pairVoteSimilarity).slice(0, 16)) {
+  for (const { index, similarity } of ranked
+    .filter((item) => item.index === own || item.similarity >= pairVoteSimilarity)
+    .slice(0, 16)) {
     for (const measurement of model.measurementsOf[index]) {
       if (measurement.outcome !== 'clean' || adsorbentOf(measurement.phase) !== adsorbent) continue;
       const position = positionOf(measurement.components, adsorbent);
       if (position?.kind !== 'pair') continue;
       const weight = index === own ? 1 : similarity;
-      const vote = votes.get(position.key) ?? { pair: position.pair, weight: 0, records: 0, compounds: new Set<number>() };
+      const vote = votes.get(position.key) ?? {
+        pair: position.pair,
+        weight: 0,
+        records: 0,
+        compounds: new Set<number>(),
+      };
       vote.weight += weight;
       vote.records += 1;
       vote.compounds.add(index);
@@ -38,8 +50,11 @@ export function voteForPair(model: ScoutModel, ranked: readonly SimilarCompound[
   }
   const [first, second] = [...votes.values()].sort((a, b) => b.weight - a.weight);
   if (!first || first.weight < 0.5 * total || first.records < 2) return { pair: null, note: null };
-  const described = (vote: typeof first) => `${vote.records} clean record${vote.records === 1 ? '' : 's'} of ${vote.compounds.size} close compound${vote.compounds.size === 1 ? '' : 's'}`;
+  const described = (vote: typeof first) =>
+    `${vote.records} clean record${vote.records === 1 ? '' : 's'} of ${vote.compounds.size} close ` +
+    `compound${vote.compounds.size === 1 ? '' : 's'}`;
   let note = `Pair: ${pairLabel(first.pair)}, as in ${described(first)} (similarity ≥ ${pairVoteSimilarity}).`;
-  if (second && second.weight >= 0.25 * total) note += ` ${pairLabel(second.pair)} is the second family the group used (${described(second)}).`;
+  if (second && second.weight >= 0.25 * total)
+    note += ` ${pairLabel(second.pair)} is the second family the group used (${described(second)}).`;
   return { pair: first.pair, note };
 }

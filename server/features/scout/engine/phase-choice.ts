@@ -15,7 +15,11 @@ const defaultPhase = 'silica-gel';
  * The stationary phase to suggest: the user's, else the phase of the close neighbours' clean records weighted by
  * similarity when a strength model exists for it, else silica gel — the usual flash phase (common practice).
  */
-export function choosePhase(model: ScoutModel, close: readonly SimilarCompound[], requested: string | undefined): PhaseChoice {
+export function choosePhase(
+  model: ScoutModel,
+  close: readonly SimilarCompound[],
+  requested: string | undefined,
+): PhaseChoice {
   const named = (key: string, why: string) => ({ key, name: stationaryPhaseByKey(key)?.name ?? key, why });
   if (requested) return named(requested, 'the phase you chose');
   const votes = new Map<string, { weight: number; records: number }>();
@@ -32,6 +36,10 @@ export function choosePhase(model: ScoutModel, close: readonly SimilarCompound[]
     }
   }
   const [best] = [...votes].sort((a, b) => b[1].weight - a[1].weight);
-  if (!best) return named(defaultPhase, 'no close neighbour has a clean record; silica gel is the usual flash phase (common practice)');
+  if (!best)
+    return named(
+      defaultPhase,
+      'no close neighbour has a clean record; silica gel is the usual flash phase (common practice)',
+    );
   return named(best[0], `${best[1].records} of ${total} clean records of close neighbours used it`);
 }

@@ -18,14 +18,27 @@ export interface WeightedContribution {
  * Which recorded compounds the predicted value rests on: the process's equivalent-kernel weights A⁻¹·k at the
  * anchors the point was read from (Rasmussen & Williams 2006, §2.6), mixed by the interpolation shares.
  */
-export function contributions(model: ScoutModel, data: PairData, variant: ModelVariant, kernel: QueryKernel, point: CurvePoint): WeightedContribution[] {
+export function contributions(
+  model: ScoutModel,
+  data: PairData,
+  variant: ModelVariant,
+  kernel: QueryKernel,
+  point: CurvePoint,
+): WeightedContribution[] {
   const fits = model.anchorFits(data, variant);
   const total = new Map<number, { weight: number; rf: number; source: TrainingSource }>();
   for (const { anchor, share } of point.from) {
     const { gp, training } = fits[anchor];
-    const weights = smootherWeights(gp, Float64Array.from(gp.indices, (index) => kernel.values[index]));
+    const weights = smootherWeights(
+      gp,
+      Float64Array.from(gp.indices, (index) => kernel.values[index]),
+    );
     gp.indices.forEach((index, position) => {
-      const entry = total.get(index) ?? { weight: 0, rf: rmToRf(training.y[position]), source: training.sources[position] };
+      const entry = total.get(index) ?? {
+        weight: 0,
+        rf: rmToRf(training.y[position]),
+        source: training.sources[position],
+      };
       entry.weight += share * weights[position];
       total.set(index, entry);
     });

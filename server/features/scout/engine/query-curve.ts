@@ -41,23 +41,47 @@ export function nonIncreasing(values: readonly number[], weights: readonly numbe
       const last = blocks.pop()!;
       const previous = blocks.pop()!;
       const weight = previous.weight + last.weight;
-      blocks.push({ value: (previous.value * previous.weight + last.value * last.weight) / weight, weight, size: previous.size + last.size });
+      blocks.push({
+        value: (previous.value * previous.weight + last.value * last.weight) / weight,
+        weight,
+        size: previous.size + last.size,
+      });
     }
   });
   return blocks.flatMap((block) => Array<number>(block.size).fill(block.value));
 }
 
 /** The query's curve in a pair: the process's prediction at each anchor, made non-increasing in ε°. Null without anchors. */
-export function queryCurve(model: ScoutModel, data: PairData, variant: ModelVariant, kernel: QueryKernel): QueryCurve | null {
+export function queryCurve(
+  model: ScoutModel,
+  data: PairData,
+  variant: ModelVariant,
+  kernel: QueryKernel,
+): QueryCurve | null {
   if (data.anchors.length === 0) return null;
   const fits = model.anchorFits(data, variant);
-  const raw = fits.map((fit) => predictGp(fit.gp, Float64Array.from(fit.gp.indices, (index) => kernel.values[index]), kernel.self));
-  const smoothed = nonIncreasing(raw.map((prediction) => prediction.mean), raw.map((prediction) => 1 / prediction.variance));
+  const raw = fits.map((fit) =>
+    predictGp(
+      fit.gp,
+      Float64Array.from(fit.gp.indices, (index) => kernel.values[index]),
+      kernel.self,
+    ),
+  );
+  const smoothed = nonIncreasing(
+    raw.map((prediction) => prediction.mean),
+    raw.map((prediction) => 1 / prediction.variance),
+  );
   return {
     data,
     variant,
     slope: data.slope,
-    anchors: data.anchors.map((anchor, index) => ({ fraction: anchor.fraction, epsilon: anchor.epsilon, rm: smoothed[index], sd: Math.sqrt(raw[index].variance), anchor: index })),
+    anchors: data.anchors.map((anchor, index) => ({
+      fraction: anchor.fraction,
+      epsilon: anchor.epsilon,
+      rm: smoothed[index],
+      sd: Math.sqrt(raw[index].variance),
+      anchor: index,
+    })),
   };
 }
 
@@ -77,7 +101,12 @@ export function curveAt(curve: QueryCurve, epsilon: number): CurvePoint {
   if (epsilon <= first.epsilon || epsilon >= last.epsilon) {
     const end = epsilon <= first.epsilon ? first : last;
     const distance = Math.abs(epsilon - end.epsilon);
-    return { rm: end.rm + curve.slope * (epsilon - end.epsilon), sd: Math.hypot(end.sd, extrapolationSd * distance), from: [{ anchor: end.anchor, share: 1 }], extrapolated: distance > 1e-6 };
+    return {
+      rm: end.rm + curve.slope * (epsilon - end.epsilon),
+      sd: Math.hypot(end.sd, extrapolationSd * distance),
+      from: [{ anchor: end.anchor, share: 1 }],
+      extrapolated: distance > 1e-6,
+    };
   }
   const upper = anchors.findIndex((anchor) => anchor.epsilon >= epsilon);
   const a = anchors[upper - 1];
@@ -86,7 +115,10 @@ export function curveAt(curve: QueryCurve, epsilon: number): CurvePoint {
   return {
     rm: a.rm + t * (b.rm - a.rm),
     sd: a.sd + t * (b.sd - a.sd),
-    from: [{ anchor: a.anchor, share: 1 - t }, { anchor: b.anchor, share: t }],
+    from: [
+      { anchor: a.anchor, share: 1 - t },
+      { anchor: b.anchor, share: t },
+    ],
     extrapolated: false,
   };
 }

@@ -3,8 +3,25 @@
  * 1 : 9, 1 : 4, 1 : 1), from 1 % to pure strong solvent. The suggestion is rounded to one of these.
  */
 export const ratioLadder: readonly (readonly [number, number])[] = [
-  [1, 99], [1, 49], [1, 29], [1, 19], [1, 14], [1, 9], [1, 7], [1, 5], [1, 4], [1, 3], [3, 7], [1, 2], [2, 3],
-  [1, 1], [3, 2], [2, 1], [3, 1], [4, 1], [9, 1],
+  [1, 99],
+  [1, 49],
+  [1, 29],
+  [1, 19],
+  [1, 14],
+  [1, 9],
+  [1, 7],
+  [1, 5],
+  [1, 4],
+  [1, 3],
+  [3, 7],
+  [1, 2],
+  [2, 3],
+  [1, 1],
+  [3, 2],
+  [2, 1],
+  [3, 1],
+  [4, 1],
+  [9, 1],
 ];
 
 export interface LadderStep {
@@ -17,7 +34,10 @@ export interface LadderStep {
 export function ladderSteps(): LadderStep[] {
   return [
     { parts: [0, 1], strongFraction: 0 },
-    ...ratioLadder.map(([strong, weak]) => ({ parts: [strong, weak] as [number, number], strongFraction: strong / (strong + weak) })),
+    ...ratioLadder.map(([strong, weak]) => ({
+      parts: [strong, weak] as [number, number],
+      strongFraction: strong / (strong + weak),
+    })),
     { parts: [1, 0], strongFraction: 1 },
   ];
 }

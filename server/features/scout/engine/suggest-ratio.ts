@@ -29,22 +29,41 @@ export interface RatioSuggestion {
  * The written ratio in a pair whose predicted RM comes closest to the target's RM = log10((1 − Rf)/Rf): the
  * curve is solved for the target's ε° (Snyder), turned into a volume fraction, then rounded to the ratio ladder.
  */
-export function suggestRatio(model: ScoutModel, adsorbent: Adsorbent, pair: SolventPair, variant: ModelVariant, kernel: QueryKernel, targetRf: number): RatioSuggestion | null {
+export function suggestRatio(
+  model: ScoutModel,
+  adsorbent: Adsorbent,
+  pair: SolventPair,
+  variant: ModelVariant,
+  kernel: QueryKernel,
+  targetRf: number,
+): RatioSuggestion | null {
   const found = pairCurve(model, adsorbent, pair, variant, kernel);
   if (!found) return null;
   const weakEpsilon = solventEpsilon(found.pair.weak, adsorbent) as number;
   const strongEpsilon = solventEpsilon(found.pair.strong, adsorbent) as number;
   const targetRm = rfToRm(targetRf);
   const wanted = epsilonForRm(found.curve, targetRm);
-  const reach: Reach = wanted > strongEpsilon + 1e-9 ? 'too-polar' : wanted < weakEpsilon - 1e-9 ? 'too-fast' : 'within';
-  const exactStrongFraction = reach === 'too-polar' ? 1 : reach === 'too-fast' ? 0 : fractionForEpsilon(found.pair, wanted, adsorbent);
+  const reach: Reach =
+    wanted > strongEpsilon + 1e-9 ? 'too-polar' : wanted < weakEpsilon - 1e-9 ? 'too-fast' : 'within';
+  const exactStrongFraction =
+    reach === 'too-polar' ? 1 : reach === 'too-fast' ? 0 : fractionForEpsilon(found.pair, wanted, adsorbent);
   const rmAt = (fraction: number) => curveAt(found.curve, pairEpsilon(found.pair, fraction, adsorbent)).rm;
-  const best = ladderSteps().reduce((chosen, step) => (Math.abs(rmAt(step.strongFraction) - targetRm) < Math.abs(rmAt(chosen.strongFraction) - targetRm) ? step : chosen));
+  const best = ladderSteps().reduce((chosen, step) =>
+    Math.abs(rmAt(step.strongFraction) - targetRm) < Math.abs(rmAt(chosen.strongFraction) - targetRm) ? step : chosen,
+  );
   const epsilon = pairEpsilon(found.pair, best.strongFraction, adsorbent);
   const point = curveAt(found.curve, epsilon);
   return {
-    pair: found.pair, found, parts: best.parts, strongFraction: best.strongFraction, exactStrongFraction, epsilon, point,
-    rf: rmToRf(point.rm), interval: rfInterval(point.rm, point.sd, model.readingError), reach,
+    pair: found.pair,
+    found,
+    parts: best.parts,
+    strongFraction: best.strongFraction,
+    exactStrongFraction,
+    epsilon,
+    point,
+    rf: rmToRf(point.rm),
+    interval: rfInterval(point.rm, point.sd, model.readingError),
+    reach,
   };
 }
 
@@ -69,8 +88,15 @@ const TIER_COST_RM = 0.15;
  * (tier) and certainty (the predicted RM's sd): a familiar pair wins unless another one is much better evidenced,
  * e.g. when the nearest neighbours were all recorded in DCM/MeOH. When none reaches, the one closest to the target.
  */
-export function suggestBestPair(model: ScoutModel, adsorbent: Adsorbent, variant: ModelVariant, kernel: QueryKernel, targetRf: number): RatioSuggestion | null {
-  const candidates = model.pairsOn(adsorbent)
+export function suggestBestPair(
+  model: ScoutModel,
+  adsorbent: Adsorbent,
+  variant: ModelVariant,
+  kernel: QueryKernel,
+  targetRf: number,
+): RatioSuggestion | null {
+  const candidates = model
+    .pairsOn(adsorbent)
     .filter((data) => data.anchors.length > 0)
     .sort((a, b) => tier(a.pair) - tier(b.pair) || compoundsIn(b) - compoundsIn(a))
     .map((data) => suggestRatio(model, adsorbent, data.pair, variant, kernel, targetRf))

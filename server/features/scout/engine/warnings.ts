@@ -19,7 +19,11 @@ export interface ScoutWarning {
  * with an acid or a basic nitrogen the query lacks is left out: its failures (tailing acids, streaking amines)
  * came from a group the query does not have.
  */
-export function failureWarnings(model: ScoutModel, close: readonly SimilarCompound[], groups: IonisableGroups): ScoutWarning[] {
+export function failureWarnings(
+  model: ScoutModel,
+  close: readonly SimilarCompound[],
+  groups: IonisableGroups,
+): ScoutWarning[] {
   return close.flatMap(({ index, similarity }) => {
     const compound = model.compounds[index];
     if (similarity < 1 && groupsQueryLacks(groups, ionisableGroups(compound)).length > 0) return [];
@@ -30,8 +34,16 @@ export function failureWarnings(model: ScoutModel, close: readonly SimilarCompou
         const who = compound.name ?? compound.smiles;
         const verdict = measurement.outcome === 'failed' ? 'Failed' : 'Only partly separated';
         return {
-          recordId: measurement.recordId, demo: measurement.demo === true, compoundId: compound.id, compoundName: compound.name, similarity, outcome: measurement.outcome as 'partial' | 'failed', notation,
-          message: `${verdict} for ${who} (similarity ${two(similarity)}) in ${notation}${measurement.outcomeReason ? `: ${measurement.outcomeReason}` : '.'}`,
+          recordId: measurement.recordId,
+          demo: measurement.demo === true,
+          compoundId: compound.id,
+          compoundName: compound.name,
+          similarity,
+          outcome: measurement.outcome as 'partial' | 'failed',
+          notation,
+          message:
+            `${verdict} for ${who} (similarity ${two(similarity)}) in ` +
+            `${notation}${measurement.outcomeReason ? `: ${measurement.outcomeReason}` : '.'}`,
         };
       });
   });

@@ -16,7 +16,11 @@ export function useInvitationPreview(token: string) {
 }
 
 export function acceptInvitation(token: string, input: InvitationAccept) {
-  return api(`/api/auth/invitations/${encodeURIComponent(token)}/accept`, { method: 'POST', body: input }, signedInResponseSchema);
+  return api(
+    `/api/auth/invitations/${encodeURIComponent(token)}/accept`,
+    { method: 'POST', body: input },
+    signedInResponseSchema,
+  );
 }
 
 /** Accepting signs the invitee in: the session and every cached query start afresh. */

@@ -7,8 +7,7 @@ export { meQueryOptions, sessionKeys, useHasRole, useMe } from '../../../lib/ses
 export function useSignIn() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: LoginInput) =>
-      api<{ csrfToken: string }>('/api/auth/login', { method: 'POST', body: input }),
+    mutationFn: (input: LoginInput) => api<{ csrfToken: string }>('/api/auth/login', { method: 'POST', body: input }),
     onSuccess: (res) => {
       setCsrfToken(res.csrfToken);
       return qc.invalidateQueries();

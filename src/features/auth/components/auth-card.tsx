@@ -23,7 +23,10 @@ export function AuthCard({ title, children, footer }: { title: string; children:
 export function FormAlert({ children, tone = 'failed' }: { children: ReactNode; tone?: 'failed' | 'clean' }) {
   const colour = tone === 'failed' ? 'border-failed text-failed' : 'border-clean text-clean';
   return (
-    <p role={tone === 'failed' ? 'alert' : 'status'} className={`mt-3 rounded-plate border-l-4 bg-plate px-3 py-2 text-sm ${colour}`}>
+    <p
+      role={tone === 'failed' ? 'alert' : 'status'}
+      className={`mt-3 rounded-plate border-l-4 bg-plate px-3 py-2 text-sm ${colour}`}
+    >
       {children}
     </p>
   );

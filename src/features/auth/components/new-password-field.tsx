@@ -3,7 +3,11 @@ import { TextField } from '../../../components/ui/field';
 import { PASSWORD_MIN_LENGTH } from '../../../../shared/schemas/password-rules';
 
 /** A new password input with the rule stated up front (the same rule the server applies). */
-export function NewPasswordField({ label = 'New password', error, ...input }: { label?: string; error?: string } & InputHTMLAttributes<HTMLInputElement>) {
+export function NewPasswordField({
+  label = 'New password',
+  error,
+  ...input
+}: { label?: string; error?: string } & InputHTMLAttributes<HTMLInputElement>) {
   return (
     <TextField
       label={label}

@@ -33,7 +33,9 @@ export function PasswordChangeForm() {
       />
       <NewPasswordField error={form.formState.errors.newPassword?.message} {...form.register('newPassword')} />
       {formError && <FormAlert>{formError}</FormAlert>}
-      {change.isSuccess && <FormAlert tone="clean">Password changed. You stay signed in here; other devices were signed out.</FormAlert>}
+      {change.isSuccess && (
+        <FormAlert tone="clean">Password changed. You stay signed in here; other devices were signed out.</FormAlert>
+      )}
       <Button type="submit" variant="primary" disabled={change.isPending}>
         {change.isPending ? 'Changing…' : 'Change password'}
       </Button>

@@ -21,7 +21,13 @@ export function ProfileNameForm({ name }: { name: string }) {
   );
   return (
     <form onSubmit={submit} noValidate className="space-y-3">
-      <TextField label="Name" autoComplete="name" required error={form.formState.errors.name?.message} {...form.register('name')} />
+      <TextField
+        label="Name"
+        autoComplete="name"
+        required
+        error={form.formState.errors.name?.message}
+        {...form.register('name')}
+      />
       {formError && <FormAlert>{formError}</FormAlert>}
       {update.isSuccess && !form.formState.isDirty && <FormAlert tone="clean">Name saved.</FormAlert>}
       <Button type="submit" variant="primary" disabled={update.isPending || !form.formState.isDirty}>

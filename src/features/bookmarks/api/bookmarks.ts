@@ -5,7 +5,11 @@ import { bookmarkKeys } from './keys';
 
 export const getBookmarks = () => api('/api/bookmarks', {}, bookmarkListSchema);
 
-export const bookmarksQueryOptions = queryOptions({ queryKey: bookmarkKeys.list(), queryFn: getBookmarks, staleTime: 30_000 });
+export const bookmarksQueryOptions = queryOptions({
+  queryKey: bookmarkKeys.list(),
+  queryFn: getBookmarks,
+  staleTime: 30_000,
+});
 
 /** The signed-in user's bookmarks, newest first; every toggle on a page shares this one request. */
 export function useBookmarks() {

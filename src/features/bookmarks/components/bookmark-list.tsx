@@ -17,10 +17,20 @@ function Target({ bookmark }: { bookmark: BookmarkDto }) {
     return (
       <div className="flex flex-wrap items-center gap-3">
         <StructureImage compoundId={record.compound.id} name={record.compound.name ?? undefined} size="sm" />
-        <PlateStrip lanes={[{ spots: record.spots.map((spot) => ({ rf: spot.rf, role: spot.role })) }]} title={`Plate of record ${record.id}`} />
+        <PlateStrip
+          lanes={[{ spots: record.spots.map((spot) => ({ rf: spot.rf, role: spot.role })) }]}
+          title={`Plate of record ${record.id}`}
+        />
         <div className="min-w-0 space-y-0.5">
-          <Link to={`/records/${record.id}`} className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline">{record.compound.name ?? record.compound.canonicalSmiles}</Link>
-          <p className="figure text-xs">{record.eluentSummary.notation} · Rf {record.targetRf?.toFixed(2) ?? '—'}</p>
+          <Link
+            to={`/records/${record.id}`}
+            className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline"
+          >
+            {record.compound.name ?? record.compound.canonicalSmiles}
+          </Link>
+          <p className="figure text-xs">
+            {record.eluentSummary.notation} · Rf {record.targetRf?.toFixed(2) ?? '—'}
+          </p>
           <p className="flex flex-wrap items-center gap-2 text-xs text-ink-soft">
             <OutcomeBadge outcome={record.outcome} /> {record.stationaryPhaseLabel}
             {record.status !== 'active' && <span className="uppercase text-failed">{record.status}</span>}
@@ -34,8 +44,15 @@ function Target({ bookmark }: { bookmark: BookmarkDto }) {
       <div className="flex flex-wrap items-center gap-3">
         <StructureImage compoundId={compound.id} name={compound.name ?? undefined} size="sm" />
         <div>
-          <Link to={`/compounds/${compound.id}`} className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline">{compound.name ?? compound.canonicalSmiles}</Link>
-          <p className="figure text-xs text-ink-soft">{compound.formula} · {compound.recordCount} active record{compound.recordCount === 1 ? '' : 's'}</p>
+          <Link
+            to={`/compounds/${compound.id}`}
+            className="inline-block min-h-6 py-0.5 font-medium text-front hover:underline"
+          >
+            {compound.name ?? compound.canonicalSmiles}
+          </Link>
+          <p className="figure text-xs text-ink-soft">
+            {compound.formula} · {compound.recordCount} active record{compound.recordCount === 1 ? '' : 's'}
+          </p>
         </div>
       </div>
     );
@@ -49,10 +66,18 @@ export function BookmarkList({ bookmarks, compact = false }: { bookmarks: Bookma
     <ul className="divide-y divide-line">
       {bookmarks.map((bookmark) => (
         <li key={bookmark.id} className="flex items-start gap-3 py-3 first:pt-0 last:pb-0">
-          <BookmarkToggle recordId={bookmark.recordId ?? undefined} compoundId={bookmark.compoundId ?? undefined} label={labelOf(bookmark)} />
+          <BookmarkToggle
+            recordId={bookmark.recordId ?? undefined}
+            compoundId={bookmark.compoundId ?? undefined}
+            label={labelOf(bookmark)}
+          />
           <div className="min-w-0 flex-1 space-y-2">
             <Target bookmark={bookmark} />
-            {compact ? bookmark.note && <p className="text-xs text-ink-soft">{bookmark.note}</p> : <BookmarkNote id={bookmark.id} note={bookmark.note} label={labelOf(bookmark)} />}
+            {compact ? (
+              bookmark.note && <p className="text-xs text-ink-soft">{bookmark.note}</p>
+            ) : (
+              <BookmarkNote id={bookmark.id} note={bookmark.note} label={labelOf(bookmark)} />
+            )}
           </div>
         </li>
       ))}

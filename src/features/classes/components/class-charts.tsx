@@ -6,7 +6,11 @@ import { DemoMark } from '../../../components/ui/demo-mark';
 function DemoShare({ points }: { points: { demo: boolean }[] }) {
   const demo = points.filter((point) => point.demo).length;
   if (demo === 0) return null;
-  return <p className="text-xs text-ink-soft" data-testid="class-demo-share"><DemoMark /> {demo} of the {points.length} records charted are invented demo data.</p>;
+  return (
+    <p className="text-xs text-ink-soft" data-testid="class-demo-share">
+      <DemoMark /> {demo} of the {points.length} records charted are invented demo data.
+    </p>
+  );
 }
 
 const STEP = 0.05;
@@ -14,7 +18,8 @@ const STEP = 0.05;
 /** The distribution of Snyder's ε° (silica) over the class's records, with where the numbers come from. */
 export function StrengthHistogram({ strength, className }: { strength: ClassDetail['strength']; className: string }) {
   const values = strength.points.map((point) => point.epsilon);
-  if (values.length === 0) return <p className="text-sm text-ink-soft">No record of this class on silica with a solvent of known ε°.</p>;
+  if (values.length === 0)
+    return <p className="text-sm text-ink-soft">No record of this class on silica with a solvent of known ε°.</p>;
   const from = Math.floor(Math.min(...values) / STEP) * STEP;
   const to = Math.max(from + STEP, Math.ceil(Math.max(...values) / STEP) * STEP);
   return (
@@ -27,7 +32,8 @@ export function StrengthHistogram({ strength, className }: { strength: ClassDeta
       />
       <figcaption className="text-xs text-ink-soft">
         Computed from each record’s eluent (a gradient by its final mixture). {strength.source}.
-        {strength.skipped > 0 && ` ${strength.skipped} record${strength.skipped === 1 ? '' : 's'} not on silica or with a solvent of unknown ε° left out.`}
+        {strength.skipped > 0 &&
+          ` ${strength.skipped} record${strength.skipped === 1 ? '' : 's'} not on silica or with a solvent of unknown ε° left out.`}
       </figcaption>
       <DemoShare points={strength.points} />
     </figure>
@@ -43,7 +49,12 @@ export function RfScatter({ rf }: { rf: NonNullable<ClassDetail['rf']> }) {
         title={`Target Rf against eluent composition (${strong})`}
         x={{ label: '% stronger solvent', unit: '% v/v' }}
         y={{ label: 'target Rf', domain: [0, 1] }}
-        points={rf.points.map((point) => ({ x: point.strongPercent, y: point.rf, label: `record ${point.recordId} (${point.outcome}${point.demo ? ', demo data' : ''})`, highlight: point.outcome === 'failed' }))}
+        points={rf.points.map((point) => ({
+          x: point.strongPercent,
+          y: point.rf,
+          label: `record ${point.recordId} (${point.outcome}${point.demo ? ', demo data' : ''})`,
+          highlight: point.outcome === 'failed',
+        }))}
       />
       <DemoShare points={rf.points} />
     </div>

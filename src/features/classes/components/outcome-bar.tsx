@@ -13,9 +13,18 @@ export function OutcomeBar({ outcomes }: { outcomes: OutcomeCounts }) {
   return (
     <div className="flex items-center gap-2">
       <div className="flex h-2 w-28 overflow-hidden rounded-full bg-line" role="img" aria-label={`Outcomes: ${words}`}>
-        {total > 0 && parts.map((part) => <span key={part.key} className={part.className} style={{ width: `${(100 * outcomes[part.key]) / total}%` }} />)}
+        {total > 0 &&
+          parts.map((part) => (
+            <span
+              key={part.key}
+              className={part.className}
+              style={{ width: `${(100 * outcomes[part.key]) / total}%` }}
+            />
+          ))}
       </div>
-      <span className="figure text-2xs text-ink-soft" aria-hidden="true">{outcomes.clean}/{outcomes.partial}/{outcomes.failed}</span>
+      <span className="figure text-2xs text-ink-soft" aria-hidden="true">
+        {outcomes.clean}/{outcomes.partial}/{outcomes.failed}
+      </span>
     </div>
   );
 }

@@ -9,7 +9,8 @@ export const compoundKeys = {
 
 export const getCompound = (id: number) => api(`/api/compounds/${id}`, {}, compoundDetailSchema);
 
-export const compoundQueryOptions = (id: number) => queryOptions({ queryKey: compoundKeys.detail(id), queryFn: () => getCompound(id) });
+export const compoundQueryOptions = (id: number) =>
+  queryOptions({ queryKey: compoundKeys.detail(id), queryFn: () => getCompound(id) });
 
 /** A compound with its descriptors, classes and active records. */
 export function useCompound(id: number) {

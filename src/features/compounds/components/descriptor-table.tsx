@@ -19,14 +19,25 @@ const rows: { key: keyof CompoundDetail['descriptors']; label: string; unit?: st
 export function DescriptorTable({ descriptors }: { descriptors: CompoundDetail['descriptors'] }) {
   return (
     <table className="text-sm">
-      <caption className="pb-1 text-left text-xs text-ink-soft">Computed with OpenChemLib on the neutral parent structure.</caption>
+      <caption className="pb-1 text-left text-xs text-ink-soft">
+        Computed with OpenChemLib on the neutral parent structure.
+      </caption>
       <tbody>
         {rows.map((row) => {
           const value = descriptors[row.key];
           return (
             <tr key={row.key}>
-              <th scope="row" className="pr-4 text-left font-normal text-ink-soft">{row.label}</th>
-              <td className="figure">{typeof value === 'number' ? (row.key === 'mw' ? value.toFixed(2) : formatNumber(value, row.digits ?? 0)) : value}{row.unit ? ` ${row.unit}` : ''}</td>
+              <th scope="row" className="pr-4 text-left font-normal text-ink-soft">
+                {row.label}
+              </th>
+              <td className="figure">
+                {typeof value === 'number'
+                  ? row.key === 'mw'
+                    ? value.toFixed(2)
+                    : formatNumber(value, row.digits ?? 0)
+                  : value}
+                {row.unit ? ` ${row.unit}` : ''}
+              </td>
             </tr>
           );
         })}

@@ -22,19 +22,34 @@ export function rfSeries(records: readonly RecordListItem[]): RfSeries[] {
   const groups = new Map<string, RfSeries>();
   for (const record of records) {
     const target = record.spots.find((spot) => spot.role === 'target');
-    if (!target || record.outcome === 'failed' || record.technique === 'flash' || record.eluent.mode !== 'isocratic' || record.eluent.components.length !== 2) continue;
+    if (
+      !target ||
+      record.outcome === 'failed' ||
+      record.technique === 'flash' ||
+      record.eluent.mode !== 'isocratic' ||
+      record.eluent.components.length !== 2
+    )
+      continue;
     const strong = strongSolventOf(record.eluent.components, record.stationaryPhase);
     if (!strong) continue;
     const weak = record.eluent.components.find((part) => part.solvent !== strong)?.solvent as string;
     const phase = stationaryPhaseByKey(record.stationaryPhase);
     const surface = phase?.adsorbent ?? phase?.key ?? record.stationaryPhase;
-    const additives = record.eluent.additives.map((item) => item.additive).sort().join('+');
+    const additives = record.eluent.additives
+      .map((item) => item.additive)
+      .sort()
+      .join('+');
     const key = `${weak}|${strong}|${surface}|${additives}`;
     const total = record.eluent.components.reduce((sum, part) => sum + part.parts, 0);
     const strongParts = record.eluent.components.find((part) => part.solvent === strong)?.parts ?? 0;
     const series = groups.get(key) ?? {
-      title: `${solventByKey(strong)?.label ?? strong} in ${solventByKey(weak)?.label ?? weak} on ${surface}${additives ? ` with ${additives}` : ''}`,
-      weak, strong, points: [], fit: null,
+      title:
+        `${solventByKey(strong)?.label ?? strong} in ${solventByKey(weak)?.label ?? weak} on ` +
+        `${surface}${additives ? ` with ${additives}` : ''}`,
+      weak,
+      strong,
+      points: [],
+      fit: null,
     };
     series.points.push({ percent: (100 * strongParts) / total, rf: target.rf, recordId: record.id });
     groups.set(key, series);
@@ -42,7 +57,11 @@ export function rfSeries(records: readonly RecordListItem[]): RfSeries[] {
   for (const series of groups.values()) {
     if (new Set(series.points.map((point) => point.percent.toFixed(3))).size >= 2) {
       try {
-        series.fit = fitPair(series.weak, series.strong, series.points.map((point) => ({ weakParts: 100 - point.percent, strongParts: point.percent, rf: point.rf })));
+        series.fit = fitPair(
+          series.weak,
+          series.strong,
+          series.points.map((point) => ({ weakParts: 100 - point.percent, strongParts: point.percent, rf: point.rf })),
+        );
       } catch {
         series.fit = null;
       }

@@ -5,7 +5,8 @@ import { curationKeys } from './keys';
 
 export const getDuplicates = () => api('/api/curation/duplicates', {}, duplicatesResponseSchema);
 
-export const duplicatesQueryOptions = () => queryOptions({ queryKey: curationKeys.duplicates(), queryFn: getDuplicates });
+export const duplicatesQueryOptions = () =>
+  queryOptions({ queryKey: curationKeys.duplicates(), queryFn: getDuplicates });
 
 /** Open candidate duplicate groups, most certain first. */
 export function useDuplicates() {

@@ -3,7 +3,8 @@ import { api } from '../../../lib/api-client';
 import { mergePreviewSchema } from '../../../../shared/schemas/curation';
 import { curationKeys } from './keys';
 
-export const getMergePreview = (ids: readonly number[]) => api(`/api/curation/merge-preview?ids=${ids.join(',')}`, {}, mergePreviewSchema);
+export const getMergePreview = (ids: readonly number[]) =>
+  api(`/api/curation/merge-preview?ids=${ids.join(',')}`, {}, mergePreviewSchema);
 
 export const mergePreviewQueryOptions = (ids: readonly number[]) =>
   queryOptions({ queryKey: curationKeys.preview(ids), queryFn: () => getMergePreview(ids), enabled: ids.length >= 2 });

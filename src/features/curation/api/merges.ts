@@ -3,22 +3,29 @@ import { api } from '../../../lib/api-client';
 import { mergeHistorySchema, unmergeResultSchema } from '../../../../shared/schemas/curation';
 import { curationKeys, recordsKey } from './keys';
 
-export const getMerges = (recordId?: number) => api(`/api/curation/merges${recordId ? `?recordId=${recordId}` : ''}`, {}, mergeHistorySchema);
+export const getMerges = (recordId?: number) =>
+  api(`/api/curation/merges${recordId ? `?recordId=${recordId}` : ''}`, {}, mergeHistorySchema);
 
-export const mergesQueryOptions = (recordId?: number) => queryOptions({ queryKey: curationKeys.merges(recordId), queryFn: () => getMerges(recordId) });
+export const mergesQueryOptions = (recordId?: number) =>
+  queryOptions({ queryKey: curationKeys.merges(recordId), queryFn: () => getMerges(recordId) });
 
 /** Recent merges (or those involving one record), each saying whether it can still be undone. */
 export function useMerges(recordId?: number) {
   return useQuery(mergesQueryOptions(recordId));
 }
 
-export const unmergeRecords = (mergeId: number) => api(`/api/curation/unmerge/${mergeId}`, { method: 'POST' }, unmergeResultSchema);
+export const unmergeRecords = (mergeId: number) =>
+  api(`/api/curation/unmerge/${mergeId}`, { method: 'POST' }, unmergeResultSchema);
 
 /** Undoes a merge; curation lists and record views are refreshed after. */
 export function useUnmerge() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: unmergeRecords,
-    onSettled: () => Promise.all([qc.invalidateQueries({ queryKey: curationKeys.all }), qc.invalidateQueries({ queryKey: recordsKey })]),
+    onSettled: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: curationKeys.all }),
+        qc.invalidateQueries({ queryKey: recordsKey }),
+      ]),
   });
 }

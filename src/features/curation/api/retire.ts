@@ -6,13 +6,18 @@ import { curationKeys, recordsKey } from './keys';
 export const retireRecord = ({ id, reason }: { id: number; reason: string }) =>
   api(`/api/records/${id}/retire`, { method: 'POST', body: { reason } }, statusChangeResultSchema);
 
-export const restoreRecord = (id: number) => api(`/api/records/${id}/restore`, { method: 'POST' }, statusChangeResultSchema);
+export const restoreRecord = (id: number) =>
+  api(`/api/records/${id}/restore`, { method: 'POST' }, statusChangeResultSchema);
 
 function useStatusChange<I>(fn: (input: I) => Promise<unknown>) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: fn,
-    onSettled: () => Promise.all([qc.invalidateQueries({ queryKey: recordsKey }), qc.invalidateQueries({ queryKey: curationKeys.all })]),
+    onSettled: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: recordsKey }),
+        qc.invalidateQueries({ queryKey: curationKeys.all }),
+      ]),
   });
 }
 

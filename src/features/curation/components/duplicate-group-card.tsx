@@ -24,14 +24,21 @@ export function DuplicateGroupCard({ group }: { group: DuplicateGroup }) {
     });
   const chosen = group.recordIds.filter((id) => selected.has(id));
   return (
-    <article aria-label={`Candidate group ${group.recordIds.map((id) => `#${id}`).join(', ')}`} className="rounded-plate border border-line bg-surface">
+    <article
+      aria-label={`Candidate group ${group.recordIds.map((id) => `#${id}`).join(', ')}`}
+      className="rounded-plate border border-line bg-surface"
+    >
       <header className="flex flex-wrap items-center justify-between gap-2 border-b border-line px-4 py-2.5">
-        <h3 className="text-sm font-semibold">{kindTitle[group.kind]} · {group.recordIds.length} records</h3>
+        <h3 className="text-sm font-semibold">
+          {kindTitle[group.kind]} · {group.recordIds.length} records
+        </h3>
         <CertaintyMeter score={group.score} />
       </header>
       <div className="space-y-3 p-4">
         <ul className="list-disc space-y-0.5 pl-5 text-sm text-ink-soft">
-          {group.reasons.map((reason) => <li key={reason}>{reason}</li>)}
+          {group.reasons.map((reason) => (
+            <li key={reason}>{reason}</li>
+          ))}
         </ul>
         <GroupRecordsTable records={group.records} selected={selected} onToggle={toggle} />
         <div className="flex flex-wrap items-center gap-2">

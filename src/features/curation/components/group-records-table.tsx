@@ -17,7 +17,9 @@ export function GroupRecordsTable({ records, selected, onToggle }: Props) {
       <table className="w-full text-left text-sm">
         <thead className="text-xs text-ink-soft">
           <tr className="border-b border-line">
-            <th className="py-1.5 pr-2 font-medium"><span className="sr-only">Compare</span></th>
+            <th className="py-1.5 pr-2 font-medium">
+              <span className="sr-only">Compare</span>
+            </th>
             <th className="py-1.5 pr-3 font-medium">Record</th>
             <th className="py-1.5 pr-3 font-medium">Compound</th>
             <th className="py-1.5 pr-3 font-medium">Phase</th>
@@ -42,15 +44,26 @@ export function GroupRecordsTable({ records, selected, onToggle }: Props) {
                 />
               </td>
               <td className="py-1.5 pr-3">
-                <Link to={`/records/${record.id}`} className="inline-block min-h-6 min-w-6 py-0.5 figure text-front hover:underline">#{record.id}</Link>
+                <Link
+                  to={`/records/${record.id}`}
+                  className="inline-block min-h-6 min-w-6 py-0.5 figure text-front hover:underline"
+                >
+                  #{record.id}
+                </Link>
               </td>
               <td className="py-1.5 pr-3">{compoundLabel(record)}</td>
               <td className="py-1.5 pr-3">{record.stationaryPhaseLabel}</td>
               <td className="figure py-1.5 pr-3">{record.eluentNotation}</td>
               <td className="figure py-1.5 pr-3">{strongShare(record)}</td>
-              <td className="figure py-1.5 pr-3 text-spot-dark">{record.targetRf === null ? '—' : formatNumber(record.targetRf, 3)}</td>
-              <td className="py-1.5 pr-3"><OutcomeBadge outcome={record.outcome} /></td>
-              <td className="py-1.5 pr-3">{record.author.name} <span className="text-xs text-ink-soft">{day(record.createdAt)}</span></td>
+              <td className="figure py-1.5 pr-3 text-spot-dark">
+                {record.targetRf === null ? '—' : formatNumber(record.targetRf, 3)}
+              </td>
+              <td className="py-1.5 pr-3">
+                <OutcomeBadge outcome={record.outcome} />
+              </td>
+              <td className="py-1.5 pr-3">
+                {record.author.name} <span className="text-xs text-ink-soft">{day(record.createdAt)}</span>
+              </td>
               <td className="figure py-1.5">{record.notebookRef ?? '—'}</td>
             </tr>
           ))}

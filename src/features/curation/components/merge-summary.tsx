@@ -3,7 +3,17 @@ import { spotsText } from './merge-field-table';
 import { unitedValues } from './united-values';
 
 /** What the survivor will hold after the merge; nothing is dropped, bookmarks are counted once per person. */
-export function MergeSummary({ survivorId, united, mergedIds, records }: { survivorId: number; united: UnitedCounts; mergedIds: number[]; records: MergePreview['records'] }) {
+export function MergeSummary({
+  survivorId,
+  united,
+  mergedIds,
+  records,
+}: {
+  survivorId: number;
+  united: UnitedCounts;
+  mergedIds: number[];
+  records: MergePreview['records'];
+}) {
   const values = unitedValues(records, survivorId);
   return (
     <div className="space-y-1 text-sm">
@@ -15,18 +25,21 @@ export function MergeSummary({ survivorId, united, mergedIds, records }: { survi
       </dl>
       {values.leftBehind > 0 && (
         <p className="text-ink-soft">
-          A second target spot or a stain already named stays on its merged record ({values.leftBehind} in all), so the united record has one target and names each stain once.
+          A second target spot or a stain already named stays on its merged record ({values.leftBehind} in all), so the
+          united record has one target and names each stain once.
         </p>
       )}
       <p>
-        Record <span className="figure">#{survivorId}</span> will also hold <strong className="figure">{united.photos}</strong> plate photos;{' '}
+        Record <span className="figure">#{survivorId}</span> will also hold{' '}
+        <strong className="figure">{united.photos}</strong> plate photos;{' '}
         <strong className="figure">{united.bookmarks}</strong>{' '}
         {united.bookmarks === 1 ? 'person keeps a bookmark' : 'people keep their bookmarks'} on it, and{' '}
-        <strong className="figure">{united.contributors}</strong> {united.contributors === 1 ? 'person stays' : 'people stay'} credited.
+        <strong className="figure">{united.contributors}</strong>{' '}
+        {united.contributors === 1 ? 'person stays' : 'people stay'} credited.
       </p>
       <p className="text-ink-soft">
-        {mergedIds.map((id) => `#${id}`).join(', ')} will be marked merged and point to #{survivorId}; their rows are kept, and the merge can be undone once
-        from the merge history.
+        {mergedIds.map((id) => `#${id}`).join(', ')} will be marked merged and point to #{survivorId}; their rows are
+        kept, and the merge can be undone once from the merge history.
       </p>
     </div>
   );

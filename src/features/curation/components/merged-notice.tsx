@@ -5,7 +5,9 @@ export function MergedNotice({ mergedIntoId }: { mergedIntoId: number }) {
   return (
     <p role="status" className="rounded-plate border border-front/30 bg-front-light px-3 py-2 text-sm text-front-dark">
       This record was merged into{' '}
-      <Link to={`/records/${mergedIntoId}`} className="font-semibold underline">record #{mergedIntoId}</Link>
+      <Link to={`/records/${mergedIntoId}`} className="font-semibold underline">
+        record #{mergedIntoId}
+      </Link>
       , which now holds its spots, photos and notes. Its own values are kept here for reference.
     </p>
   );

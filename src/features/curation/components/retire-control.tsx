@@ -29,8 +29,12 @@ function RetireForm({ recordId, onDone }: { recordId: number; onDone: () => void
         minLength={3}
       />
       <div className="flex gap-2">
-        <Button type="submit" size="sm" variant="danger" disabled={retire.isPending || reason.trim().length < 3}>Retire record</Button>
-        <Button size="sm" variant="quiet" onClick={onDone}>Cancel</Button>
+        <Button type="submit" size="sm" variant="danger" disabled={retire.isPending || reason.trim().length < 3}>
+          Retire record
+        </Button>
+        <Button size="sm" variant="quiet" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );
@@ -50,16 +54,31 @@ export function RetireControl({ record }: { record: RetirableRecord }) {
   if (!curator && !author) return null;
   if (record.status === 'retired') {
     return (
-      <div role="status" className="flex flex-wrap items-center gap-3 rounded-plate border border-failed/40 bg-surface px-3 py-2 text-sm">
+      <div
+        role="status"
+        className="flex flex-wrap items-center gap-3 rounded-plate border border-failed/40 bg-surface px-3 py-2 text-sm"
+      >
         <span>
           <strong className="text-failed">Retired</strong>
           {record.retiredAt && <> on {formatDate(record.retiredAt)}</>}
           {record.retiredReason && <>: {record.retiredReason}</>}
         </span>
-        <Button size="sm" disabled={restore.isPending} onClick={() => restore.mutate(record.id)}>Restore</Button>
-        {restore.error && <span role="alert" className="text-failed">{restore.error.message}</span>}
+        <Button size="sm" disabled={restore.isPending} onClick={() => restore.mutate(record.id)}>
+          Restore
+        </Button>
+        {restore.error && (
+          <span role="alert" className="text-failed">
+            {restore.error.message}
+          </span>
+        )}
       </div>
     );
   }
-  return open ? <RetireForm recordId={record.id} onDone={() => setOpen(false)} /> : <Button size="sm" variant="quiet" onClick={() => setOpen(true)}>Retire…</Button>;
+  return open ? (
+    <RetireForm recordId={record.id} onDone={() => setOpen(false)} />
+  ) : (
+    <Button size="sm" variant="quiet" onClick={() => setOpen(true)}>
+      Retire…
+    </Button>
+  );
 }

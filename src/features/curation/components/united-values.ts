@@ -10,7 +10,10 @@ export type UnitedStain = PreviewRecord['stains'][number] & { fromRecord: number
  * a merged target spot only when the survivor has none, and then only the first. What does not move stays
  * on its merged record.
  */
-export function unitedValues(records: PreviewRecord[], survivorId: number): { spots: UnitedSpot[]; stains: UnitedStain[]; leftBehind: number } {
+export function unitedValues(
+  records: PreviewRecord[],
+  survivorId: number,
+): { spots: UnitedSpot[]; stains: UnitedStain[]; leftBehind: number } {
   const survivor = records.find((record) => record.id === survivorId);
   if (!survivor) return { spots: [], stains: [], leftBehind: 0 };
   const merged = records.filter((record) => record.id !== survivorId);
@@ -22,12 +25,18 @@ export function unitedValues(records: PreviewRecord[], survivorId: number): { sp
   let leftBehind = 0;
   for (const record of merged) {
     for (const spot of record.spots) {
-      if (spot.role === 'target' && hasTarget) { leftBehind += 1; continue; }
+      if (spot.role === 'target' && hasTarget) {
+        leftBehind += 1;
+        continue;
+      }
       if (spot.role === 'target') hasTarget = true;
       spots.push({ ...spot, fromRecord: record.id });
     }
     for (const stain of record.stains) {
-      if (seen.has(stainKey(stain))) { leftBehind += 1; continue; }
+      if (seen.has(stainKey(stain))) {
+        leftBehind += 1;
+        continue;
+      }
       seen.add(stainKey(stain));
       stains.push({ ...stain, fromRecord: record.id });
     }

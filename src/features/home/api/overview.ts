@@ -4,7 +4,11 @@ import { overviewSchema } from '../../../../shared/schemas/overview';
 
 export const getOverview = () => api('/api/overview', {}, overviewSchema);
 
-export const overviewQueryOptions = queryOptions({ queryKey: ['overview'] as const, queryFn: getOverview, staleTime: 60_000 });
+export const overviewQueryOptions = queryOptions({
+  queryKey: ['overview'] as const,
+  queryFn: getOverview,
+  staleTime: 60_000,
+});
 
 /** Counts of the group's base, in total and since the month began. */
 export function useOverview() {

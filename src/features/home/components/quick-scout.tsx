@@ -13,7 +13,9 @@ export function QuickScout() {
   };
   return (
     <form onSubmit={submit} className="space-y-2" aria-label="Scout a new compound">
-      <label htmlFor="quick-scout" className="block text-sm font-medium">New compound? Paste its SMILES or molfile</label>
+      <label htmlFor="quick-scout" className="block text-sm font-medium">
+        New compound? Paste its SMILES or molfile
+      </label>
       <div className="flex flex-wrap items-start gap-2">
         <textarea
           id="quick-scout"
@@ -25,9 +27,13 @@ export function QuickScout() {
           onChange={(event) => setText(event.target.value)}
           className={`${controlClass} figure min-w-64 flex-1 text-sm`}
         />
-        <Button type="submit" variant="primary" disabled={!text.trim()}>Scout it</Button>
+        <Button type="submit" variant="primary" disabled={!text.trim()}>
+          Scout it
+        </Button>
       </div>
-      <p className="text-xs text-ink-soft">Scout suggests a starting eluent from the group’s nearest recorded neighbours, with the evidence.</p>
+      <p className="text-xs text-ink-soft">
+        Scout suggests a starting eluent from the group’s nearest recorded neighbours, with the evidence.
+      </p>
     </form>
   );
 }

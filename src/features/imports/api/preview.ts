@@ -11,6 +11,10 @@ export interface PreviewInput {
 
 /** POST /api/imports?dryRun=1: the detected mapping and the first rows' results; nothing is written. */
 export const previewImport = ({ file, mapping, choice }: PreviewInput) =>
-  api('/api/imports?dryRun=1&previewRows=20', { method: 'POST', form: uploadForm(file, mapping, choice) }, importPreviewSchema);
+  api(
+    '/api/imports?dryRun=1&previewRows=20',
+    { method: 'POST', form: uploadForm(file, mapping, choice) },
+    importPreviewSchema,
+  );
 
 export const usePreviewImport = () => useMutation({ mutationFn: previewImport });

@@ -14,6 +14,7 @@ export function useUndoImport() {
   return useMutation({
     mutationFn: undoImport,
     onSuccess: (undone) => qc.setQueryData(importKeys.detail(undone.id), undone),
-    onSettled: () => Promise.all([importKeys.all, ...changedByImports].map((queryKey) => qc.invalidateQueries({ queryKey }))),
+    onSettled: () =>
+      Promise.all([importKeys.all, ...changedByImports].map((queryKey) => qc.invalidateQueries({ queryKey }))),
   });
 }

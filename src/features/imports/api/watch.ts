@@ -7,8 +7,13 @@ import { changedByImports, importKeys } from './keys';
 const watched = new Set<number>();
 
 /** "3 added, 1 rejected, 2 duplicates of 6 rows" */
-export function countsLine(item: Pick<ImportDto, 'accepted' | 'rejected' | 'duplicates' | 'processed' | 'total'>): string {
-  return `${item.accepted} added, ${item.rejected} rejected, ${item.duplicates} duplicate${item.duplicates === 1 ? '' : 's'} of ${item.total} rows`;
+export function countsLine(
+  item: Pick<ImportDto, 'accepted' | 'rejected' | 'duplicates' | 'processed' | 'total'>,
+): string {
+  return (
+    `${item.accepted} added, ${item.rejected} rejected, ${item.duplicates} ` +
+    `duplicate${item.duplicates === 1 ? '' : 's'} of ${item.total} rows`
+  );
 }
 
 /**
@@ -17,7 +22,8 @@ export function countsLine(item: Pick<ImportDto, 'accepted' | 'rejected' | 'dupl
  */
 export function watchImport(qc: QueryClient, item: ImportDto) {
   if (item.status !== 'running' || watched.has(item.id)) {
-    if (item.status !== 'running') void Promise.all(changedByImports.map((queryKey) => qc.invalidateQueries({ queryKey })));
+    if (item.status !== 'running')
+      void Promise.all(changedByImports.map((queryKey) => qc.invalidateQueries({ queryKey })));
     return;
   }
   watched.add(item.id);
@@ -39,7 +45,13 @@ export function watchImport(qc: QueryClient, item: ImportDto) {
     showToast(
       current.status === 'completed'
         ? { tone: 'done', title: `Import of ${current.fileName} finished`, body: countsLine(current) + '.' }
-        : { tone: 'problem', title: `Import of ${current.fileName} stopped`, body: `${current.error ?? 'It failed.'} ${current.processed} of ${current.total} rows were committed; resume it from the import page.` },
+        : {
+            tone: 'problem',
+            title: `Import of ${current.fileName} stopped`,
+            body:
+              `${current.error ?? 'It failed.'} ${current.processed} of ${current.total} rows were ` +
+              `committed; resume it from the import page.`,
+          },
     );
   };
   setTimeout(tick, 1_500);

@@ -39,15 +39,28 @@ export function ImportActions({ item, size = 'sm' }: { item: ImportDto; size?: '
         (plan ? (
           <span className="flex flex-wrap items-center gap-2 text-sm" data-testid="undo-plan">
             <span>{plan.summary}</span>
-            <Button size={size} variant="danger" disabled={undo.isPending} onClick={() => undo.mutate(item.id, { onSettled: () => setPlan(null) })}>
+            <Button
+              size={size}
+              variant="danger"
+              disabled={undo.isPending}
+              onClick={() => undo.mutate(item.id, { onSettled: () => setPlan(null) })}
+            >
               Undo it
             </Button>
-            <Button size={size} variant="quiet" onClick={() => setPlan(null)}>Keep</Button>
+            <Button size={size} variant="quiet" onClick={() => setPlan(null)}>
+              Keep
+            </Button>
           </span>
         ) : (
-          <Button size={size} variant="quiet" onClick={ask}>Undo import</Button>
+          <Button size={size} variant="quiet" onClick={ask}>
+            Undo import
+          </Button>
         ))}
-      {(error || planError) && <p role="alert" className="text-sm text-failed">{error?.message ?? planError}</p>}
+      {(error || planError) && (
+        <p role="alert" className="text-sm text-failed">
+          {error?.message ?? planError}
+        </p>
+      )}
     </div>
   );
 }

@@ -9,5 +9,9 @@ const labels: Record<ImportRowResult['result'], { text: string; className: strin
 /** What happens (or happened) to a row: added, a duplicate of a stored record, or rejected. */
 export function RowResultBadge({ result }: { result: ImportRowResult['result'] }) {
   const label = labels[result];
-  return <span className={`inline-block rounded-plate border px-1.5 py-0.5 text-xs font-medium ${label.className}`}>{label.text}</span>;
+  return (
+    <span className={`inline-block rounded-plate border px-1.5 py-0.5 text-xs font-medium ${label.className}`}>
+      {label.text}
+    </span>
+  );
 }

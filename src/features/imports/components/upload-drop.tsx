@@ -5,7 +5,15 @@ import { buttonClass } from '../../../components/ui/button';
 export const MAX_IMPORT_MB = 20;
 
 /** Drop an Excel workbook (.xlsx), CSV or SDF file here, or choose one; the chosen file's name and size are shown. */
-export function UploadDrop({ file, onFile, disabled }: { file: File | null; onFile: (file: File) => void; disabled?: boolean }) {
+export function UploadDrop({
+  file,
+  onFile,
+  disabled,
+}: {
+  file: File | null;
+  onFile: (file: File) => void;
+  disabled?: boolean;
+}) {
   const [over, setOver] = useState(false);
   const input = useRef<HTMLInputElement>(null);
   const id = useId();
@@ -23,7 +31,10 @@ export function UploadDrop({ file, onFile, disabled }: { file: File | null; onFi
       }}
       onDragLeave={() => setOver(false)}
       onDrop={drop}
-      className={`flex flex-wrap items-center gap-4 rounded-plate border-2 border-dashed px-5 py-6 ${over ? 'border-front bg-front-light' : 'border-line bg-plate'}`}
+      className={
+        `flex flex-wrap items-center gap-4 rounded-plate border-2 border-dashed px-5 py-6 ` +
+        `${over ? 'border-front bg-front-light' : 'border-line bg-plate'}`
+      }
     >
       <div className="min-w-0 flex-1">
         <p className="font-medium text-ink">{file ? file.name : 'Drop an .xlsx workbook, CSV or SDF file here'}</p>

@@ -18,9 +18,12 @@ function useInvitationMutation<I, O>(fn: (input: I) => Promise<O>) {
   return useMutation({ mutationFn: fn, onSettled: () => qc.invalidateQueries({ queryKey: peopleKeys.all }) });
 }
 
-export const createInvitation = (input: InvitationCreate) => api('/api/auth/invitations', { method: 'POST', body: input }, invitationSchema);
-export const resendInvitation = (id: number) => api(`/api/auth/invitations/${id}/resend`, { method: 'POST' }, invitationSchema);
-export const revokeInvitation = (id: number) => api(`/api/auth/invitations/${id}/revoke`, { method: 'POST' }, invitationSchema);
+export const createInvitation = (input: InvitationCreate) =>
+  api('/api/auth/invitations', { method: 'POST', body: input }, invitationSchema);
+export const resendInvitation = (id: number) =>
+  api(`/api/auth/invitations/${id}/resend`, { method: 'POST' }, invitationSchema);
+export const revokeInvitation = (id: number) =>
+  api(`/api/auth/invitations/${id}/revoke`, { method: 'POST' }, invitationSchema);
 
 export const useCreateInvitation = () => useInvitationMutation(createInvitation);
 export const useResendInvitation = () => useInvitationMutation(resendInvitation);

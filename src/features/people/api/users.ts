@@ -22,6 +22,10 @@ export function useUpdateUser() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ id, change }: { id: number; change: AdminUserUpdate }) => updateUser(id, change),
-    onSettled: () => Promise.all([qc.invalidateQueries({ queryKey: peopleKeys.users() }), qc.invalidateQueries({ queryKey: sessionKeys.me })]),
+    onSettled: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: peopleKeys.users() }),
+        qc.invalidateQueries({ queryKey: sessionKeys.me }),
+      ]),
   });
 }

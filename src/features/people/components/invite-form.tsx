@@ -13,12 +13,18 @@ import { roleOptions, whenShort } from './format';
 export function InviteForm() {
   const create = useCreateInvitation();
   const [outcome, setOutcome] = useState<{ tone: 'clean' | 'failed'; text: string } | null>(null);
-  const form = useForm<InvitationCreate>({ resolver: zodResolver(invitationCreateSchema), defaultValues: { email: '', role: 'member' } });
+  const form = useForm<InvitationCreate>({
+    resolver: zodResolver(invitationCreateSchema),
+    defaultValues: { email: '', role: 'member' },
+  });
   const submit = form.handleSubmit((input) => {
     setOutcome(null);
     create.mutate(input, {
       onSuccess: (inv) => {
-        setOutcome({ tone: 'clean', text: `Invitation sent to ${inv.email} as ${inv.role}; the link works until ${whenShort(inv.expiresAt)}.` });
+        setOutcome({
+          tone: 'clean',
+          text: `Invitation sent to ${inv.email} as ${inv.role}; the link works until ${whenShort(inv.expiresAt)}.`,
+        });
         form.reset({ email: '', role: input.role });
       },
       onError: (err) => {
@@ -29,13 +35,28 @@ export function InviteForm() {
   });
   return (
     <form onSubmit={submit} noValidate className="grid grid-cols-1 gap-3 sm:grid-cols-[1fr_16rem_auto] sm:items-start">
-      <TextField label="E-mail" type="email" autoComplete="off" required error={form.formState.errors.email?.message} {...form.register('email')} />
-      <SelectField label="Role" options={roleOptions} error={form.formState.errors.role?.message} {...form.register('role')} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="off"
+        required
+        error={form.formState.errors.email?.message}
+        {...form.register('email')}
+      />
+      <SelectField
+        label="Role"
+        options={roleOptions}
+        error={form.formState.errors.role?.message}
+        {...form.register('role')}
+      />
       <Button type="submit" variant="primary" className="sm:mt-6" disabled={create.isPending}>
         {create.isPending ? 'Sending…' : 'Send invitation'}
       </Button>
       {outcome && (
-        <p role={outcome.tone === 'failed' ? 'alert' : 'status'} className={`text-sm sm:col-span-3 ${outcome.tone === 'failed' ? 'text-failed' : 'text-clean'}`}>
+        <p
+          role={outcome.tone === 'failed' ? 'alert' : 'status'}
+          className={`text-sm sm:col-span-3 ${outcome.tone === 'failed' ? 'text-failed' : 'text-clean'}`}
+        >
           {outcome.text}
         </p>
       )}

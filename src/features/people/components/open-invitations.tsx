@@ -11,11 +11,25 @@ export function OpenInvitations() {
   const revoke = useRevokeInvitation();
   const failure = resend.error ?? revoke.error;
   if (isLoading) return <PageLoading label="Loading invitations…" />;
-  if (error) return <p role="alert" className="text-failed">{error.message}</p>;
-  if (!data?.items.length) return <EmptyState title="No open invitations">Invite someone above; their invitation waits here until they accept it.</EmptyState>;
+  if (error)
+    return (
+      <p role="alert" className="text-failed">
+        {error.message}
+      </p>
+    );
+  if (!data?.items.length)
+    return (
+      <EmptyState title="No open invitations">
+        Invite someone above; their invitation waits here until they accept it.
+      </EmptyState>
+    );
   return (
     <div className="overflow-x-auto">
-      {failure && <p role="alert" className="mb-2 text-sm text-failed">{failure.message}</p>}
+      {failure && (
+        <p role="alert" className="mb-2 text-sm text-failed">
+          {failure.message}
+        </p>
+      )}
       <table className="w-full text-sm">
         <caption className="sr-only">Open invitations</caption>
         <thead className="text-left text-xs uppercase tracking-wide text-ink-soft">
@@ -25,7 +39,9 @@ export function OpenInvitations() {
             <th className="py-1 pr-3 font-medium">State</th>
             <th className="py-1 pr-3 font-medium">Link valid until</th>
             <th className="py-1 pr-3 font-medium">Sent</th>
-            <th className="py-1 font-medium"><span className="sr-only">Actions</span></th>
+            <th className="py-1 font-medium">
+              <span className="sr-only">Actions</span>
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -33,16 +49,33 @@ export function OpenInvitations() {
             <tr key={inv.id} className="border-t border-line">
               <td className="py-2 pr-3">{inv.email}</td>
               <td className="py-2 pr-3">{inv.role}</td>
-              <td className={`py-2 pr-3 ${inv.status === 'expired' ? 'text-failed' : 'text-ink-soft'}`}>{inv.status}</td>
+              <td className={`py-2 pr-3 ${inv.status === 'expired' ? 'text-failed' : 'text-ink-soft'}`}>
+                {inv.status}
+              </td>
               <td className="py-2 pr-3 figure">{whenShort(inv.expiresAt)}</td>
-              <td className="py-2 pr-3 figure" title={`last sent ${whenShort(inv.lastSentAt)}${inv.invitedBy ? ` by ${inv.invitedBy.name}` : ''}`}>
+              <td
+                className="py-2 pr-3 figure"
+                title={`last sent ${whenShort(inv.lastSentAt)}${inv.invitedBy ? ` by ${inv.invitedBy.name}` : ''}`}
+              >
                 {inv.sentCount}×
               </td>
               <td className="py-2 whitespace-nowrap text-right">
-                <Button size="sm" variant="quiet" disabled={resend.isPending} onClick={() => resend.mutate(inv.id)} aria-label={`Resend invitation to ${inv.email}`}>
+                <Button
+                  size="sm"
+                  variant="quiet"
+                  disabled={resend.isPending}
+                  onClick={() => resend.mutate(inv.id)}
+                  aria-label={`Resend invitation to ${inv.email}`}
+                >
                   Resend
                 </Button>
-                <Button size="sm" variant="quiet" disabled={revoke.isPending} onClick={() => revoke.mutate(inv.id)} aria-label={`Revoke invitation to ${inv.email}`}>
+                <Button
+                  size="sm"
+                  variant="quiet"
+                  disabled={revoke.isPending}
+                  onClick={() => revoke.mutate(inv.id)}
+                  aria-label={`Revoke invitation to ${inv.email}`}
+                >
                   Revoke
                 </Button>
               </td>

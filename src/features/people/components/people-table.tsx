@@ -38,8 +38,14 @@ function describe(person: AdminUser, change: PendingChange['change']): Pick<Pend
     };
   }
   return change.status === 'disabled'
-    ? { question: `Disable ${person.name}? They are signed out at once and cannot sign in until enabled again; their records stay.`, done: `${person.name} is disabled and signed out.` }
-    : { question: `Enable ${person.name} again? They can sign in with their password.`, done: `${person.name} can sign in again.` };
+    ? {
+        question: `Disable ${person.name}? They are signed out at once and cannot sign in until enabled again; their records stay.`,
+        done: `${person.name} is disabled and signed out.`,
+      }
+    : {
+        question: `Enable ${person.name} again? They can sign in with their password.`,
+        done: `${person.name} can sign in again.`,
+      };
 }
 
 /** Everyone in the group: sortable by any column; role and status change in place (the server refuses losing the last admin). */
@@ -121,23 +127,52 @@ export function PeopleTable({ people, meId }: { people: AdminUser[]; meId: numbe
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [meId, update.isPending],
   );
-  const table = useReactTable({ data: people, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+  const table = useReactTable({
+    data: people,
+    columns,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+  });
 
   return (
     <div className="relative overflow-x-auto">
       {pending && (
-        <div role="alertdialog" aria-labelledby="people-confirm" className="mb-3 rounded-plate border border-spot/50 bg-spot-light p-3 text-sm">
+        <div
+          role="alertdialog"
+          aria-labelledby="people-confirm"
+          className="mb-3 rounded-plate border border-spot/50 bg-spot-light p-3 text-sm"
+        >
           <p id="people-confirm">{pending.question}</p>
           <div className="mt-2 flex flex-wrap gap-2">
-            <Button size="sm" variant={'status' in pending.change && pending.change.status === 'disabled' ? 'danger' : 'primary'} onClick={confirm}>
-              {'role' in pending.change ? `Make ${pending.change.role}` : pending.change.status === 'disabled' ? 'Disable' : 'Enable'}
+            <Button
+              size="sm"
+              variant={'status' in pending.change && pending.change.status === 'disabled' ? 'danger' : 'primary'}
+              onClick={confirm}
+            >
+              {'role' in pending.change
+                ? `Make ${pending.change.role}`
+                : pending.change.status === 'disabled'
+                  ? 'Disable'
+                  : 'Enable'}
             </Button>
-            <Button size="sm" onClick={() => setPending(null)}>Cancel</Button>
+            <Button size="sm" onClick={() => setPending(null)}>
+              Cancel
+            </Button>
           </div>
         </div>
       )}
-      {done && <p role="status" className="mb-2 rounded-plate border border-clean/40 bg-surface px-3 py-2 text-sm">{done}</p>}
-      {update.error && <p role="alert" className="mb-2 text-sm text-failed">{update.error.message}</p>}
+      {done && (
+        <p role="status" className="mb-2 rounded-plate border border-clean/40 bg-surface px-3 py-2 text-sm">
+          {done}
+        </p>
+      )}
+      {update.error && (
+        <p role="alert" className="mb-2 text-sm text-failed">
+          {update.error.message}
+        </p>
+      )}
       <table className="w-full text-sm">
         <caption className="sr-only">People in the group</caption>
         <thead className="text-left text-xs uppercase tracking-wide text-ink-soft">
@@ -146,9 +181,17 @@ export function PeopleTable({ people, meId }: { people: AdminUser[]; meId: numbe
               {group.headers.map((h) => {
                 const sorted = h.column.getIsSorted();
                 return (
-                  <th key={h.id} className="py-1 pr-3 font-medium" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                  <th
+                    key={h.id}
+                    className="py-1 pr-3 font-medium"
+                    aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
+                  >
                     {h.column.getCanSort() ? (
-                      <button type="button" className="min-h-6 uppercase tracking-wide hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
+                      <button
+                        type="button"
+                        className="min-h-6 uppercase tracking-wide hover:text-ink"
+                        onClick={h.column.getToggleSortingHandler()}
+                      >
                         {flexRender(h.column.columnDef.header, h.getContext())}
                         {sorted ? (sorted === 'asc' ? ' ▲' : ' ▼') : ''}
                       </button>

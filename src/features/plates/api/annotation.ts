@@ -1,6 +1,10 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, ApiRequestError } from '../../../lib/api-client';
-import { photoAnnotationHistorySchema, photoAnnotationSchema, type PlateAnnotation } from '../../../../shared/schemas/plates';
+import {
+  photoAnnotationHistorySchema,
+  photoAnnotationSchema,
+  type PlateAnnotation,
+} from '../../../../shared/schemas/plates';
 import { plateKeys } from './keys';
 
 /** The current annotation of a record photo, or null when none was saved yet. */
@@ -13,12 +17,18 @@ export async function getAnnotation(photoId: number) {
   }
 }
 
-export const annotationQueryOptions = (photoId: number) => queryOptions({ queryKey: plateKeys.annotation(photoId), queryFn: () => getAnnotation(photoId) });
-export const useAnnotation = (photoId: number, enabled = true) => useQuery({ ...annotationQueryOptions(photoId), enabled });
+export const annotationQueryOptions = (photoId: number) =>
+  queryOptions({ queryKey: plateKeys.annotation(photoId), queryFn: () => getAnnotation(photoId) });
+export const useAnnotation = (photoId: number, enabled = true) =>
+  useQuery({ ...annotationQueryOptions(photoId), enabled });
 
 export const annotationRevisionsQueryOptions = (photoId: number) =>
-  queryOptions({ queryKey: plateKeys.revisions(photoId), queryFn: () => api(`/api/plates/photos/${photoId}/annotation/revisions`, {}, photoAnnotationHistorySchema) });
-export const useAnnotationRevisions = (photoId: number, enabled = true) => useQuery({ ...annotationRevisionsQueryOptions(photoId), enabled });
+  queryOptions({
+    queryKey: plateKeys.revisions(photoId),
+    queryFn: () => api(`/api/plates/photos/${photoId}/annotation/revisions`, {}, photoAnnotationHistorySchema),
+  });
+export const useAnnotationRevisions = (photoId: number, enabled = true) =>
+  useQuery({ ...annotationRevisionsQueryOptions(photoId), enabled });
 
 export function saveAnnotation({ photoId, annotation }: { photoId: number; annotation: PlateAnnotation }) {
   return api(`/api/plates/photos/${photoId}/annotation`, { method: 'PUT', body: annotation }, photoAnnotationSchema);
@@ -26,5 +36,8 @@ export function saveAnnotation({ photoId, annotation }: { photoId: number; annot
 
 export function useSaveAnnotation() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: saveAnnotation, onSuccess: (_saved, { photoId }) => qc.invalidateQueries({ queryKey: plateKeys.annotation(photoId) }) });
+  return useMutation({
+    mutationFn: saveAnnotation,
+    onSuccess: (_saved, { photoId }) => qc.invalidateQueries({ queryKey: plateKeys.annotation(photoId) }),
+  });
 }

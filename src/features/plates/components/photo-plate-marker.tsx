@@ -36,27 +36,62 @@ export function PhotoPlateMarker({ photo, canEdit }: { photo: Photo; canEdit: bo
   if (saved.isLoading) return <p className="text-sm text-ink-soft">Loading the plate marks…</p>;
   return (
     <div className="space-y-2">
-      {!annotation && (canEdit
-        ? <Button size="sm" onClick={() => void readPhoto()} disabled={read.isPending}>{read.isPending ? 'Reading the plate…' : 'Read the plate from this photo'}</Button>
-        : <p className="text-sm text-ink-soft">No plate marks saved for this photo.</p>)}
-      {message && <p role="alert" className="text-sm text-failed">{message}</p>}
+      {!annotation &&
+        (canEdit ? (
+          <Button size="sm" onClick={() => void readPhoto()} disabled={read.isPending}>
+            {read.isPending ? 'Reading the plate…' : 'Read the plate from this photo'}
+          </Button>
+        ) : (
+          <p className="text-sm text-ink-soft">No plate marks saved for this photo.</p>
+        ))}
+      {message && (
+        <p role="alert" className="text-sm text-failed">
+          {message}
+        </p>
+      )}
       {annotation && (
-        <PlateEditor src={photo.url} width={photo.width} height={photo.height} value={annotation} onChange={canEdit ? setAnnotation : () => undefined} />
+        <PlateEditor
+          src={photo.url}
+          width={photo.width}
+          height={photo.height}
+          value={annotation}
+          onChange={canEdit ? setAnnotation : () => undefined}
+        />
       )}
       {annotation && canEdit && (
-        <Button variant="primary" size="sm" disabled={save.isPending}
-          onClick={() => save.mutate({ photoId: photo.id, annotation }, { onSuccess: (result) => setMessage(`Saved as revision ${result.revision}.`), onError: (error) => setMessage(error.message) })}>
+        <Button
+          variant="primary"
+          size="sm"
+          disabled={save.isPending}
+          onClick={() =>
+            save.mutate(
+              { photoId: photo.id, annotation },
+              {
+                onSuccess: (result) => setMessage(`Saved as revision ${result.revision}.`),
+                onError: (error) => setMessage(error.message),
+              },
+            )
+          }
+        >
           {save.isPending ? 'Saving…' : 'Save the plate marks'}
         </Button>
       )}
       {revisions.data && revisions.data.items.length > 0 && (
         <details className="text-xs text-ink-soft">
-          <summary className="cursor-pointer">{revisions.data.items.length} saved revision{revisions.data.items.length === 1 ? '' : 's'}</summary>
+          <summary className="cursor-pointer">
+            {revisions.data.items.length} saved revision{revisions.data.items.length === 1 ? '' : 's'}
+          </summary>
           <ul className="mt-1 space-y-0.5">
             {revisions.data.items.map((item) => (
               <li key={item.revision}>
-                <button type="button" className="text-front underline underline-offset-2" onClick={() => setAnnotation(item.annotation)}>revision {item.revision}</button>
-                {' '}· {item.savedBy ?? 'someone'} · {new Date(item.savedAt).toLocaleString()}
+                <button
+                  type="button"
+                  className="text-front underline underline-offset-2"
+                  onClick={() => setAnnotation(item.annotation)}
+                >
+                  revision {item.revision}
+                </button>{' '}
+                · {item.savedBy ?? 'someone'} · {new Date(item.savedAt).toLocaleString()}
               </li>
             ))}
           </ul>
@@ -70,7 +105,10 @@ export function PhotoPlateMarker({ photo, canEdit }: { photo: Photo; canEdit: bo
 export function PhotoPlateMarks({ photo, canEdit }: { photo: Photo; canEdit: boolean }) {
   const [open, setOpen] = useState(false);
   return (
-    <details className="max-w-[min(100%,40rem)]" onToggle={(event) => setOpen((event.target as HTMLDetailsElement).open)}>
+    <details
+      className="max-w-[min(100%,40rem)]"
+      onToggle={(event) => setOpen((event.target as HTMLDetailsElement).open)}
+    >
       <summary className="cursor-pointer py-1 text-sm text-front">Plate marks</summary>
       {open && <PhotoPlateMarker photo={photo} canEdit={canEdit} />}
     </details>

@@ -74,14 +74,19 @@ export function PlateOverlay({ src, width, height, value, onChange, selected, on
   };
 
   const add = (event: PointerEvent) => {
-    if (!adding) { onSelect(null); return; }
+    if (!adding) {
+      onSelect(null);
+      return;
+    }
     const at = toImage(event);
     if (!at || value.plates.length === 0) return;
     let best: { plate: number; lane: number; distance: number } | null = null;
-    value.plates.forEach((plate, p) => plate.lanes.forEach((lane, l) => {
-      const distance = Math.abs(lane.x - at[0]);
-      if (!best || distance < best.distance) best = { plate: p, lane: l, distance };
-    }));
+    value.plates.forEach((plate, p) =>
+      plate.lanes.forEach((lane, l) => {
+        const distance = Math.abs(lane.x - at[0]);
+        if (!best || distance < best.distance) best = { plate: p, lane: l, distance };
+      }),
+    );
     if (!best) return;
     const { plate, lane } = best;
     const next = structuredClone(value);
@@ -101,27 +106,101 @@ export function PlateOverlay({ src, width, height, value, onChange, selected, on
   return (
     <div className="relative w-full select-none overflow-hidden rounded-plate border border-line bg-ink">
       <img src={src} alt="Plate photo being marked" className="block h-auto w-full" draggable={false} />
-      <svg ref={svg} viewBox={`0 0 ${width} ${height}`} className={`absolute inset-0 h-full w-full touch-none ${adding ? 'cursor-crosshair' : ''}`}
-        onPointerMove={move} onPointerUp={() => setDrag(null)} onPointerCancel={() => setDrag(null)} onPointerDown={add} data-testid="plate-overlay">
+      <svg
+        ref={svg}
+        viewBox={`0 0 ${width} ${height}`}
+        className={`absolute inset-0 h-full w-full touch-none ${adding ? 'cursor-crosshair' : ''}`}
+        onPointerMove={move}
+        onPointerUp={() => setDrag(null)}
+        onPointerCancel={() => setDrag(null)}
+        onPointerDown={add}
+        data-testid="plate-overlay"
+      >
         {value.plates.map((plate, p) => (
           <g key={p}>
-            <polygon points={plate.corners.map((c) => c.join(',')).join(' ')} fill="none" stroke="#F6F5F0" strokeWidth={unit * 0.2} strokeDasharray={`${unit} ${unit * 0.6}`} />
-            <line x1={plate.origin[0][0]} y1={plate.origin[0][1]} x2={plate.origin[1][0]} y2={plate.origin[1][1]} stroke="#C77D14" strokeWidth={unit * 0.3} />
-            <line x1={plate.front[0][0]} y1={plate.front[0][1]} x2={plate.front[1][0]} y2={plate.front[1][1]} stroke="#0F6E6E" strokeWidth={unit * 0.3} />
+            <polygon
+              points={plate.corners.map((c) => c.join(',')).join(' ')}
+              fill="none"
+              stroke="#F6F5F0"
+              strokeWidth={unit * 0.2}
+              strokeDasharray={`${unit} ${unit * 0.6}`}
+            />
+            <line
+              x1={plate.origin[0][0]}
+              y1={plate.origin[0][1]}
+              x2={plate.origin[1][0]}
+              y2={plate.origin[1][1]}
+              stroke="#C77D14"
+              strokeWidth={unit * 0.3}
+            />
+            <line
+              x1={plate.front[0][0]}
+              y1={plate.front[0][1]}
+              x2={plate.front[1][0]}
+              y2={plate.front[1][1]}
+              stroke="#0F6E6E"
+              strokeWidth={unit * 0.3}
+            />
             {plate.lanes.map((lane, l) => (
               <g key={l}>
-                <text pointerEvents="none" x={lane.x} y={Math.max(plate.origin[0][1], plate.origin[1][1]) + unit * 2.2} fontSize={unit * 1.4} textAnchor="middle" fill="#C77D14" stroke="white" strokeWidth={unit * 0.15} paintOrder="stroke">{lane.label || l + 1}</text>
+                <text
+                  pointerEvents="none"
+                  x={lane.x}
+                  y={Math.max(plate.origin[0][1], plate.origin[1][1]) + unit * 2.2}
+                  fontSize={unit * 1.4}
+                  textAnchor="middle"
+                  fill="#C77D14"
+                  stroke="white"
+                  strokeWidth={unit * 0.15}
+                  paintOrder="stroke"
+                >
+                  {lane.label || l + 1}
+                </text>
                 {lane.spots.map((spot, s) => {
                   const isSelected = selected?.plate === p && selected.lane === l && selected.spot === s;
                   const colour = isSelected ? '#C77D14' : '#F6F5F0';
                   return (
-                    <g key={s} role="button" aria-label={`Spot Rf ${spot.rf.toFixed(2)} in lane ${lane.label || l + 1}`} data-rf={spot.rf.toFixed(3)}
-                      onPointerDown={(event) => start(event, { kind: 'spot', ref: { plate: p, lane: l, spot: s } })} className="cursor-grab touch-none">
+                    <g
+                      key={s}
+                      role="button"
+                      aria-label={`Spot Rf ${spot.rf.toFixed(2)} in lane ${lane.label || l + 1}`}
+                      data-rf={spot.rf.toFixed(3)}
+                      onPointerDown={(event) => start(event, { kind: 'spot', ref: { plate: p, lane: l, spot: s } })}
+                      className="cursor-grab touch-none"
+                    >
                       <circle cx={spot.x} cy={spot.y} r={unit * 1.6} fill="transparent" />
-                      {spot.kind === 'streak'
-                        ? <rect x={spot.x - unit * 0.5} y={spot.y - unit * 1.5} width={unit} height={unit * 3} fill="none" stroke={colour} strokeWidth={unit * 0.25} />
-                        : <circle cx={spot.x} cy={spot.y} r={unit * (spot.kind === 'circle' ? 1.1 : 0.8)} fill={spot.kind === 'circle' ? 'none' : `${colour}55`} stroke={colour} strokeWidth={unit * 0.25} />}
-                      <text pointerEvents="none" x={spot.x + unit * 1.4} y={spot.y + unit * 0.5} fontSize={unit * 1.2} fill={colour} stroke="#22252A" strokeWidth={unit * 0.12} paintOrder="stroke">{spot.rf.toFixed(2)}</text>
+                      {spot.kind === 'streak' ? (
+                        <rect
+                          x={spot.x - unit * 0.5}
+                          y={spot.y - unit * 1.5}
+                          width={unit}
+                          height={unit * 3}
+                          fill="none"
+                          stroke={colour}
+                          strokeWidth={unit * 0.25}
+                        />
+                      ) : (
+                        <circle
+                          cx={spot.x}
+                          cy={spot.y}
+                          r={unit * (spot.kind === 'circle' ? 1.1 : 0.8)}
+                          fill={spot.kind === 'circle' ? 'none' : `${colour}55`}
+                          stroke={colour}
+                          strokeWidth={unit * 0.25}
+                        />
+                      )}
+                      <text
+                        pointerEvents="none"
+                        x={spot.x + unit * 1.4}
+                        y={spot.y + unit * 0.5}
+                        fontSize={unit * 1.2}
+                        fill={colour}
+                        stroke="#22252A"
+                        strokeWidth={unit * 0.12}
+                        paintOrder="stroke"
+                      >
+                        {spot.rf.toFixed(2)}
+                      </text>
                     </g>
                   );
                 })}
@@ -129,8 +208,18 @@ export function PlateOverlay({ src, width, height, value, onChange, selected, on
             ))}
             {([0, 1] as const).map((end) => (
               <g key={end}>
-                {handle(plate.origin[end], `Move origin ${end === 0 ? 'left' : 'right'} end`, (event) => start(event, { kind: 'origin', plate: p, end }), '#C77D14')}
-                {handle(plate.front[end], `Move front ${end === 0 ? 'left' : 'right'} end`, (event) => start(event, { kind: 'front', plate: p, end }), '#0F6E6E')}
+                {handle(
+                  plate.origin[end],
+                  `Move origin ${end === 0 ? 'left' : 'right'} end`,
+                  (event) => start(event, { kind: 'origin', plate: p, end }),
+                  '#C77D14',
+                )}
+                {handle(
+                  plate.front[end],
+                  `Move front ${end === 0 ? 'left' : 'right'} end`,
+                  (event) => start(event, { kind: 'front', plate: p, end }),
+                  '#0F6E6E',
+                )}
               </g>
             ))}
           </g>

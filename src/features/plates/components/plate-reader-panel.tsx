@@ -41,17 +41,46 @@ export function PlateReaderPanel({ files, onUseSpots, onUsePool }: PlateReaderPa
     <section className="space-y-2" aria-label="Read the plate from the photo">
       <div className="flex flex-wrap items-center gap-2">
         {files.length > 1 && (
-          <select aria-label="Photo to read" className="min-h-8 rounded-plate border border-line bg-surface px-2 text-sm" value={index} onChange={(event) => setIndex(Number(event.target.value))}>
-            {files.map((candidate, i) => <option key={`${candidate.name}-${i}`} value={i}>{candidate.name}</option>)}
+          <select
+            aria-label="Photo to read"
+            className="min-h-8 rounded-plate border border-line bg-surface px-2 text-sm"
+            value={index}
+            onChange={(event) => setIndex(Number(event.target.value))}
+          >
+            {files.map((candidate, i) => (
+              <option key={`${candidate.name}-${i}`} value={i}>
+                {candidate.name}
+              </option>
+            ))}
           </select>
         )}
-        <Button size="sm" onClick={() => void start()} disabled={read.isPending}>{read.isPending ? 'Reading the plate…' : reading ? 'Read again' : 'Read the plate from the photo'}</Button>
-        <span className="text-xs text-ink-soft">Spots, lanes, origin and front are found for you; drag anything that is off.</span>
+        <Button size="sm" onClick={() => void start()} disabled={read.isPending}>
+          {read.isPending ? 'Reading the plate…' : reading ? 'Read again' : 'Read the plate from the photo'}
+        </Button>
+        <span className="text-xs text-ink-soft">
+          Spots, lanes, origin and front are found for you; drag anything that is off.
+        </span>
       </div>
-      {read.error && <p role="alert" className="text-sm text-failed">{read.error.message}</p>}
-      {reading?.warnings?.map((warning) => <p key={warning} className="text-sm text-partial">{warning}</p>)}
+      {read.error && (
+        <p role="alert" className="text-sm text-failed">
+          {read.error.message}
+        </p>
+      )}
+      {reading?.warnings?.map((warning) => (
+        <p key={warning} className="text-sm text-partial">
+          {warning}
+        </p>
+      ))}
       {reading && annotation && url && (
-        <PlateEditor src={url} width={reading.width} height={reading.height} value={annotation} onChange={setAnnotation} onUseSpots={onUseSpots} onUsePool={onUsePool} />
+        <PlateEditor
+          src={url}
+          width={reading.width}
+          height={reading.height}
+          value={annotation}
+          onChange={setAnnotation}
+          onUseSpots={onUseSpots}
+          onUsePool={onUsePool}
+        />
       )}
     </section>
   );

@@ -5,7 +5,8 @@ import { recordKeys } from './keys';
 
 export const getRecord = (id: number) => api(`/api/records/${id}`, {}, recordDtoSchema);
 
-export const recordQueryOptions = (id: number) => queryOptions({ queryKey: recordKeys.detail(id), queryFn: () => getRecord(id) });
+export const recordQueryOptions = (id: number) =>
+  queryOptions({ queryKey: recordKeys.detail(id), queryFn: () => getRecord(id) });
 
 /** A record with every field, and whether the signed-in user may edit it. */
 export function useRecord(id: number) {

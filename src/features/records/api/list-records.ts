@@ -13,10 +13,15 @@ export function recordQueryString(query: RecordListQuery): string {
   return params.toString();
 }
 
-export const getRecords = (query: RecordListQuery) => api(`/api/records?${recordQueryString(query)}`, {}, recordPageSchema);
+export const getRecords = (query: RecordListQuery) =>
+  api(`/api/records?${recordQueryString(query)}`, {}, recordPageSchema);
 
 export const recordsQueryOptions = (query: RecordListQuery) =>
-  queryOptions({ queryKey: recordKeys.list(query), queryFn: () => getRecords(query), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: recordKeys.list(query),
+    queryFn: () => getRecords(query),
+    placeholderData: keepPreviousData,
+  });
 
 /** One page of records, sorted and filtered on the server; the previous page stays while the next loads. */
 export function useRecords(query: RecordListQuery) {

@@ -16,13 +16,20 @@ export const removePhoto = (photoId: number) => api(`/api/photos/${photoId}`, { 
 
 export function useUploadPhoto() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: uploadPhoto, onSuccess: (_photo, { recordId }) => qc.invalidateQueries({ queryKey: recordKeys.detail(recordId) }) });
+  return useMutation({
+    mutationFn: uploadPhoto,
+    onSuccess: (_photo, { recordId }) => qc.invalidateQueries({ queryKey: recordKeys.detail(recordId) }),
+  });
 }
 
 export function useRemovePhoto(recordId: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: removePhoto,
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: recordKeys.detail(recordId) }), qc.invalidateQueries({ queryKey: recordKeys.history(recordId) })]),
+    onSuccess: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: recordKeys.detail(recordId) }),
+        qc.invalidateQueries({ queryKey: recordKeys.history(recordId) }),
+      ]),
   });
 }

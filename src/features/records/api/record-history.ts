@@ -5,7 +5,8 @@ import { recordKeys } from './keys';
 
 export const getRecordHistory = (id: number) => api(`/api/records/${id}/history`, {}, recordHistorySchema);
 
-export const recordHistoryQueryOptions = (id: number) => queryOptions({ queryKey: recordKeys.history(id), queryFn: () => getRecordHistory(id) });
+export const recordHistoryQueryOptions = (id: number) =>
+  queryOptions({ queryKey: recordKeys.history(id), queryFn: () => getRecordHistory(id) });
 
 /** Every revision of a record, newest first. */
 export function useRecordHistory(id: number) {

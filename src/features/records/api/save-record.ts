@@ -3,7 +3,8 @@ import { api } from '../../../lib/api-client';
 import { recordDtoSchema, type RecordInput, type RecordUpdate } from '../../../../shared/schemas/record';
 import { compoundsKey, recordKeys } from './keys';
 
-export const createRecord = (input: RecordInput) => api('/api/records', { method: 'POST', body: input }, recordDtoSchema);
+export const createRecord = (input: RecordInput) =>
+  api('/api/records', { method: 'POST', body: input }, recordDtoSchema);
 
 export const updateRecord = ({ id, patch }: { id: number; patch: RecordUpdate }) =>
   api(`/api/records/${id}`, { method: 'PATCH', body: patch }, recordDtoSchema);
@@ -12,7 +13,11 @@ function useRecordMutation<I, O>(fn: (input: I) => Promise<O>) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: fn,
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: recordKeys.all }), qc.invalidateQueries({ queryKey: compoundsKey })]),
+    onSuccess: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: recordKeys.all }),
+        qc.invalidateQueries({ queryKey: compoundsKey }),
+      ]),
   });
 }
 

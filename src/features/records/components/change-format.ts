@@ -4,17 +4,44 @@ import { formatEluent } from '../../../../shared/domain/eluent-summary';
 import { spotRoleLabels, techniqueLabels } from '../../../../shared/schemas/record-parts';
 
 const fieldLabels: Record<string, string> = {
-  compoundId: 'compound', technique: 'technique', stationaryPhase: 'stationary phase', stationaryPhaseOther: 'phase name', eluent: 'eluent',
-  spots: 'spots', visualisations: 'visualisation', outcome: 'outcome', outcomeReason: 'reason', notebookRef: 'notebook reference', notes: 'notes',
-  status: 'status', photoIds: 'photos', photos: 'photo', retiredReason: 'retire reason', 'column.diameterMm': 'column diameter (mm)',
-  'column.cartridgeSize': 'cartridge', 'column.silicaG': 'silica (g)', 'column.sampleMg': 'sample (mg)', 'column.loadMethod': 'load',
-  'column.fractionMl': 'fraction size (mL)', 'column.fractionsPooled': 'fractions pooled', 'column.yieldPercent': 'yield (%)', 'column.purityNote': 'purity note',
-  mergedRecords: 'records merged in', mergedIntoId: 'merged into', merge: 'merge', name: 'name', runOn: 'plate run on',
+  compoundId: 'compound',
+  technique: 'technique',
+  stationaryPhase: 'stationary phase',
+  stationaryPhaseOther: 'phase name',
+  eluent: 'eluent',
+  spots: 'spots',
+  visualisations: 'visualisation',
+  outcome: 'outcome',
+  outcomeReason: 'reason',
+  notebookRef: 'notebook reference',
+  notes: 'notes',
+  status: 'status',
+  photoIds: 'photos',
+  photos: 'photo',
+  retiredReason: 'retire reason',
+  'column.diameterMm': 'column diameter (mm)',
+  'column.cartridgeSize': 'cartridge',
+  'column.silicaG': 'silica (g)',
+  'column.sampleMg': 'sample (mg)',
+  'column.loadMethod': 'load',
+  'column.fractionMl': 'fraction size (mL)',
+  'column.fractionsPooled': 'fractions pooled',
+  'column.yieldPercent': 'yield (%)',
+  'column.purityNote': 'purity note',
+  mergedRecords: 'records merged in',
+  mergedIntoId: 'merged into',
+  merge: 'merge',
+  name: 'name',
+  runOn: 'plate run on',
 };
 
 /** A field's name in words; an unknown one ("someField" or "some_field") is split into words, never shown raw. */
 export const fieldLabel = (field: string) =>
-  fieldLabels[field] ?? field.replace(/^column\./, 'column ').replace(/_/g, ' ').replace(/([a-z])([A-Z])/g, (_, a: string, b: string) => `${a} ${b.toLowerCase()}`);
+  fieldLabels[field] ??
+  field
+    .replace(/^column\./, 'column ')
+    .replace(/_/g, ' ')
+    .replace(/([a-z])([A-Z])/g, (_, a: string, b: string) => `${a} ${b.toLowerCase()}`);
 
 const recordList = (value: unknown) => (Array.isArray(value) ? value : [value]).map((id) => `record #${id}`).join(', ');
 
@@ -28,9 +55,17 @@ export function formatChangeValue(field: string, value: unknown): string {
     case 'eluent':
       return formatEluent(value as EluentLike);
     case 'spots':
-      return (value as SpotLike[]).map((spot) => `${spotRoleLabels[spot.role] ?? spot.role} ${spot.rf.toFixed(2)}`).join(', ');
+      return (value as SpotLike[])
+        .map((spot) => `${spotRoleLabels[spot.role] ?? spot.role} ${spot.rf.toFixed(2)}`)
+        .join(', ');
     case 'visualisations':
-      return (value as { method: string; note: string | null }[]).map((item) => (item.method === 'other' ? item.note ?? 'other' : stainByKey(item.method)?.label ?? item.method)).join(', ') || '—';
+      return (
+        (value as { method: string; note: string | null }[])
+          .map((item) =>
+            item.method === 'other' ? (item.note ?? 'other') : (stainByKey(item.method)?.label ?? item.method),
+          )
+          .join(', ') || '—'
+      );
     case 'stationaryPhase':
       return stationaryPhaseByKey(String(value))?.name ?? String(value);
     case 'technique':

@@ -13,7 +13,11 @@ const numberFields: { key: NumberKey; label: string; unit: string }[] = [
 
 /** Flash-column details, shown when asked for (always for flash columns). Units in every label. */
 export function ColumnDetailsFields() {
-  const { register, control, formState: { errors } } = useFormContext<RecordFormValues>();
+  const {
+    register,
+    control,
+    formState: { errors },
+  } = useFormContext<RecordFormValues>();
   const show = useWatch({ control, name: 'showColumn' });
   const columnErrors = errors.column;
   return (
@@ -25,10 +29,23 @@ export function ColumnDetailsFields() {
       {show && (
         <div className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-3">
           {numberFields.map((field) => (
-            <TextField key={field.key} label={`${field.label} (${field.unit})`} type="number" step="any" min="0" mono
-              error={columnErrors?.[field.key]?.message} {...register(`column.${field.key}`, { valueAsNumber: true })} />
+            <TextField
+              key={field.key}
+              label={`${field.label} (${field.unit})`}
+              type="number"
+              step="any"
+              min="0"
+              mono
+              error={columnErrors?.[field.key]?.message}
+              {...register(`column.${field.key}`, { valueAsNumber: true })}
+            />
           ))}
-          <TextField label="Cartridge size" placeholder="e.g. 24 g" error={columnErrors?.cartridgeSize?.message} {...register('column.cartridgeSize')} />
+          <TextField
+            label="Cartridge size"
+            placeholder="e.g. 24 g"
+            error={columnErrors?.cartridgeSize?.message}
+            {...register('column.cartridgeSize')}
+          />
           <Field label="Load">
             {(ids) => (
               <select {...ids} className={`${controlClass} min-h-10`} {...register('column.loadMethod')}>

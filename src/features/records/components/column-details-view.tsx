@@ -23,7 +23,11 @@ export function ColumnDetailsView({ column }: { column: NonNullable<RecordDto['c
         return (
           <div key={row.key} className="contents">
             <dt className="text-ink-soft">{row.label}</dt>
-            <dd className={typeof value === 'number' ? 'figure' : ''}>{typeof value === 'number' ? formatNumber(value, 1) : String(value)}{row.unit ? ` ${row.unit}` : ''}{row.key === 'loadMethod' ? ' load' : ''}</dd>
+            <dd className={typeof value === 'number' ? 'figure' : ''}>
+              {typeof value === 'number' ? formatNumber(value, 1) : String(value)}
+              {row.unit ? ` ${row.unit}` : ''}
+              {row.key === 'loadMethod' ? ' load' : ''}
+            </dd>
           </div>
         );
       })}

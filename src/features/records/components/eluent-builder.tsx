@@ -10,14 +10,19 @@ import { GradientSteps } from './gradient-steps';
 import { FieldError } from './field-error';
 
 const solventOptions = solvents.map((solvent) => ({ value: solvent.key, label: `${solvent.label} — ${solvent.name}` }));
-const additiveOptions = additives.map((additive) => ({ value: additive.key, label: `${additive.label} — ${additive.name}` }));
+const additiveOptions = additives.map((additive) => ({
+  value: additive.key,
+  label: `${additive.label} — ${additive.name}`,
+}));
 const valid = (value: number | null) => value !== null && Number.isFinite(value) && value > 0;
 
 /** The notation and % strong solvent of what is typed so far, or null while a part is missing. */
 export function liveSummary(eluent: RecordFormValues['eluent'], phase: string) {
   if (!eluent.components.every((part) => part.solvent && valid(part.parts))) return null;
   const components = eluent.components.map((part) => ({ solvent: part.solvent, parts: part.parts as number }));
-  const additiveList = eluent.additives.filter((item) => item.additive && valid(item.percent)).map((item) => ({ additive: item.additive, percent: item.percent as number }));
+  const additiveList = eluent.additives
+    .filter((item) => item.additive && valid(item.percent))
+    .map((item) => ({ additive: item.additive, percent: item.percent as number }));
   return eluentSummary({ components, additives: additiveList, mode: 'isocratic', steps: [] }, phase);
 }
 
@@ -26,7 +31,11 @@ export function liveSummary(eluent: RecordFormValues['eluent'], phase: string) {
  * share; additives in % v/v; isocratic or gradient steps with column volumes.
  */
 export function EluentBuilder() {
-  const { register, control, formState: { errors } } = useFormContext<RecordFormValues>();
+  const {
+    register,
+    control,
+    formState: { errors },
+  } = useFormContext<RecordFormValues>();
   const components = useFieldArray({ control, name: 'eluent.components' });
   const additiveRows = useFieldArray({ control, name: 'eluent.additives' });
   const eluent = useWatch({ control, name: 'eluent' });
@@ -47,38 +56,90 @@ export function EluentBuilder() {
         ))}
       </div>
       <div className="space-y-2 text-sm">
-        <p aria-hidden="true" className="grid grid-cols-[minmax(0,1fr)_5.5rem_3.5rem_auto] gap-2 text-xs text-ink-soft sm:grid-cols-[minmax(0,1fr)_8rem_5rem_5rem]">
-          <span>Solvent</span><span>Parts by volume</span><span>% v/v</span><span />
+        <p
+          aria-hidden="true"
+          className={
+            'grid grid-cols-[minmax(0,1fr)_5.5rem_3.5rem_auto] gap-2 text-xs text-ink-soft ' +
+            'sm:grid-cols-[minmax(0,1fr)_8rem_5rem_5rem]'
+          }
+        >
+          <span>Solvent</span>
+          <span>Parts by volume</span>
+          <span>% v/v</span>
+          <span />
         </p>
         {components.fields.map((field, index) => {
           const parts = eluent.components[index]?.parts ?? null;
           return (
-            <div key={field.id} role="group" aria-label={`Solvent ${index + 1} of the eluent`} className="grid grid-cols-[minmax(0,1fr)_5.5rem_3.5rem_auto] items-start gap-2 sm:grid-cols-[minmax(0,1fr)_8rem_5rem_5rem]">
+            <div
+              key={field.id}
+              role="group"
+              aria-label={`Solvent ${index + 1} of the eluent`}
+              className="grid grid-cols-[minmax(0,1fr)_5.5rem_3.5rem_auto] items-start gap-2 sm:grid-cols-[minmax(0,1fr)_8rem_5rem_5rem]"
+            >
               <div className="min-w-0">
-                <select aria-label={`Solvent ${index + 1}`} className={`${controlClass} min-h-10`} {...register(`eluent.components.${index}.solvent`)}>
-                  {solventOptions.map((option) => <option key={option.value} value={option.value}>{option.label}</option>)}
+                <select
+                  aria-label={`Solvent ${index + 1}`}
+                  className={`${controlClass} min-h-10`}
+                  {...register(`eluent.components.${index}.solvent`)}
+                >
+                  {solventOptions.map((option) => (
+                    <option key={option.value} value={option.value}>
+                      {option.label}
+                    </option>
+                  ))}
                 </select>
                 <FieldError error={errors.eluent?.components?.[index]?.solvent} />
               </div>
               <div>
-                <input aria-label={`Parts of solvent ${index + 1}`} type="number" inputMode="decimal" step="any" min="0" className={`${controlClass} figure`} {...register(`eluent.components.${index}.parts`, { valueAsNumber: true })} />
+                <input
+                  aria-label={`Parts of solvent ${index + 1}`}
+                  type="number"
+                  inputMode="decimal"
+                  step="any"
+                  min="0"
+                  className={`${controlClass} figure`}
+                  {...register(`eluent.components.${index}.parts`, { valueAsNumber: true })}
+                />
                 <FieldError error={errors.eluent?.components?.[index]?.parts} />
               </div>
-              <span className="figure py-2 text-ink-soft" aria-live="polite">{valid(parts) && total > 0 ? `${formatNumber((100 * (parts as number)) / total, 1)} %` : '—'}</span>
-              <Button size="sm" variant="quiet" disabled={components.fields.length === 1} onClick={() => components.remove(index)} aria-label={`Remove solvent ${index + 1}`}>Remove</Button>
+              <span className="figure py-2 text-ink-soft" aria-live="polite">
+                {valid(parts) && total > 0 ? `${formatNumber((100 * (parts as number)) / total, 1)} %` : '—'}
+              </span>
+              <Button
+                size="sm"
+                variant="quiet"
+                disabled={components.fields.length === 1}
+                onClick={() => components.remove(index)}
+                aria-label={`Remove solvent ${index + 1}`}
+              >
+                Remove
+              </Button>
             </div>
           );
         })}
       </div>
-      <FieldError error={errors.eluent?.components?.root ?? (errors.eluent?.components as { message?: string } | undefined)} />
+      <FieldError
+        error={errors.eluent?.components?.root ?? (errors.eluent?.components as { message?: string } | undefined)}
+      />
       <div className="flex flex-wrap items-center gap-3">
-        <Button size="sm" disabled={components.fields.length >= 4} onClick={() => components.append({ solvent: 'dichloromethane', parts: 1 })}>Add solvent</Button>
+        <Button
+          size="sm"
+          disabled={components.fields.length >= 4}
+          onClick={() => components.append({ solvent: 'dichloromethane', parts: 1 })}
+        >
+          Add solvent
+        </Button>
         <p className="text-sm" data-testid="eluent-summary">
           {summary ? (
             <>
               <span className="figure">{summary.notation}</span>
               {summary.strongSolvent && summary.strongPercent !== null && eluent.components.length > 1 && (
-                <span className="text-ink-soft"> · <span className="figure">{formatNumber(summary.strongPercent, 1)} %</span> {solventLabel(summary.strongSolvent)} (the stronger solvent, by Snyder’s ε°)</span>
+                <span className="text-ink-soft">
+                  {' '}
+                  · <span className="figure">{formatNumber(summary.strongPercent, 1)} %</span>{' '}
+                  {solventLabel(summary.strongSolvent)} (the stronger solvent, by Snyder’s ε°)
+                </span>
               )}
             </>
           ) : (
@@ -88,20 +149,50 @@ export function EluentBuilder() {
       </div>
 
       <div className="space-y-2">
-        <p className="text-sm font-medium">Additives <span className="font-normal text-ink-soft">(% v/v of the eluent)</span></p>
+        <p className="text-sm font-medium">
+          Additives <span className="font-normal text-ink-soft">(% v/v of the eluent)</span>
+        </p>
         {additiveRows.fields.map((field, index) => (
           <div key={field.id} className="flex flex-wrap items-start gap-2">
-            <select aria-label={`Additive ${index + 1}`} className={`${controlClass} min-h-10 max-w-xs`} {...register(`eluent.additives.${index}.additive`)}>
-              {additiveOptions.map((option) => <option key={option.value} value={option.value}>{option.label}</option>)}
+            <select
+              aria-label={`Additive ${index + 1}`}
+              className={`${controlClass} min-h-10 max-w-xs`}
+              {...register(`eluent.additives.${index}.additive`)}
+            >
+              {additiveOptions.map((option) => (
+                <option key={option.value} value={option.value}>
+                  {option.label}
+                </option>
+              ))}
             </select>
             <div className="w-28">
-              <input aria-label={`Percent of additive ${index + 1}`} type="number" step="any" min="0" className={`${controlClass} figure`} {...register(`eluent.additives.${index}.percent`, { valueAsNumber: true })} />
+              <input
+                aria-label={`Percent of additive ${index + 1}`}
+                type="number"
+                step="any"
+                min="0"
+                className={`${controlClass} figure`}
+                {...register(`eluent.additives.${index}.percent`, { valueAsNumber: true })}
+              />
               <FieldError error={errors.eluent?.additives?.[index]?.percent} />
             </div>
-            <Button size="sm" variant="quiet" onClick={() => additiveRows.remove(index)} aria-label={`Remove additive ${index + 1}`}>Remove</Button>
+            <Button
+              size="sm"
+              variant="quiet"
+              onClick={() => additiveRows.remove(index)}
+              aria-label={`Remove additive ${index + 1}`}
+            >
+              Remove
+            </Button>
           </div>
         ))}
-        <Button size="sm" disabled={additiveRows.fields.length >= 4} onClick={() => additiveRows.append({ additive: 'triethylamine', percent: 1 })}>Add additive</Button>
+        <Button
+          size="sm"
+          disabled={additiveRows.fields.length >= 4}
+          onClick={() => additiveRows.append({ additive: 'triethylamine', percent: 1 })}
+        >
+          Add additive
+        </Button>
       </div>
 
       {eluent.mode === 'gradient' && <GradientSteps />}

@@ -13,11 +13,25 @@ export function EluentView({ record }: { record: Pick<RecordListItem, 'eluent' |
     <div className="space-y-2 text-sm">
       <p className="figure text-base">{eluentSummary.notation}</p>
       <table className="text-sm">
-        <thead className="text-left text-xs text-ink-soft"><tr><th className="pr-4 font-normal">Solvent</th><th className="pr-4 font-normal">Parts</th><th className="font-normal">% v/v</th></tr></thead>
+        <thead className="text-left text-xs text-ink-soft">
+          <tr>
+            <th className="pr-4 font-normal">Solvent</th>
+            <th className="pr-4 font-normal">Parts</th>
+            <th className="font-normal">% v/v</th>
+          </tr>
+        </thead>
         <tbody>
           {eluent.components.map((part) => (
             <tr key={part.solvent}>
-              <td className="pr-4">{label(part.solvent)}{solventByKey(part.solvent)?.name !== label(part.solvent) && <span className="text-ink-soft"> ({solventByKey(part.solvent)?.name})</span>}{eluentSummary.strongSolvent === part.solvent && eluent.components.length > 1 && <span className="ml-1 text-xs text-front">strong</span>}</td>
+              <td className="pr-4">
+                {label(part.solvent)}
+                {solventByKey(part.solvent)?.name !== label(part.solvent) && (
+                  <span className="text-ink-soft"> ({solventByKey(part.solvent)?.name})</span>
+                )}
+                {eluentSummary.strongSolvent === part.solvent && eluent.components.length > 1 && (
+                  <span className="ml-1 text-xs text-front">strong</span>
+                )}
+              </td>
               <td className="pr-4 figure">{formatParts(part.parts)}</td>
               <td className="figure">{formatNumber((100 * part.parts) / total, 1)}</td>
             </tr>
@@ -25,10 +39,19 @@ export function EluentView({ record }: { record: Pick<RecordListItem, 'eluent' |
         </tbody>
       </table>
       {eluentSummary.strongPercent !== null && eluent.components.length > 1 && (
-        <p className="text-xs text-ink-soft">Strong solvent chosen by Snyder’s ε° on the adsorbent (solvent catalogue); % v/v = its parts ÷ all parts.</p>
+        <p className="text-xs text-ink-soft">
+          Strong solvent chosen by Snyder’s ε° on the adsorbent (solvent catalogue); % v/v = its parts ÷ all parts.
+        </p>
       )}
       {eluent.additives.length > 0 && (
-        <p>Additives: {eluent.additives.map((item) => <span key={item.additive} className="figure mr-2">{formatNumber(item.percent)} % v/v {additiveByKey(item.additive)?.label ?? item.additive}</span>)}</p>
+        <p>
+          Additives:{' '}
+          {eluent.additives.map((item) => (
+            <span key={item.additive} className="figure mr-2">
+              {formatNumber(item.percent)} % v/v {additiveByKey(item.additive)?.label ?? item.additive}
+            </span>
+          ))}
+        </p>
       )}
       {eluent.mode === 'gradient' && (
         <table className="text-sm">
@@ -37,8 +60,13 @@ export function EluentView({ record }: { record: Pick<RecordListItem, 'eluent' |
             {eluent.steps.map((step, index) => (
               <tr key={index}>
                 <td className="pr-3 figure text-ink-soft">{index + 1}</td>
-                <td className="pr-3 figure">{step.components.map((part) => label(part.solvent)).join(' : ')} {step.components.map((part) => formatParts(part.parts)).join(' : ')}</td>
-                <td className="figure">{step.columnVolumes !== null ? `${formatParts(step.columnVolumes)} CV` : '—'}</td>
+                <td className="pr-3 figure">
+                  {step.components.map((part) => label(part.solvent)).join(' : ')}{' '}
+                  {step.components.map((part) => formatParts(part.parts)).join(' : ')}
+                </td>
+                <td className="figure">
+                  {step.columnVolumes !== null ? `${formatParts(step.columnVolumes)} CV` : '—'}
+                </td>
               </tr>
             ))}
           </tbody>

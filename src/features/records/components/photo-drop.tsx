@@ -48,32 +48,79 @@ export function PhotoDrop({ files, onChange }: PhotoDropProps) {
     <div>
       <p className="text-sm font-medium">Plate photos</p>
       <div
-        onDragOver={(event) => { event.preventDefault(); setDragging(true); }}
+        onDragOver={(event) => {
+          event.preventDefault();
+          setDragging(true);
+        }}
         onDragLeave={() => setDragging(false)}
         onDrop={onDrop}
-        className={`mt-1 rounded-plate border border-dashed p-4 text-sm ${dragging ? 'border-front bg-front-light' : 'border-line bg-plate'}`}
+        className={
+          `mt-1 rounded-plate border border-dashed p-4 text-sm ` +
+          `${dragging ? 'border-front bg-front-light' : 'border-line bg-plate'}`
+        }
       >
         <div className="flex flex-wrap items-center gap-2">
-          <label htmlFor={cameraId} className={`${buttonClass('secondary')} cursor-pointer`}>Take a photo</label>
-          <input id={cameraId} type="file" accept="image/*" capture="environment" className="sr-only" onChange={(event) => { take(event.target.files); event.target.value = ''; }} />
-          <label htmlFor={id} className={`${buttonClass('quiet')} cursor-pointer`}>Choose photos</label>
-          <input id={id} type="file" accept={acceptedTypes.join(',')} multiple className="sr-only" onChange={(event) => { take(event.target.files); event.target.value = ''; }} />
+          <label htmlFor={cameraId} className={`${buttonClass('secondary')} cursor-pointer`}>
+            Take a photo
+          </label>
+          <input
+            id={cameraId}
+            type="file"
+            accept="image/*"
+            capture="environment"
+            className="sr-only"
+            onChange={(event) => {
+              take(event.target.files);
+              event.target.value = '';
+            }}
+          />
+          <label htmlFor={id} className={`${buttonClass('quiet')} cursor-pointer`}>
+            Choose photos
+          </label>
+          <input
+            id={id}
+            type="file"
+            accept={acceptedTypes.join(',')}
+            multiple
+            className="sr-only"
+            onChange={(event) => {
+              take(event.target.files);
+              event.target.value = '';
+            }}
+          />
         </div>
         <p className="mt-1 text-xs text-ink-soft">Or drop them here — JPEG, PNG or WebP, up to 10 MB each.</p>
         {files.length > 0 && (
           <ul className="mt-2 flex flex-wrap gap-3" aria-label="Photos to save">
             {files.map((file, index) => (
               <li key={`${file.name}-${index}`} className="flex w-36 flex-col gap-1">
-                <img src={previews[index]} alt={`Preview of ${file.name}`} className="h-28 w-36 rounded-plate border border-line bg-surface object-contain" />
-                <span className="figure truncate text-xs" title={file.name}>{file.name}</span>
+                <img
+                  src={previews[index]}
+                  alt={`Preview of ${file.name}`}
+                  className="h-28 w-36 rounded-plate border border-line bg-surface object-contain"
+                />
+                <span className="figure truncate text-xs" title={file.name}>
+                  {file.name}
+                </span>
                 <span className="text-xs text-ink-soft">{(file.size / 1024).toFixed(0)} kB</span>
-                <Button size="sm" variant="quiet" onClick={() => onChange(files.filter((_, other) => other !== index))} aria-label={`Remove ${file.name}`}>Remove</Button>
+                <Button
+                  size="sm"
+                  variant="quiet"
+                  onClick={() => onChange(files.filter((_, other) => other !== index))}
+                  aria-label={`Remove ${file.name}`}
+                >
+                  Remove
+                </Button>
               </li>
             ))}
           </ul>
         )}
       </div>
-      {problems.map((problem) => <p key={problem} role="alert" className="mt-1 text-sm text-failed">{problem}</p>)}
+      {problems.map((problem) => (
+        <p key={problem} role="alert" className="mt-1 text-sm text-failed">
+          {problem}
+        </p>
+      ))}
     </div>
   );
 }

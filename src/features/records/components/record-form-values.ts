@@ -1,5 +1,11 @@
 import { z } from 'zod';
-import { recordInputSchema, recordUpdateSchema, type RecordDto, type RecordInput, type RecordUpdate } from '../../../../shared/schemas/record';
+import {
+  recordInputSchema,
+  recordUpdateSchema,
+  type RecordDto,
+  type RecordInput,
+  type RecordUpdate,
+} from '../../../../shared/schemas/record';
 import { formatDate } from '../../../lib/dates';
 import type { loadMethods, outcomes, spotLanes, spotRoles, techniques } from '../../../../shared/schemas/record-parts';
 
@@ -37,8 +43,15 @@ export interface RecordFormValues {
   outcomeReason: string;
   showColumn: boolean;
   column: {
-    diameterMm: FormNumber; cartridgeSize: string; silicaG: FormNumber; sampleMg: FormNumber; loadMethod: (typeof loadMethods)[number] | '';
-    fractionMl: FormNumber; fractionsPooled: string; yieldPercent: FormNumber; purityNote: string;
+    diameterMm: FormNumber;
+    cartridgeSize: string;
+    silicaG: FormNumber;
+    sampleMg: FormNumber;
+    loadMethod: (typeof loadMethods)[number] | '';
+    fractionMl: FormNumber;
+    fractionsPooled: string;
+    yieldPercent: FormNumber;
+    purityNote: string;
   };
   notebookRef: string;
   notes: string;
@@ -46,46 +59,101 @@ export interface RecordFormValues {
   runOn: string;
 }
 
-const num = (value: FormNumber | undefined) => (value === null || value === undefined || Number.isNaN(value) ? null : value);
+const num = (value: FormNumber | undefined) =>
+  value === null || value === undefined || Number.isNaN(value) ? null : value;
 const text = (value: string) => (value.trim() === '' ? null : value.trim());
 
-export const emptySpot = (role: SpotRow['role'] = 'target'): SpotRow => ({ role, rf: null, useDistances: false, spotDistanceMm: null, frontDistanceMm: null, lane: '', label: '' });
+export const emptySpot = (role: SpotRow['role'] = 'target'): SpotRow => ({
+  role,
+  rf: null,
+  useDistances: false,
+  spotDistanceMm: null,
+  frontDistanceMm: null,
+  lane: '',
+  label: '',
+});
 
 export function emptyRecordForm(): RecordFormValues {
   return {
-    structure: '', name: '', technique: 'tlc', stationaryPhase: 'silica-tlc-f254', stationaryPhaseOther: '',
-    eluent: { mode: 'isocratic', components: [{ solvent: 'ethyl-acetate', parts: 1 }, { solvent: 'hexanes', parts: 4 }], additives: [], steps: [] },
-    spots: [emptySpot('target')], visualisation: ['uv-254'], otherVisualisation: '', outcome: 'clean', outcomeReason: '', showColumn: false,
-    column: { diameterMm: null, cartridgeSize: '', silicaG: null, sampleMg: null, loadMethod: '', fractionMl: null, fractionsPooled: '', yieldPercent: null, purityNote: '' },
-    notebookRef: '', notes: '', runOn: formatDate(new Date().toISOString()),
+    structure: '',
+    name: '',
+    technique: 'tlc',
+    stationaryPhase: 'silica-tlc-f254',
+    stationaryPhaseOther: '',
+    eluent: {
+      mode: 'isocratic',
+      components: [
+        { solvent: 'ethyl-acetate', parts: 1 },
+        { solvent: 'hexanes', parts: 4 },
+      ],
+      additives: [],
+      steps: [],
+    },
+    spots: [emptySpot('target')],
+    visualisation: ['uv-254'],
+    otherVisualisation: '',
+    outcome: 'clean',
+    outcomeReason: '',
+    showColumn: false,
+    column: {
+      diameterMm: null,
+      cartridgeSize: '',
+      silicaG: null,
+      sampleMg: null,
+      loadMethod: '',
+      fractionMl: null,
+      fractionsPooled: '',
+      yieldPercent: null,
+      purityNote: '',
+    },
+    notebookRef: '',
+    notes: '',
+    runOn: formatDate(new Date().toISOString()),
   };
 }
 
 /** The API body for the form's values (structure left out when `withStructure` is false). */
 export function toRecordInput(values: RecordFormValues, withStructure = true): RecordInput {
-  const components = values.eluent.components.map((part) => ({ solvent: part.solvent, parts: num(part.parts) as number }));
+  const components = values.eluent.components.map((part) => ({
+    solvent: part.solvent,
+    parts: num(part.parts) as number,
+  }));
   const column = values.showColumn
     ? {
-        diameterMm: num(values.column.diameterMm), cartridgeSize: text(values.column.cartridgeSize), silicaG: num(values.column.silicaG), sampleMg: num(values.column.sampleMg),
-        loadMethod: values.column.loadMethod || null, fractionMl: num(values.column.fractionMl), fractionsPooled: text(values.column.fractionsPooled),
-        yieldPercent: num(values.column.yieldPercent), purityNote: text(values.column.purityNote),
+        diameterMm: num(values.column.diameterMm),
+        cartridgeSize: text(values.column.cartridgeSize),
+        silicaG: num(values.column.silicaG),
+        sampleMg: num(values.column.sampleMg),
+        loadMethod: values.column.loadMethod || null,
+        fractionMl: num(values.column.fractionMl),
+        fractionsPooled: text(values.column.fractionsPooled),
+        yieldPercent: num(values.column.yieldPercent),
+        purityNote: text(values.column.purityNote),
       }
     : null;
   return {
-    ...(withStructure ? { structure: values.structure.trim() || undefined, name: values.name.trim() || undefined } : {}),
+    ...(withStructure
+      ? { structure: values.structure.trim() || undefined, name: values.name.trim() || undefined }
+      : {}),
     technique: values.technique,
     stationaryPhase: values.stationaryPhase,
     stationaryPhaseOther: values.stationaryPhase === 'other' ? text(values.stationaryPhaseOther) : null,
     eluent: {
       components,
-      additives: values.eluent.additives.map((item) => ({ additive: item.additive, percent: num(item.percent) as number })),
+      additives: values.eluent.additives.map((item) => ({
+        additive: item.additive,
+        percent: num(item.percent) as number,
+      })),
       mode: values.eluent.mode,
-      steps: values.eluent.mode === 'gradient'
-        ? values.eluent.steps.map((step) => ({
-            components: components.map((part, index) => ({ solvent: part.solvent, parts: num(step.parts[index]) as number })).filter((part) => part.parts !== 0),
-            columnVolumes: num(step.columnVolumes),
-          }))
-        : [],
+      steps:
+        values.eluent.mode === 'gradient'
+          ? values.eluent.steps.map((step) => ({
+              components: components
+                .map((part, index) => ({ solvent: part.solvent, parts: num(step.parts[index]) as number }))
+                .filter((part) => part.parts !== 0),
+              columnVolumes: num(step.columnVolumes),
+            }))
+          : [],
     },
     spots: values.spots.map((spot) => ({
       role: spot.role,
@@ -110,7 +178,11 @@ export function toRecordInput(values: RecordFormValues, withStructure = true): R
 
 const formRules = (values: RecordFormValues, context: z.RefinementCtx) => {
   if (values.outcome === 'failed' && !values.outcomeReason.trim()) {
-    context.addIssue({ code: 'custom', path: ['outcomeReason'], message: 'Say why it failed: failures are knowledge too.' });
+    context.addIssue({
+      code: 'custom',
+      path: ['outcomeReason'],
+      message: 'Say why it failed: failures are knowledge too.',
+    });
   }
 };
 
@@ -149,8 +221,13 @@ export function recordToFormValues(record: RecordDto): RecordFormValues {
       })),
     },
     spots: record.spots.map((spot) => ({
-      role: spot.role, rf: spot.rf, useDistances: spot.spotDistanceMm !== null, spotDistanceMm: spot.spotDistanceMm, frontDistanceMm: spot.frontDistanceMm,
-      lane: spot.lane ?? '', label: spot.label ?? '',
+      role: spot.role,
+      rf: spot.rf,
+      useDistances: spot.spotDistanceMm !== null,
+      spotDistanceMm: spot.spotDistanceMm,
+      frontDistanceMm: spot.frontDistanceMm,
+      lane: spot.lane ?? '',
+      label: spot.label ?? '',
     })),
     visualisation: record.visualisations.map((item) => item.method),
     otherVisualisation: record.visualisations.find((item) => item.method === 'other')?.note ?? '',
@@ -158,9 +235,15 @@ export function recordToFormValues(record: RecordDto): RecordFormValues {
     outcomeReason: record.outcomeReason ?? '',
     showColumn: record.column !== null,
     column: {
-      diameterMm: record.column?.diameterMm ?? null, cartridgeSize: record.column?.cartridgeSize ?? '', silicaG: record.column?.silicaG ?? null,
-      sampleMg: record.column?.sampleMg ?? null, loadMethod: record.column?.loadMethod ?? '', fractionMl: record.column?.fractionMl ?? null,
-      fractionsPooled: record.column?.fractionsPooled ?? '', yieldPercent: record.column?.yieldPercent ?? null, purityNote: record.column?.purityNote ?? '',
+      diameterMm: record.column?.diameterMm ?? null,
+      cartridgeSize: record.column?.cartridgeSize ?? '',
+      silicaG: record.column?.silicaG ?? null,
+      sampleMg: record.column?.sampleMg ?? null,
+      loadMethod: record.column?.loadMethod ?? '',
+      fractionMl: record.column?.fractionMl ?? null,
+      fractionsPooled: record.column?.fractionsPooled ?? '',
+      yieldPercent: record.column?.yieldPercent ?? null,
+      purityNote: record.column?.purityNote ?? '',
     },
     notebookRef: record.notebookRef ?? '',
     notes: record.notes ?? '',

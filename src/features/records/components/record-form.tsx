@@ -40,9 +40,26 @@ interface RecordFormProps<Out> {
 }
 
 /** The condition-record form for contributing and editing: inline checks with the shared schema, server errors on their fields. */
-export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, withPhotos = true, plateReader }: RecordFormProps<Out>) {
-  const form = useForm<RecordFormValues, unknown, Out>({ defaultValues, resolver: zodResolver(schema as never) as Resolver<RecordFormValues, unknown, Out>, mode: 'onBlur' });
-  const { register, control, handleSubmit, setError, formState: { errors, isSubmitting } } = form;
+export function RecordForm<Out>({
+  defaultValues,
+  schema,
+  submitLabel,
+  onSave,
+  withPhotos = true,
+  plateReader,
+}: RecordFormProps<Out>) {
+  const form = useForm<RecordFormValues, unknown, Out>({
+    defaultValues,
+    resolver: zodResolver(schema as never) as Resolver<RecordFormValues, unknown, Out>,
+    mode: 'onBlur',
+  });
+  const {
+    register,
+    control,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = form;
   const [photos, setPhotos] = useState<File[]>([]);
   const [formMessage, setFormMessage] = useState<string | null>(null);
   const phase = useWatch({ control, name: 'stationaryPhase' });
@@ -55,7 +72,10 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
     } catch (error) {
       const mapped = mapServerErrors(error);
       for (const field of mapped.fields) setError(field.path as never, { type: 'server', message: field.message });
-      setFormMessage(mapped.formMessage ?? (mapped.fields.length > 0 ? 'The server refused some fields; see the messages beside them.' : null));
+      setFormMessage(
+        mapped.formMessage ??
+          (mapped.fields.length > 0 ? 'The server refused some fields; see the messages beside them.' : null),
+      );
     }
   });
 
@@ -63,18 +83,58 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
     <FormProvider {...form}>
       <form onSubmit={submit} noValidate className="space-y-6" aria-label={submitLabel}>
         <section className="space-y-3 rounded-plate border border-line bg-surface p-4">
-          <Controller control={control} name="structure" render={({ field }) => (
-            <StructureInput value={field.value} onChange={(text, parsed) => { field.onChange(text); if (parsed?.name && !form.getValues('name')) form.setValue('name', parsed.name); }}
-              required error={errors.structure?.message} defaultMode="paste"
-              extra={<RecentCompounds onPick={(smiles, name) => { field.onChange(smiles); if (name && !form.getValues('name')) form.setValue('name', name); }} />} />
-          )} />
-          <TextField label="Compound name" hint="Optional; kept as the compound’s name or added to its synonyms." className="max-w-md" {...register('name')} />
+          <Controller
+            control={control}
+            name="structure"
+            render={({ field }) => (
+              <StructureInput
+                value={field.value}
+                onChange={(text, parsed) => {
+                  field.onChange(text);
+                  if (parsed?.name && !form.getValues('name')) form.setValue('name', parsed.name);
+                }}
+                required
+                error={errors.structure?.message}
+                defaultMode="paste"
+                extra={
+                  <RecentCompounds
+                    onPick={(smiles, name) => {
+                      field.onChange(smiles);
+                      if (name && !form.getValues('name')) form.setValue('name', name);
+                    }}
+                  />
+                }
+              />
+            )}
+          />
+          <TextField
+            label="Compound name"
+            hint="Optional; kept as the compound’s name or added to its synonyms."
+            className="max-w-md"
+            {...register('name')}
+          />
         </section>
 
         <section className="grid grid-cols-1 gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
-          <SelectField label="Technique" options={techniques.map((value) => ({ value, label: techniqueLabels[value] }))} {...register('technique')} />
-          <SelectField label="Stationary phase" options={stationaryPhases.map((entry) => ({ value: entry.key, label: entry.name }))} error={errors.stationaryPhase?.message} {...register('stationaryPhase')} />
-          {phase === 'other' && <TextField label="Phase name" required error={errors.stationaryPhaseOther?.message} {...register('stationaryPhaseOther')} />}
+          <SelectField
+            label="Technique"
+            options={techniques.map((value) => ({ value, label: techniqueLabels[value] }))}
+            {...register('technique')}
+          />
+          <SelectField
+            label="Stationary phase"
+            options={stationaryPhases.map((entry) => ({ value: entry.key, label: entry.name }))}
+            error={errors.stationaryPhase?.message}
+            {...register('stationaryPhase')}
+          />
+          {phase === 'other' && (
+            <TextField
+              label="Phase name"
+              required
+              error={errors.stationaryPhaseOther?.message}
+              {...register('stationaryPhaseOther')}
+            />
+          )}
         </section>
 
         <section className="space-y-6 rounded-plate border border-line bg-surface p-4">
@@ -85,23 +145,68 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
         </section>
 
         <section className="grid grid-cols-1 gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
-          <SelectField label="Outcome" options={outcomes.map((value) => ({ value, label: value }))} {...register('outcome')} />
-          <TextAreaField label={outcome === 'clean' ? 'Reason or remark' : 'Reason'} required={outcome === 'failed'} rows={2} className="sm:col-span-2"
-            hint={outcome === 'failed' ? 'What went wrong: streaking, co-elution, decomposition…' : undefined} error={errors.outcomeReason?.message} {...register('outcomeReason')} />
+          <SelectField
+            label="Outcome"
+            options={outcomes.map((value) => ({ value, label: value }))}
+            {...register('outcome')}
+          />
+          <TextAreaField
+            label={outcome === 'clean' ? 'Reason or remark' : 'Reason'}
+            required={outcome === 'failed'}
+            rows={2}
+            className="sm:col-span-2"
+            hint={outcome === 'failed' ? 'What went wrong: streaking, co-elution, decomposition…' : undefined}
+            error={errors.outcomeReason?.message}
+            {...register('outcomeReason')}
+          />
         </section>
 
-        <section className="rounded-plate border border-line bg-surface p-4"><ColumnDetailsFields /></section>
+        <section className="rounded-plate border border-line bg-surface p-4">
+          <ColumnDetailsFields />
+        </section>
 
         <section className="grid grid-cols-1 gap-4 rounded-plate border border-line bg-surface p-4 sm:grid-cols-3">
-          <TextField label="Notebook reference" placeholder="e.g. AB-03 p. 41" mono error={errors.notebookRef?.message} {...register('notebookRef')} />
-          <TextField label="Plate run on" type="date" hint="The day you ran the plate, if not today." error={errors.runOn?.message} {...register('runOn')} />
-          <TextAreaField label="Notes" rows={3} className="sm:col-span-3" error={errors.notes?.message} {...register('notes')} />
-          {withPhotos && <div className="sm:col-span-3"><PhotoDrop files={photos} onChange={setPhotos} /></div>}
+          <TextField
+            label="Notebook reference"
+            placeholder="e.g. AB-03 p. 41"
+            mono
+            error={errors.notebookRef?.message}
+            {...register('notebookRef')}
+          />
+          <TextField
+            label="Plate run on"
+            type="date"
+            hint="The day you ran the plate, if not today."
+            error={errors.runOn?.message}
+            {...register('runOn')}
+          />
+          <TextAreaField
+            label="Notes"
+            rows={3}
+            className="sm:col-span-3"
+            error={errors.notes?.message}
+            {...register('notes')}
+          />
+          {withPhotos && (
+            <div className="sm:col-span-3">
+              <PhotoDrop files={photos} onChange={setPhotos} />
+            </div>
+          )}
           {withPhotos && plateReader && photos.length > 0 && (
             <div className="sm:col-span-3">
               {plateReader({
                 files: photos,
-                onUseSpots: (spots) => form.setValue('spots', spots.map((spot) => ({ ...spot, useDistances: false, spotDistanceMm: null, frontDistanceMm: null })), { shouldDirty: true }),
+                onUseSpots: (spots) =>
+                  form.setValue(
+                    'spots',
+                    spots.map((spot) => ({
+                      ...spot,
+                      useDistances: false,
+                      spotDistanceMm: null,
+                      frontDistanceMm: null,
+                    })),
+                    { shouldDirty: true },
+                  ),
                 onUsePool: (summary) => {
                   form.setValue('showColumn', true);
                   form.setValue('column.fractionsPooled', summary, { shouldDirty: true });
@@ -111,8 +216,14 @@ export function RecordForm<Out>({ defaultValues, schema, submitLabel, onSave, wi
           )}
         </section>
 
-        {formMessage && <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-sm text-failed">{formMessage}</p>}
-        <Button type="submit" variant="primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : submitLabel}</Button>
+        {formMessage && (
+          <p role="alert" className="rounded-plate border border-failed/40 bg-surface p-3 text-sm text-failed">
+            {formMessage}
+          </p>
+        )}
+        <Button type="submit" variant="primary" disabled={isSubmitting}>
+          {isSubmitting ? 'Saving…' : submitLabel}
+        </Button>
       </form>
     </FormProvider>
   );

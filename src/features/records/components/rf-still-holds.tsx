@@ -46,12 +46,17 @@ export function RfStillHolds() {
   return (
     <div role="alert" className="space-y-2 rounded-plate border border-spot/50 bg-spot-light p-3 text-sm">
       <p>
-        The Rf values were typed for <span className="figure">{asked.from}</span>; the eluent is now <span className="figure">{asked.to}</span>.
-        Do they still hold — was the plate run in <span className="figure">{asked.to}</span>?
+        The Rf values were typed for <span className="figure">{asked.from}</span>; the eluent is now{' '}
+        <span className="figure">{asked.to}</span>. Do they still hold — was the plate run in{' '}
+        <span className="figure">{asked.to}</span>?
       </p>
       <div className="flex flex-wrap gap-2">
-        <Button size="sm" variant="primary" onClick={keep}>Yes, run in {asked.to}</Button>
-        <Button size="sm" onClick={clear}>No, clear the Rf values</Button>
+        <Button size="sm" variant="primary" onClick={keep}>
+          Yes, run in {asked.to}
+        </Button>
+        <Button size="sm" onClick={clear}>
+          No, clear the Rf values
+        </Button>
       </div>
     </div>
   );

@@ -4,10 +4,35 @@ import { useUrlUpdater } from '../../../lib/url-params';
 import type { RecordListQuery } from '../../../../shared/schemas/record';
 
 /** Filters a user can set on the records table; each is one URL parameter. */
-export const filterKeys = ['q', 'phase', 'solvent', 'stain', 'outcome', 'technique', 'class', 'status', 'author', 'compoundId', 'from', 'to', 'demo'] as const;
+export const filterKeys = [
+  'q',
+  'phase',
+  'solvent',
+  'stain',
+  'outcome',
+  'technique',
+  'class',
+  'status',
+  'author',
+  'compoundId',
+  'from',
+  'to',
+  'demo',
+] as const;
 export type FilterKey = (typeof filterKeys)[number];
 
-export const defaultColumns = ['structure', 'compound', 'plate', 'eluent', 'phase', 'targetRf', 'outcome', 'visualisation', 'author', 'createdAt'];
+export const defaultColumns = [
+  'structure',
+  'compound',
+  'plate',
+  'eluent',
+  'phase',
+  'targetRf',
+  'outcome',
+  'visualisation',
+  'author',
+  'createdAt',
+];
 
 /**
  * The records table's state — filters, sort, order, page, page size and visible columns — lives in the URL,

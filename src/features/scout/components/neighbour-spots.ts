@@ -12,7 +12,12 @@ export function neighbourRfsNear(result: ScoutResult): number[] {
   const tolerance = Math.max(3, suggestion.strongPercent / 3);
   return result.neighbours.flatMap((neighbour) =>
     neighbour.conditions
-      .filter((condition) => condition.rf !== null && condition.strongPercent !== null && labels.every((label) => condition.notation.includes(label)))
+      .filter(
+        (condition) =>
+          condition.rf !== null &&
+          condition.strongPercent !== null &&
+          labels.every((label) => condition.notation.includes(label)),
+      )
       .filter((condition) => Math.abs((condition.strongPercent as number) - suggestion.strongPercent) <= tolerance)
       .map((condition) => condition.rf as number),
   );
@@ -25,7 +30,16 @@ export function neighbourPointsInPair(result: ScoutResult) {
   const labels = [suggestion.pair.weak, suggestion.pair.strong].map((key) => solventByKey(key)?.label ?? key);
   return result.neighbours.flatMap((neighbour) =>
     neighbour.conditions
-      .filter((condition) => condition.rf !== null && condition.strongPercent !== null && labels.every((label) => condition.notation.includes(label)))
-      .map((condition) => ({ x: condition.strongPercent as number, y: condition.rf as number, label: `${neighbour.name ?? neighbour.smiles}: ${condition.notation}` })),
+      .filter(
+        (condition) =>
+          condition.rf !== null &&
+          condition.strongPercent !== null &&
+          labels.every((label) => condition.notation.includes(label)),
+      )
+      .map((condition) => ({
+        x: condition.strongPercent as number,
+        y: condition.rf as number,
+        label: `${neighbour.name ?? neighbour.smiles}: ${condition.notation}`,
+      })),
   );
 }

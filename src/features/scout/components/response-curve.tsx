@@ -32,12 +32,20 @@ export function ResponseCurve({ result }: { result: ScoutResult }) {
   const inset = 8;
   const sx = linear(xDomain, [plotBox.x0 + inset, plotBox.x1 - inset]);
   const sy = linear(y.domain, [plotBox.y0 - inset, plotBox.y1 + inset]);
-  const shown = curve.filter((point) => point.strongPercent >= xDomain[0] - 1e-9 && point.strongPercent <= xDomain[1] + 1e-9);
-  const path = (values: [number, number][]) => values.map(([px, py], i) => `${i ? 'L' : 'M'}${sx(px).toFixed(1)} ${sy(py).toFixed(1)}`).join(' ');
-  const band = shown.length > 1
-    ? `${path(shown.map((point) => [point.strongPercent, point.upper]))} ${path([...shown].reverse().map((point) => [point.strongPercent, point.lower])).replace(/^M/, 'L')} Z`
-    : '';
-  const summary = `Scout's predicted Rf against % ${strong} with its 90 % interval as a band, ${points.length} plate${points.length === 1 ? '' : 's'} of neighbours, and the suggestion (${suggestion.notation}, Rf ${fmt(suggestion.predictedRf)}).`;
+  const shown = curve.filter(
+    (point) => point.strongPercent >= xDomain[0] - 1e-9 && point.strongPercent <= xDomain[1] + 1e-9,
+  );
+  const path = (values: [number, number][]) =>
+    values.map(([px, py], i) => `${i ? 'L' : 'M'}${sx(px).toFixed(1)} ${sy(py).toFixed(1)}`).join(' ');
+  const band =
+    shown.length > 1
+      ? `${path(shown.map((point) => [point.strongPercent, point.upper]))} ` +
+        `${path([...shown].reverse().map((point) => [point.strongPercent, point.lower])).replace(/^M/, 'L')} Z`
+      : '';
+  const summary =
+    `Scout's predicted Rf against % ${strong} with its 90 % interval as a band, ` +
+    `${points.length} plate${points.length === 1 ? '' : 's'} of neighbours, and the suggestion ` +
+    `(${suggestion.notation}, Rf ${fmt(suggestion.predictedRf)}).`;
   return (
     <ChartFigure
       title={`Rf against % ${strong}`}
@@ -53,7 +61,9 @@ export function ResponseCurve({ result }: { result: ScoutResult }) {
             <tr key={point.strongPercent}>
               <td>{fmt(point.strongPercent)}</td>
               <td>{fmt(point.rf)}</td>
-              <td>{fmt(point.lower)}–{fmt(point.upper)}</td>
+              <td>
+                {fmt(point.lower)}–{fmt(point.upper)}
+              </td>
             </tr>
           ))}
         </tbody>
@@ -61,14 +71,41 @@ export function ResponseCurve({ result }: { result: ScoutResult }) {
     >
       <Axes x={x} y={y} xDomain={xDomain} yDomain={y.domain} sx={sx} sy={sy} />
       {band && <path data-part="band" d={band} className="fill-front/15 stroke-none" />}
-      {shown.length > 1 && <path data-part="fit" d={path(shown.map((point) => [point.strongPercent, point.rf]))} fill="none" className="stroke-front" strokeWidth={1.5} strokeDasharray="5 3" />}
-      {points.filter((point) => point.x >= xDomain[0] && point.x <= xDomain[1]).map((point, i) => (
-        <circle key={i} data-part="point" cx={sx(point.x)} cy={sy(point.y)} r={4} className="fill-ink-soft/80 stroke-surface">
-          <title>{`${point.label ? `${point.label}: ` : ''}${fmt(point.x)} %, Rf ${fmt(point.y)}`}</title>
-        </circle>
-      ))}
-      <circle data-part="point" cx={sx(suggestion.strongPercent)} cy={sy(suggestion.predictedRf)} r={5} className="fill-spot stroke-spot-dark">
-        <title>{`suggested: ${suggestion.label}, Rf ${fmt(suggestion.predictedRf)} (90 %: ${fmt(suggestion.interval[0])}–${fmt(suggestion.interval[1])})`}</title>
+      {shown.length > 1 && (
+        <path
+          data-part="fit"
+          d={path(shown.map((point) => [point.strongPercent, point.rf]))}
+          fill="none"
+          className="stroke-front"
+          strokeWidth={1.5}
+          strokeDasharray="5 3"
+        />
+      )}
+      {points
+        .filter((point) => point.x >= xDomain[0] && point.x <= xDomain[1])
+        .map((point, i) => (
+          <circle
+            key={i}
+            data-part="point"
+            cx={sx(point.x)}
+            cy={sy(point.y)}
+            r={4}
+            className="fill-ink-soft/80 stroke-surface"
+          >
+            <title>{`${point.label ? `${point.label}: ` : ''}${fmt(point.x)} %, Rf ${fmt(point.y)}`}</title>
+          </circle>
+        ))}
+      <circle
+        data-part="point"
+        cx={sx(suggestion.strongPercent)}
+        cy={sy(suggestion.predictedRf)}
+        r={5}
+        className="fill-spot stroke-spot-dark"
+      >
+        <title>
+          {`suggested: ${suggestion.label}, Rf ${fmt(suggestion.predictedRf)} (90 %: ` +
+            `${fmt(suggestion.interval[0])}–${fmt(suggestion.interval[1])})`}
+        </title>
       </circle>
     </ChartFigure>
   );

@@ -24,7 +24,15 @@ const phaseOptions = [
 ];
 
 /** Structure, target Rf (0.15–0.45), preferred pair and phase; submits one Scout question. */
-export function ScoutForm({ onSubmit, busy, initialStructure = '' }: { onSubmit: (input: ScoutInput) => void; busy: boolean; initialStructure?: string }) {
+export function ScoutForm({
+  onSubmit,
+  busy,
+  initialStructure = '',
+}: {
+  onSubmit: (input: ScoutInput) => void;
+  busy: boolean;
+  initialStructure?: string;
+}) {
   const id = useId();
   const [structure, setStructure] = useState(initialStructure);
   const [targetRf, setTargetRf] = useState(0.3);
@@ -43,18 +51,50 @@ export function ScoutForm({ onSubmit, busy, initialStructure = '' }: { onSubmit:
   }
   return (
     <form onSubmit={submit} className="space-y-4" aria-label="Scout question">
-      <StructureInput value={structure} onChange={(text) => setStructure(text)} label="Molecule" required error={error} defaultMode="paste" />
+      <StructureInput
+        value={structure}
+        onChange={(text) => setStructure(text)}
+        label="Molecule"
+        required
+        error={error}
+        defaultMode="paste"
+      />
       <div className="grid gap-4 md:grid-cols-3">
         <div>
-          <label htmlFor={`${id}-rf`} className="block text-sm font-medium text-ink">Target Rf <span className="figure">{targetRf.toFixed(2)}</span></label>
-          <input id={`${id}-rf`} type="range" min={scoutTargetRange[0]} max={scoutTargetRange[1]} step={0.01} value={targetRf}
-            onChange={(event) => setTargetRf(Number(event.target.value))} className="mt-3 w-full accent-front" aria-describedby={`${id}-rf-hint`} />
-          <p id={`${id}-rf-hint`} className="mt-1 text-xs text-ink-soft">Flash columns run best with the target at Rf 0.2–0.35 (Still 1978).</p>
+          <label htmlFor={`${id}-rf`} className="block text-sm font-medium text-ink">
+            Target Rf <span className="figure">{targetRf.toFixed(2)}</span>
+          </label>
+          <input
+            id={`${id}-rf`}
+            type="range"
+            min={scoutTargetRange[0]}
+            max={scoutTargetRange[1]}
+            step={0.01}
+            value={targetRf}
+            onChange={(event) => setTargetRf(Number(event.target.value))}
+            className="mt-3 w-full accent-front"
+            aria-describedby={`${id}-rf-hint`}
+          />
+          <p id={`${id}-rf-hint`} className="mt-1 text-xs text-ink-soft">
+            Flash columns run best with the target at Rf 0.2–0.35 (Still 1978).
+          </p>
         </div>
-        <SelectField label="Preferred solvent pair" value={pair} onChange={(event) => setPair(event.target.value)} options={pairOptions} />
-        <SelectField label="Stationary phase" value={phase} onChange={(event) => setPhase(event.target.value)} options={phaseOptions} />
+        <SelectField
+          label="Preferred solvent pair"
+          value={pair}
+          onChange={(event) => setPair(event.target.value)}
+          options={pairOptions}
+        />
+        <SelectField
+          label="Stationary phase"
+          value={phase}
+          onChange={(event) => setPhase(event.target.value)}
+          options={phaseOptions}
+        />
       </div>
-      <Button type="submit" variant="primary" disabled={busy}>{busy ? 'Scouting…' : 'Scout conditions'}</Button>
+      <Button type="submit" variant="primary" disabled={busy}>
+        {busy ? 'Scouting…' : 'Scout conditions'}
+      </Button>
     </form>
   );
 }

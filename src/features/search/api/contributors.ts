@@ -5,7 +5,11 @@ import { searchKeys } from './keys';
 
 export const getContributors = () => api('/api/search/contributors', {}, searchContributorsSchema);
 
-export const contributorsQueryOptions = queryOptions({ queryKey: searchKeys.contributors(), queryFn: getContributors, staleTime: 5 * 60_000 });
+export const contributorsQueryOptions = queryOptions({
+  queryKey: searchKeys.contributors(),
+  queryFn: getContributors,
+  staleTime: 5 * 60_000,
+});
 
 /** People credited on active records, for the contributor filter. */
 export function useContributors() {

@@ -4,10 +4,16 @@ import { searchResponseSchema } from '../../../../shared/schemas/search';
 import { searchKeys } from './keys';
 
 /** `GET /api/search` with a prepared query string, the answer checked against the shared schema. */
-export const getSearch = (query: string, signal?: AbortSignal) => api(`/api/search?${query}`, { signal }, searchResponseSchema);
+export const getSearch = (query: string, signal?: AbortSignal) =>
+  api(`/api/search?${query}`, { signal }, searchResponseSchema);
 
 export const searchQueryOptions = (query: string) =>
-  queryOptions({ queryKey: searchKeys.results(query), queryFn: ({ signal }) => getSearch(query, signal), placeholderData: keepPreviousData, staleTime: 15_000 });
+  queryOptions({
+    queryKey: searchKeys.results(query),
+    queryFn: ({ signal }) => getSearch(query, signal),
+    placeholderData: keepPreviousData,
+    staleTime: 15_000,
+  });
 
 /** One page of search results; the previous page stays on screen while the next loads. */
 export function useSearch(query: string, enabled = true) {

@@ -11,12 +11,18 @@ export function ConditionsList({ conditions }: { conditions: ConditionSummary[] 
         <li key={condition.recordId} className="text-xs">
           <div className="flex flex-wrap items-center gap-x-2 gap-y-0.5">
             <OutcomeBadge outcome={condition.outcome} />
-            <Link to={`/records/${condition.recordId}`} className="inline-block min-h-6 py-0.5 figure text-front hover:underline" title={`Open record ${condition.recordId}`}>
+            <Link
+              to={`/records/${condition.recordId}`}
+              className="inline-block min-h-6 py-0.5 figure text-front hover:underline"
+              title={`Open record ${condition.recordId}`}
+            >
               {condition.eluent}
             </Link>
           </div>
           <p className="figure mt-0.5 text-ink-soft">
-            {condition.strongPercent !== null && condition.strongSolvent ? `${formatNumber(condition.strongPercent, 1)} % ${condition.strongSolvent} · ` : ''}
+            {condition.strongPercent !== null && condition.strongSolvent
+              ? `${formatNumber(condition.strongPercent, 1)} % ${condition.strongSolvent} · `
+              : ''}
             Rf {condition.targetRf?.toFixed(2) ?? '—'} · {condition.stationaryPhaseLabel}
             {condition.stains.length > 0 ? ` · ${condition.stains.join(', ')}` : ''}
           </p>

@@ -7,8 +7,12 @@ export function ExportLinks({ state }: { state: SearchState }) {
   return (
     <div className="flex items-center gap-2 text-sm" role="group" aria-label="Export these results">
       <span className="text-ink-soft">Export</span>
-      <a href={`/api/export.csv?${query}`} download className={buttonClass('secondary', 'sm')}>CSV</a>
-      <a href={`/api/export.sdf?${query}`} download className={buttonClass('secondary', 'sm')}>SDF</a>
+      <a href={`/api/export.csv?${query}`} download className={buttonClass('secondary', 'sm')}>
+        CSV
+      </a>
+      <a href={`/api/export.sdf?${query}`} download className={buttonClass('secondary', 'sm')}>
+        SDF
+      </a>
     </div>
   );
 }

@@ -2,7 +2,10 @@
 export function Score({ similarity, relevance }: { similarity: number | null; relevance: number | null }) {
   if (similarity !== null) {
     return (
-      <span className="figure text-sm" title="Tanimoto similarity to the query structure (OpenChemLib 512-bit fingerprints; 1 = same fingerprint)">
+      <span
+        className="figure text-sm"
+        title="Tanimoto similarity to the query structure (OpenChemLib 512-bit fingerprints; 1 = same fingerprint)"
+      >
         {similarity.toFixed(2)}
         <span className="sr-only"> Tanimoto similarity</span>
       </span>

@@ -25,22 +25,59 @@ export function SearchFilters({ filters, onChange }: SearchFiltersProps) {
   return (
     <section aria-label="Filters" className="rounded-plate border border-line bg-surface p-3">
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-5">
-        <SelectField label="Compound class" placeholder="Any class" options={compoundClasses.map((entry) => ({ value: entry.key, label: entry.name }))} {...field('class')} />
-        <SelectField label="Stationary phase" placeholder="Any phase" options={stationaryPhases.map((phase) => ({ value: phase.key, label: phase.name }))} {...field('phase')} />
-        <SelectField label="Solvent in the eluent" placeholder="Any solvent" options={solvents.map((solvent) => ({ value: solvent.key, label: `${solvent.label} — ${solvent.name}` }))} {...field('solvent')} />
-        <SelectField label="Visualisation" placeholder="Any" options={stains.map((stain) => ({ value: stain.key, label: stain.label }))} {...field('stain')} />
-        <SelectField label="Outcome" placeholder="Any outcome" options={outcomes.map((outcome) => ({ value: outcome, label: outcome }))} {...field('outcome')} />
-        <SelectField label="Technique" placeholder="Any technique" options={techniques.map((technique) => ({ value: technique, label: techniqueLabels[technique] }))} {...field('technique')} />
+        <SelectField
+          label="Compound class"
+          placeholder="Any class"
+          options={compoundClasses.map((entry) => ({ value: entry.key, label: entry.name }))}
+          {...field('class')}
+        />
+        <SelectField
+          label="Stationary phase"
+          placeholder="Any phase"
+          options={stationaryPhases.map((phase) => ({ value: phase.key, label: phase.name }))}
+          {...field('phase')}
+        />
+        <SelectField
+          label="Solvent in the eluent"
+          placeholder="Any solvent"
+          options={solvents.map((solvent) => ({ value: solvent.key, label: `${solvent.label} — ${solvent.name}` }))}
+          {...field('solvent')}
+        />
+        <SelectField
+          label="Visualisation"
+          placeholder="Any"
+          options={stains.map((stain) => ({ value: stain.key, label: stain.label }))}
+          {...field('stain')}
+        />
+        <SelectField
+          label="Outcome"
+          placeholder="Any outcome"
+          options={outcomes.map((outcome) => ({ value: outcome, label: outcome }))}
+          {...field('outcome')}
+        />
+        <SelectField
+          label="Technique"
+          placeholder="Any technique"
+          options={techniques.map((technique) => ({ value: technique, label: techniqueLabels[technique] }))}
+          {...field('technique')}
+        />
         <SelectField
           label="Contributor"
           placeholder="Anyone"
-          options={(contributors.data?.items ?? []).map((person) => ({ value: String(person.id), label: `${person.name} (${person.records})` }))}
+          options={(contributors.data?.items ?? []).map((person) => ({
+            value: String(person.id),
+            label: `${person.name} (${person.records})`,
+          }))}
           {...field('contributor')}
         />
         <TextField label="Added from" type="date" {...field('from')} />
         <TextField label="Added to" type="date" {...field('to')} />
         <div className="flex items-end">
-          <Button size="md" disabled={active === 0} onClick={() => onChange(Object.fromEntries(searchFilterKeys.map((key) => [key, null])))}>
+          <Button
+            size="md"
+            disabled={active === 0}
+            onClick={() => onChange(Object.fromEntries(searchFilterKeys.map((key) => [key, null])))}
+          >
             Clear {active > 0 ? `${active} filter${active === 1 ? '' : 's'}` : 'filters'}
           </Button>
         </div>

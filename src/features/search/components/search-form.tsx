@@ -8,11 +8,20 @@ import { ModeSwitch } from './mode-switch';
 
 interface SearchFormProps {
   state: SearchState;
-  onSearch: (changes: { mode: SearchMode; q: string | null; structure: string | null; threshold: string | null }) => void;
+  onSearch: (changes: {
+    mode: SearchMode;
+    q: string | null;
+    structure: string | null;
+    threshold: string | null;
+  }) => void;
 }
 
 /** Text with no spaces made of SMILES characters and holding a bond, branch, ring or bracket mark (a guess, only to offer a switch). */
-const looksLikeSmiles = (text: string) => text.length > 3 && /^[A-Za-z0-9@+\-[\]()=#\\/%.]+$/.test(text) && /[=#()[\]]|[a-z]\d|\d[a-z]/i.test(text) && !/^[A-Za-z]+-\d+$/.test(text);
+const looksLikeSmiles = (text: string) =>
+  text.length > 3 &&
+  /^[A-Za-z0-9@+\-[\]()=#\\/%.]+$/.test(text) &&
+  /[=#()[\]]|[a-z]\d|\d[a-z]/i.test(text) &&
+  !/^[A-Za-z]+-\d+$/.test(text);
 
 /**
  * The one search box: words, or a structure (drawn, pasted or dropped) for a similarity or substructure
@@ -31,7 +40,12 @@ export function SearchForm({ state, onSearch }: SearchFormProps) {
 
   const structureToSend = parsed && parsed.text === structure ? parsed.smiles : structure.trim() ? structure : '';
   const submitWith = (nextMode: SearchMode) =>
-    onSearch({ mode: nextMode, q: text.trim() || null, structure: nextMode === 'text' ? null : structureToSend || null, threshold: nextMode === 'similar' ? threshold : null });
+    onSearch({
+      mode: nextMode,
+      q: text.trim() || null,
+      structure: nextMode === 'text' ? null : structureToSend || null,
+      threshold: nextMode === 'similar' ? threshold : null,
+    });
   const submit = (event: FormEvent) => {
     event.preventDefault();
     submitWith(mode);
@@ -47,11 +61,20 @@ export function SearchForm({ state, onSearch }: SearchFormProps) {
   const needsStructure = mode !== 'text';
   const smilesLike = mode === 'text' && looksLikeSmiles(text.trim());
   return (
-    <form role="search" aria-label="Search the group’s records" onSubmit={submit} className="space-y-3 rounded-plate border border-line bg-surface p-4">
+    <form
+      role="search"
+      aria-label="Search the group’s records"
+      onSubmit={submit}
+      className="space-y-3 rounded-plate border border-line bg-surface p-4"
+    >
       <ModeSwitch mode={mode} onChange={changeMode} />
       <div className="flex flex-wrap items-end gap-2">
         <TextField
-          label={needsStructure ? 'Words to narrow the structure’s hits (optional)' : 'Name, note, notebook reference or class'}
+          label={
+            needsStructure
+              ? 'Words to narrow the structure’s hits (optional)'
+              : 'Name, note, notebook reference or class'
+          }
           placeholder={needsStructure ? 'e.g. Et3N' : 'e.g. cinnamyl alcohol, KMnO4 streak, AB-02 p. 14, pyridine'}
           className="min-w-64 flex-1"
           value={text}
@@ -78,12 +101,18 @@ export function SearchForm({ state, onSearch }: SearchFormProps) {
       {smilesLike && (
         <p className="text-sm text-ink-soft">
           That looks like a SMILES.{' '}
-          <Button size="sm" variant="quiet" onClick={() => onSearch({ mode: 'similar', q: null, structure: text.trim(), threshold })}>
+          <Button
+            size="sm"
+            variant="quiet"
+            onClick={() => onSearch({ mode: 'similar', q: null, structure: text.trim(), threshold })}
+          >
             Search it as a structure (similar)
           </Button>
         </p>
       )}
-      {needsStructure && <StructureInput label="Structure to search with" value={structure} onChange={onStructure} defaultMode="paste" />}
+      {needsStructure && (
+        <StructureInput label="Structure to search with" value={structure} onChange={onStructure} defaultMode="paste" />
+      )}
     </form>
   );
 }

@@ -4,11 +4,31 @@ import { useUrlUpdater } from '../../../lib/url-params';
 import type { SearchMode, SearchSort, SearchView } from '../../../../shared/schemas/search';
 
 /** Filters of a search; each is one URL parameter and one API parameter of the same name. */
-export const searchFilterKeys = ['class', 'phase', 'solvent', 'stain', 'outcome', 'technique', 'contributor', 'from', 'to'] as const;
+export const searchFilterKeys = [
+  'class',
+  'phase',
+  'solvent',
+  'stain',
+  'outcome',
+  'technique',
+  'contributor',
+  'from',
+  'to',
+] as const;
 export type SearchFilterKey = (typeof searchFilterKeys)[number];
 
 /** Every URL parameter the search page reads: the whole search state, so a copied link reproduces it. */
-export const searchParamKeys = ['mode', 'q', 'structure', 'threshold', 'view', 'sort', 'page', 'pageSize', ...searchFilterKeys] as const;
+export const searchParamKeys = [
+  'mode',
+  'q',
+  'structure',
+  'threshold',
+  'view',
+  'sort',
+  'page',
+  'pageSize',
+  ...searchFilterKeys,
+] as const;
 
 export interface SearchState {
   mode: SearchMode;
@@ -22,7 +42,8 @@ export interface SearchState {
   filters: Partial<Record<SearchFilterKey, string>>;
 }
 
-const oneOf = <T extends string>(value: string | null, allowed: readonly T[], fallback: T): T => (allowed.includes(value as T) ? (value as T) : fallback);
+const oneOf = <T extends string>(value: string | null, allowed: readonly T[], fallback: T): T =>
+  allowed.includes(value as T) ? (value as T) : fallback;
 
 /** The search state read from URL parameters (unknown values fall back to the defaults). */
 export function searchStateOf(params: URLSearchParams): SearchState {

@@ -4,10 +4,16 @@ import { columnPlanResultSchema, type ColumnPlanInput } from '../../../../shared
 import { toolKeys } from './keys';
 
 /** `POST /api/tools/column-plan`: the flash-column plan of Still, Kahn & Mitra (1978) for a sample and its TLC. */
-export const getColumnPlan = (input: ColumnPlanInput, signal?: AbortSignal) => api('/api/tools/column-plan', { method: 'POST', body: input, signal }, columnPlanResultSchema);
+export const getColumnPlan = (input: ColumnPlanInput, signal?: AbortSignal) =>
+  api('/api/tools/column-plan', { method: 'POST', body: input, signal }, columnPlanResultSchema);
 
 export const columnPlanQueryOptions = (input: ColumnPlanInput) =>
-  queryOptions({ queryKey: toolKeys.columnPlan(input), queryFn: ({ signal }) => getColumnPlan(input, signal), placeholderData: keepPreviousData, staleTime: Infinity });
+  queryOptions({
+    queryKey: toolKeys.columnPlan(input),
+    queryFn: ({ signal }) => getColumnPlan(input, signal),
+    placeholderData: keepPreviousData,
+    staleTime: Infinity,
+  });
 
 /** The plan for the inputs, recomputed as they change (a pure calculation, so answers never go stale). */
 export function useColumnPlan(input: ColumnPlanInput | null) {

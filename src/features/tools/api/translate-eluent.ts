@@ -8,8 +8,16 @@ export const getTranslation = (input: TranslateEluentInput, signal?: AbortSignal
   api('/api/tools/translate-eluent', { method: 'POST', body: input, signal }, translateEluentResultSchema);
 
 export const translationQueryOptions = (input: TranslateEluentInput) =>
-  queryOptions({ queryKey: toolKeys.translation(input), queryFn: ({ signal }) => getTranslation(input, signal), staleTime: Infinity, retry: false });
+  queryOptions({
+    queryKey: toolKeys.translation(input),
+    queryFn: ({ signal }) => getTranslation(input, signal),
+    staleTime: Infinity,
+    retry: false,
+  });
 
 export function useTranslation(input: TranslateEluentInput | null) {
-  return useQuery({ ...translationQueryOptions(input ?? { from: '', to: { weak: 'hexanes', strong: 'EtOAc' } }), enabled: input !== null });
+  return useQuery({
+    ...translationQueryOptions(input ?? { from: '', to: { weak: 'hexanes', strong: 'EtOAc' } }),
+    enabled: input !== null,
+  });
 }

@@ -22,17 +22,42 @@ export function PlanFigures({ plan }: { plan: ColumnPlanResult }) {
     <div className="space-y-3">
       <dl className="grid grid-cols-1 gap-2 sm:grid-cols-2 lg:grid-cols-3">
         <Figure label="Column diameter" value={formatNumber(plan.diameterMm, 0)} unit="mm" source={s.diameterMm} />
-        <Figure label="Silica" value={formatNumber(plan.silicaG, 0)} unit={`g (${formatNumber(plan.silicaToSample, 0)} g per g of sample)`} source={s.silicaG} />
-        <Figure label="Eluent, packing and elution" value={formatNumber(plan.eluentMl, 0)} unit="mL" source={s.eluentMl} />
+        <Figure
+          label="Silica"
+          value={formatNumber(plan.silicaG, 0)}
+          unit={`g (${formatNumber(plan.silicaToSample, 0)} g per g of sample)`}
+          source={s.silicaG}
+        />
+        <Figure
+          label="Eluent, packing and elution"
+          value={formatNumber(plan.eluentMl, 0)}
+          unit="mL"
+          source={s.eluentMl}
+        />
         <Figure label="Fraction size" value={formatNumber(plan.fractionMl, 0)} unit="mL" source={s.fractionMl} />
         <Figure label="Target elutes after" value={formatNumber(plan.cvTarget, 1)} unit="CV" source={s.cvTarget} />
-        <Figure label="Band separation" value={plan.deltaCv === null ? '—' : formatNumber(plan.deltaCv, 1)} unit={plan.deltaCv === null ? 'no other spot given' : `CV (ΔRf ${formatNumber(plan.deltaRf ?? 0, 2)})`} source={s.deltaCv} />
+        <Figure
+          label="Band separation"
+          value={plan.deltaCv === null ? '—' : formatNumber(plan.deltaCv, 1)}
+          unit={plan.deltaCv === null ? 'no other spot given' : `CV (ΔRf ${formatNumber(plan.deltaRf ?? 0, 2)})`}
+          source={s.deltaCv}
+        />
       </dl>
-      <p className="text-sm"><strong>Elution ({plan.gradient.mode === 'isocratic' ? 'isocratic' : 'step gradient'}):</strong> {plan.gradient.advice} <span className="text-2xs text-ink-soft">({s.gradient})</span></p>
-      <p className="text-sm"><strong>Loading ({plan.load.method}):</strong> {plan.load.advice} <span className="text-2xs text-ink-soft">({s.load})</span></p>
+      <p className="text-sm">
+        <strong>Elution ({plan.gradient.mode === 'isocratic' ? 'isocratic' : 'step gradient'}):</strong>{' '}
+        {plan.gradient.advice} <span className="text-2xs text-ink-soft">({s.gradient})</span>
+      </p>
+      <p className="text-sm">
+        <strong>Loading ({plan.load.method}):</strong> {plan.load.advice}{' '}
+        <span className="text-2xs text-ink-soft">({s.load})</span>
+      </p>
       {plan.flags.length > 0 && (
         <ul className="space-y-1" aria-label="Flags">
-          {plan.flags.map((flag) => <li key={flag.code} className={flagTone}>{flag.message}</li>)}
+          {plan.flags.map((flag) => (
+            <li key={flag.code} className={flagTone}>
+              {flag.message}
+            </li>
+          ))}
         </ul>
       )}
     </div>

@@ -12,7 +12,17 @@ export interface PairPreset {
  */
 export const pairPresets: PairPreset[] = [
   { key: 'heptane-etoac', label: 'EtOAc / heptane', to: { weak: 'heptane', strong: 'EtOAc' } },
-  { key: 'heptane-etoac-etoh', label: 'EtOAc–EtOH 3 : 1 / heptane', to: { weak: 'heptane', strong: [{ solvent: 'EtOAc', parts: 3 }, { solvent: 'EtOH', parts: 1 }] } },
+  {
+    key: 'heptane-etoac-etoh',
+    label: 'EtOAc–EtOH 3 : 1 / heptane',
+    to: {
+      weak: 'heptane',
+      strong: [
+        { solvent: 'EtOAc', parts: 3 },
+        { solvent: 'EtOH', parts: 1 },
+      ],
+    },
+  },
   { key: 'etoac-etoh', label: 'EtOH / EtOAc', to: { weak: 'EtOAc', strong: 'EtOH' } },
   { key: 'heptane-mtbe', label: 'MTBE / heptane', to: { weak: 'heptane', strong: 'MTBE' } },
   { key: 'heptane-acetone', label: 'acetone / heptane', to: { weak: 'heptane', strong: 'acetone' } },
