@@ -34,7 +34,7 @@ const ApiReferencePage = lazy(() => import('./routes/api-reference'));
 /** Pages are lazily loaded, so the first load carries only the shell. */
 const page = (node: ReactNode) => <Suspense fallback={<PageLoading />}>{node}</Suspense>;
 
-export const router = createBrowserRouter([
+const router = createBrowserRouter([
   { path: '/sign-in', element: <SignInPage />, errorElement: <RouteError /> },
   { path: '/invitations/:token', element: page(<AcceptInvitationPage />), errorElement: <RouteError /> },
   { path: '/password-reset', element: page(<PasswordResetRequestPage />), errorElement: <RouteError /> },

@@ -22,7 +22,7 @@ declare global {
 }
 
 /** `last_used_at` is written at most this often per token (ms), so a busy script does not write on every call. */
-export const LAST_USED_GRANULARITY_MS = 60_000;
+const LAST_USED_GRANULARITY_MS = 60_000;
 
 /** SHA-256 hex of a personal API token: what the database keeps. */
 export function hashApiToken(token: string): string {
@@ -36,7 +36,7 @@ export function newApiToken(): { token: string; hash: string; prefix: string } {
 }
 
 /** The credential of `Authorization: Bearer <credential>` (scheme case-insensitive, RFC 6750), or undefined. */
-export function bearerCredential(req: Request): string | undefined {
+function bearerCredential(req: Request): string | undefined {
   const header = req.get('authorization');
   const match = header ? /^Bearer[ \t]+(\S*)[ \t]*$/i.exec(header) : null;
   return match ? match[1] : header && /^Bearer\b/i.test(header) ? '' : undefined;
@@ -47,7 +47,7 @@ export function bearerCredential(req: Request): string | undefined {
  * SIGNIN_WINDOW_MINUTES; PostgreSQL in production). Only a refusal is counted, so a script's good calls write nothing;
  * once an address has used up its allowance, every Bearer request from it is answered 429 until the window ends.
  */
-export class TokenFailureThrottle {
+class TokenFailureThrottle {
   private store: Store | undefined;
 
   private counters(): Store {

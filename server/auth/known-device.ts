@@ -9,7 +9,7 @@ import { env } from '../config/env';
  * (someone else's guesses do not keep its owner out at all); the wait per address still applies, and the password
  * is still checked.
  */
-export const KNOWN_DEVICE_COOKIE = 'rfolio.known';
+const KNOWN_DEVICE_COOKIE = 'rfolio.known';
 const YEAR_MS = 365 * 24 * 3600 * 1000;
 
 const tokenFor = (email: string) =>

@@ -25,7 +25,7 @@ const loading = new Map<number, { stamp: string; promise: Promise<SessionUserRow
 let generation = 0;
 
 /** Drops one user's cached row (or every row): the next request reads the database again. */
-export function forgetSessionUser(id?: number) {
+function forgetSessionUser(id?: number) {
   generation++;
   if (id === undefined) {
     entries.clear();

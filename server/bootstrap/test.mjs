@@ -52,8 +52,8 @@ try {
     if (wantsE2e) ensureClientBuild(root);
     status = spawnSync(vitest, ['run', ...args], { cwd: root, env, stdio: 'inherit' }).status ?? 1;
   } else {
-    // Static checks first: types, lint (including the feature-boundary rule) and format.
-    const checks = ['typecheck', 'lint', 'format:check'].map(
+    // Static checks first: types, lint (including the feature-boundary rule), format and unused exports.
+    const checks = ['typecheck', 'lint', 'format:check', 'deadcode'].map(
       (script) => spawnSync('npm', ['run', '--silent', script], { cwd: root, env, stdio: 'inherit' }).status,
     );
     // The fault tests stop PostgreSQL, so the browser journeys run after the other projects, not beside them.

@@ -17,7 +17,7 @@ import {
 } from './atom-environment';
 
 /** What a class check sees: the molecule, one fragment match (fragment atom → molecule atom). */
-export interface ClassMatch {
+interface ClassMatch {
   mol: Molecule;
   match: number[];
   /** Which of the class's include fragments matched. */

@@ -15,7 +15,7 @@ import { popcount32 } from './similarity-index';
 const MAX_DISTANCE = 12;
 
 /** Words of the folded atom-pair fingerprint (1,024 bits). */
-export const ATOM_PAIR_WORDS = 32;
+const ATOM_PAIR_WORDS = 32;
 
 /** Folded atom-pair fingerprint of a search graph (server/chem/fingerprint-worker.mjs: searchGraphOf); ~n² steps. */
 export function atomPairBitsOfGraph(graph: Uint8Array): Int32Array {
@@ -75,7 +75,7 @@ export function atomPairTanimoto(a: Int32Array, b: Int32Array): number {
 }
 
 /** The highest similarity a compound other than the query itself can score. */
-export const notIdenticalCeiling = 0.99;
+const notIdenticalCeiling = 0.99;
 
 /**
  * The similarity shown and ranked by: 1 only for the identical compound (same canonical identity, the ID code);

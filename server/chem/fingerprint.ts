@@ -2,7 +2,7 @@ import { Molecule } from 'openchemlib';
 import { FingerprintPool, type SearchKeyBatch } from './fingerprint-pool';
 import { FINGERPRINT_WORDS, fingerprintOf, searchGraphOf } from './fingerprint-worker.mjs';
 
-export { FINGERPRINT_WORDS, FingerprintPool };
+export { FINGERPRINT_WORDS };
 
 let sharedPool: FingerprintPool | null = null;
 

@@ -2,7 +2,7 @@ import { CanonizerUtil, Molecule } from 'openchemlib';
 import { neutralise } from './neutralise';
 
 /** What a disconnected part of the input is, next to the parent compound. */
-export type FragmentRole = 'parent' | 'counter-ion' | 'solvent' | 'other';
+type FragmentRole = 'parent' | 'counter-ion' | 'solvent' | 'other';
 
 /** One distinct fragment of the input, with how often it occurs. */
 export interface FragmentSummary {

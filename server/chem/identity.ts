@@ -2,7 +2,7 @@ import { Molecule } from 'openchemlib';
 import { splitParent, type FragmentSummary } from './fragments';
 import { neutralise } from './neutralise';
 
-export type { FragmentRole, FragmentSummary } from './fragments';
+export type { FragmentSummary } from './fragments';
 
 /**
  * The identity of a compound, decided once for the whole knowledge base:

@@ -6,7 +6,7 @@ import type { Express } from 'express';
  * Longest request line plus headers accepted, bytes. Node's default (16 KB) is shorter than a search URL
  * carrying the 20,000-character structure GET /api/search allows once percent-encoded.
  */
-export const MAX_HEADER_BYTES = 96 * 1024;
+const MAX_HEADER_BYTES = 96 * 1024;
 
 function answer(socket: Duplex, status: number, reason: string, code: string, message: string) {
   const body = JSON.stringify({ error: { code, message } });

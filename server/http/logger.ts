@@ -5,7 +5,7 @@ import { env } from '../config/env';
  * Headers that carry credentials never reach the log (pino's built-in redaction): the session cookie, the CSRF
  * token, an Authorization header and a Set-Cookie answer.
  */
-export const redactedPaths = [
+const redactedPaths = [
   'req.headers.cookie',
   'req.headers.authorization',
   'req.headers["x-csrf-token"]',
@@ -15,6 +15,7 @@ export const redactedPaths = [
   'headers["x-csrf-token"]',
 ];
 
+/** @public The options the logger is built with (tests build a capturing logger from them). */
 export const loggerOptions: LoggerOptions = {
   level: env().LOG_LEVEL,
   base: { app: 'rfolio' },

@@ -3,7 +3,7 @@ import type { Role } from '../../shared/schemas/auth';
 import type { OutgoingMail } from './send';
 
 /** An absolute link into the client, built on APP_URL (in tests, the app's own base URL). */
-export function appLink(path: string): string {
+function appLink(path: string): string {
   return `${env().appUrl.replace(/\/+$/, '')}${path}`;
 }
 

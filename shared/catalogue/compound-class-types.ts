@@ -44,7 +44,7 @@ export const compoundClassKeys = [
 
 export type CompoundClassKey = (typeof compoundClassKeys)[number];
 
-export type CompoundClassGroup =
+type CompoundClassGroup =
   'acid-base' | 'carbonyl' | 'nitrogen' | 'oxygen' | 'aromatic' | 'unsaturation' | 'halogen' | 'other-elements';
 
 /**

@@ -4,12 +4,7 @@ import { otherElementClasses } from './compound-classes-other-elements';
 
 import type { CompoundClass, CompoundClassKey } from './compound-class-types';
 
-export {
-  compoundClassKeys,
-  type CompoundClass,
-  type CompoundClassGroup,
-  type CompoundClassKey,
-} from './compound-class-types';
+export { compoundClassKeys, type CompoundClass, type CompoundClassKey } from './compound-class-types';
 
 /** All compound classes, in catalogue order. Sources: IUPAC functional-class names; definitions common practice. */
 export const compoundClasses: readonly CompoundClass[] = [

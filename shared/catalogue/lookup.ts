@@ -20,7 +20,7 @@ export function normaliseName(name: string): string {
 }
 
 /** Longest query the suggester searches (the longest catalogue name, normalised, is 44 characters). */
-export const SUGGEST_MAX_LENGTH = 64;
+const SUGGEST_MAX_LENGTH = 64;
 
 interface Named {
   key: string;
@@ -77,9 +77,9 @@ export class NameIndex<T extends Named> {
 export const solventIndex = new NameIndex<Solvent>(solvents);
 /** Solvents and additives together, as eluent notations mix them ("DCM/MeOH/NH4OH 90:9:1"). */
 export const eluentNameIndex = new NameIndex<Solvent | Additive>([...solvents, ...additives]);
-export const additiveIndex = new NameIndex<Additive>(additives);
+const additiveIndex = new NameIndex<Additive>(additives);
 export const stainIndex = new NameIndex<Stain>(stains);
-export const phaseIndex = new NameIndex<StationaryPhase>(stationaryPhases);
+const phaseIndex = new NameIndex<StationaryPhase>(stationaryPhases);
 
 /** A solvent by name, abbreviation, formula or key (e.g. "AcOEt", "CH2Cl2", "pet ether"). */
 export const resolveSolvent = (input: string) => solventIndex.resolve(input);

@@ -3,7 +3,7 @@ import { hydrocarbonSolvents } from './solvents-hydrocarbons';
 import { chlorinatedAndEtherSolvents } from './solvents-chlorinated-ethers';
 import { polarSolvents } from './solvents-polar';
 
-export type { Adsorbent, GreenerAlternative, Provenance, Solvent, SolventHazard, SourcedValue } from './types';
+export type { Solvent } from './types';
 
 /**
  * Chromatography solvents with physical data, Snyder's ε° on silica and alumina (provenance on each

@@ -265,8 +265,6 @@ export const stains: readonly Stain[] = [
   },
 ];
 
-export const stainKeys = stains.map((stain) => stain.key) as [string, ...string[]];
-
 const byKey = new Map(stains.map((stain) => [stain.key, stain]));
 
 /** The stain with this catalogue key, or undefined. */

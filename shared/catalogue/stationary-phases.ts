@@ -132,8 +132,6 @@ export const stationaryPhases: readonly StationaryPhase[] = [
   },
 ];
 
-export const stationaryPhaseKeys = stationaryPhases.map((phase) => phase.key) as [string, ...string[]];
-
 const byKey = new Map(stationaryPhases.map((phase) => [phase.key, phase]));
 
 /** The stationary phase with this catalogue key, or undefined. */

@@ -6,7 +6,7 @@ export type Adsorbent = 'silica' | 'alumina';
  * `from-memory` is a recalled handbook value not yet checked against a published table, `estimate` is computed
  * from other values by a stated rule.
  */
-export type Provenance = 'confirmed' | 'from-memory' | 'estimate';
+type Provenance = 'confirmed' | 'from-memory' | 'estimate';
 
 /** A number together with where it came from. */
 export interface SourcedValue {

@@ -1,7 +1,7 @@
 import { columnVolumes, deltaColumnVolumes, rfProblem } from './rf';
 import { sizeFromTable, stillSource, type LoadColumn, type TableSize } from './still-table';
 
-export { stillTable, stillSource, sizeFromTable } from './still-table';
+export { stillTable, stillSource } from './still-table';
 
 export interface ColumnPlanInput {
   /** Crude sample mass, mg. */
@@ -12,7 +12,7 @@ export interface ColumnPlanInput {
   rfImpurity?: number | null;
 }
 
-export type ColumnPlanFlag =
+type ColumnPlanFlag =
   'below-table' | 'above-table' | 'delta-rf-below-0.1' | 'no-impurity-rf' | 'rf-target-outside-0.2-0.35';
 
 export interface ColumnPlan {
@@ -39,8 +39,8 @@ export interface ColumnPlan {
 }
 
 /** Bed height 15 cm (Still 1978, from memory) and packed silica about 0.5 g/mL (from memory; typically 0.4–0.6). */
-export const bedHeightCm = 15;
-export const packedSilicaGPerMl = 0.5;
+const bedHeightCm = 15;
+const packedSilicaGPerMl = 0.5;
 
 const common = 'common practice';
 

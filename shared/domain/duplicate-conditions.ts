@@ -25,7 +25,7 @@ export interface ComparableConditions {
  */
 export const duplicateTolerances = { rf: 0.05, ratioRelative: 0.05 } as const;
 
-export interface FractionDifference {
+interface FractionDifference {
   solvent: string;
   /** Volume fractions (0–1) of this solvent in each mixture. */
   a: number;

@@ -8,7 +8,7 @@ import { NotationError } from './eluent-notation-read';
 import { tokenise } from './eluent-notation-scan';
 import { readSegment } from './eluent-notation-segment';
 
-export interface EluentParseError {
+interface EluentParseError {
   message: string;
   /** The word that names no known solvent or additive. */
   unknownWord?: string;

@@ -63,7 +63,7 @@ export function snyderBinaryStrength(
   return epsilonA + Math.log10(moleFractionB * 10 ** (scale * (epsilonB - epsilonA)) + 1 - moleFractionB) / scale;
 }
 
-export interface StrengthComponent {
+interface StrengthComponent {
   solvent: string;
   moleFraction: number;
   epsilon: SourcedValue;

@@ -54,7 +54,7 @@ export function strongPercentOf(components: readonly Part[], phaseKey?: string):
 const labelOf = (key: string) => solventByKey(key)?.label ?? key;
 
 /** "EtOAc : hexanes 1 : 4" — solvents in the order given, parts by volume. */
-export function formatMixture(components: readonly Part[]): string {
+function formatMixture(components: readonly Part[]): string {
   if (components.length === 1) return `100% ${labelOf(components[0].solvent)}`;
   return `${components.map((part) => labelOf(part.solvent)).join(' : ')} ${components.map((part) => formatParts(part.parts)).join(' : ')}`;
 }

@@ -189,7 +189,7 @@ function words(header: string, keepBrackets = false): string[] {
 }
 
 /** A header folded for comparison: accents, case, brackets, punctuation and spacing ignored ("Rf (product)" → "rf"). */
-export function headerKey(header: string): string {
+function headerKey(header: string): string {
   return words(header).join('');
 }
 

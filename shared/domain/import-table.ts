@@ -2,7 +2,7 @@ import { IGNORE_COLUMN } from '../schemas/import';
 import { detectTarget } from './import-headers';
 
 /** Rows looked at for the header row (a notes block or a title above the table is rarely longer). */
-export const HEADER_SEARCH_ROWS = 40;
+const HEADER_SEARCH_ROWS = 40;
 
 const essential = new Set(['structure', 'rf', 'eluent']);
 

@@ -1,11 +1,11 @@
 import { deltaColumnVolumes } from './rf';
 
 /** What a lane of a monitoring plate holds (named by the chemist on the overlay). */
-export type MonitorLaneRole = 'starting_material' | 'co_spot' | 'mixture';
+type MonitorLaneRole = 'starting_material' | 'co_spot' | 'mixture';
 export type MonitorLane = { role: MonitorLaneRole; rfs: number[] };
 
 /** Two spots closer than this in Rf are taken for one substance (common practice: about the reading error of a plate). */
-export const SAME_SPOT_RF = 0.03;
+const SAME_SPOT_RF = 0.03;
 
 export type MonitoringReadout = {
   startingMaterialRf: number | null;

@@ -1,6 +1,6 @@
 /** One lane of a fractions plate: the fraction's number and the Rf of every spot in it. */
 export type FractionLane = { fraction: number; rfs: number[] };
-export type FractionState = 'target' | 'mixed' | 'other' | 'empty';
+type FractionState = 'target' | 'mixed' | 'other' | 'empty';
 export type PoolingReadout = {
   fractions: { fraction: number; state: FractionState }[];
   /** Runs of consecutive fractions holding the target alone: combine these. */
@@ -12,7 +12,7 @@ export type PoolingReadout = {
 };
 
 /** Spots closer than this in Rf are one substance (common practice: about the reading error of a plate). */
-export const POOL_SAME_RF = 0.04;
+const POOL_SAME_RF = 0.04;
 
 function runs(numbers: number[]): [number, number][] {
   const sorted = [...numbers].sort((a, b) => a - b);

@@ -9,7 +9,7 @@ import { stationaryPhaseByKey, stationaryPhases } from '../catalogue/stationary-
  */
 
 /** One visualisation read from a cell: a catalogue key and the qualifiers written with it. */
-export interface StainReading {
+interface StainReading {
   method: string;
   note: string | null;
 }
@@ -161,7 +161,7 @@ export function readStains(cell: string): StainsRead {
   return { items, unrecognised };
 }
 
-export type PlateFamily =
+type PlateFamily =
   'silica' | 'alumina-neutral' | 'alumina-basic' | 'alumina-acidic' | 'c18' | 'amine' | 'diol' | 'cyano' | 'paper';
 
 export interface PlateRead {

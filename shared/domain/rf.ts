@@ -6,7 +6,7 @@
  * attribution from memory).
  */
 
-export const rfOutOfRangeMessage = 'Rf must lie in (0, 1].';
+const rfOutOfRangeMessage = 'Rf must lie in (0, 1].';
 
 /** Null when Rf (dimensionless) lies in (0, 1], otherwise the reason it does not. */
 export function rfProblem(rf: number): string | null {

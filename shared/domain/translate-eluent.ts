@@ -16,7 +16,7 @@ export interface TranslationTarget {
   strong: readonly MixturePart[];
 }
 
-export interface SolventHazardSummary {
+interface SolventHazardSummary {
   solvent: string;
   name: string;
   hazards: readonly SolventHazard[];

@@ -2,8 +2,7 @@ import { z } from 'zod';
 import { emailSchema, roleSchema } from './auth';
 
 /** People and invitations as the admin pages see them. */
-export const userStatusSchema = z.enum(['active', 'disabled']);
-export type UserStatus = z.infer<typeof userStatusSchema>;
+const userStatusSchema = z.enum(['active', 'disabled']);
 
 export const adminUserSchema = z.object({
   id: z.number().int(),
@@ -23,7 +22,7 @@ export const adminUserUpdateSchema = z
   .refine((v) => v.role !== undefined || v.status !== undefined, { message: 'Send a role or a status.' });
 export type AdminUserUpdate = z.infer<typeof adminUserUpdateSchema>;
 
-export const invitationStatusSchema = z.enum(['pending', 'expired', 'accepted', 'revoked']);
+const invitationStatusSchema = z.enum(['pending', 'expired', 'accepted', 'revoked']);
 export type InvitationStatus = z.infer<typeof invitationStatusSchema>;
 
 export const invitationCreateSchema = z.object({ email: emailSchema, role: roleSchema });
@@ -57,7 +56,7 @@ export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 export const resetPreviewSchema = z.object({ expiresAt: z.string() });
 
 /** A message kept by the local mail catcher (development, demo and tests only). */
-export const caughtMailSchema = z.object({
+const caughtMailSchema = z.object({
   id: z.number().int(),
   receivedAt: z.string(),
   from: z.string(),

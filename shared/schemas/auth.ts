@@ -35,7 +35,7 @@ export const newPasswordSchema = z.string().superRefine((value, ctx) => {
   if (problem) ctx.addIssue({ code: 'custom', message: problem });
 });
 
-export const personNameSchema = z.string().trim().min(1, 'Enter your name.').max(120, 'At most 120 characters.');
+const personNameSchema = z.string().trim().min(1, 'Enter your name.').max(120, 'At most 120 characters.');
 export const emailSchema = z.string().trim().toLowerCase().max(254, { abort: true }).email('Enter an e-mail address.');
 
 export const profileUpdateSchema = z.object({ name: personNameSchema });

@@ -32,13 +32,12 @@ export const bookmarkTargetSchema = z
     compoundId: z.coerce.number().int().positive().optional(),
   })
   .superRefine(exactlyOneTarget);
-export type BookmarkTarget = z.input<typeof bookmarkTargetSchema>;
 
 /** Body of `PATCH /api/bookmarks/:id`. */
 export const bookmarkUpdateSchema = z.object({ note });
 
 /** A bookmarked compound as the bookmarks page lists it. */
-export const bookmarkedCompoundSchema = recordCompoundSchema.extend({
+const bookmarkedCompoundSchema = recordCompoundSchema.extend({
   /** Active records of the compound. */
   recordCount: z.number().int(),
 });
@@ -56,4 +55,3 @@ export const bookmarkDtoSchema = z.object({
 export type BookmarkDto = z.infer<typeof bookmarkDtoSchema>;
 
 export const bookmarkListSchema = z.object({ items: z.array(bookmarkDtoSchema) });
-export type BookmarkList = z.infer<typeof bookmarkListSchema>;

@@ -32,7 +32,7 @@ const usageSchema = z.object({
 export type Usage = z.infer<typeof usageSchema>;
 
 /** One solvent combination used for the class (gradients count by their final mixture). */
-export const solventPairSchema = z.object({
+const solventPairSchema = z.object({
   solvents: z.array(z.string()),
   labels: z.array(z.string()),
   records: z.number().int(),
@@ -42,7 +42,7 @@ export const solventPairSchema = z.object({
 });
 
 /** Snyder's ε° of one record's eluent on its adsorbent (shared/domain/eluent-strength.ts). */
-export const strengthPointSchema = z.object({
+const strengthPointSchema = z.object({
   recordId: z.number().int(),
   epsilon: z.number(),
   outcome: z.enum(outcomes),
@@ -50,7 +50,7 @@ export const strengthPointSchema = z.object({
 });
 
 /** A record's % strong solvent and target Rf in the class's most used pair (for the scatter). */
-export const rfPointSchema = z.object({
+const rfPointSchema = z.object({
   recordId: z.number().int(),
   strongPercent: z.number(),
   rf: z.number(),

@@ -4,14 +4,13 @@ import { z } from 'zod';
  * One problem behind an API failure: where it is (`body.spots.0.rf`, `query.structure`; empty when it concerns the
  * request as a whole), what is wrong, and any facts that locate or explain it (an atom number, a record id, a wait).
  */
-export const errorDetailSchema = z.object({ path: z.string(), message: z.string() }).catchall(z.unknown());
+const errorDetailSchema = z.object({ path: z.string(), message: z.string() }).catchall(z.unknown());
 export type ErrorDetail = z.infer<typeof errorDetailSchema>;
 
 /** The one error shape every API failure answers with; `details`, when present, is always a list of problems. */
 export const apiErrorSchema = z.object({
   error: z.object({ code: z.string(), message: z.string(), details: z.array(errorDetailSchema).optional() }),
 });
-export type ApiError = z.infer<typeof apiErrorSchema>;
 
 /** Puts any error details into the one shape: a list stays a list; an object of facts becomes one problem. */
 export function errorDetailsOf(message: string, details: unknown): ErrorDetail[] | undefined {

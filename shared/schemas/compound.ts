@@ -6,10 +6,9 @@ import { recordListItemSchema } from './record-dto';
 export const structureParseInputSchema = z.object({
   structure: z.string().min(1, 'Give a structure (SMILES or molfile).').max(200_000),
 });
-export type StructureParseInput = z.infer<typeof structureParseInputSchema>;
 
 /** Descriptors computed with OpenChemLib on the neutral parent (see server/chem/descriptors.ts for sources). */
-export const descriptorsSchema = z.object({
+const descriptorsSchema = z.object({
   formula: z.string(),
   /** g/mol */
   mw: z.number(),
@@ -39,7 +38,7 @@ export const structureParseResultSchema = descriptorsSchema.extend({
 });
 export type StructureParseResult = z.infer<typeof structureParseResultSchema>;
 
-export const compoundSortKeys = ['name', 'createdAt', 'mw', 'records'] as const;
+const compoundSortKeys = ['name', 'createdAt', 'mw', 'records'] as const;
 
 export const compoundListQuerySchema = paginationQuerySchema.extend({
   q: z.string().trim().max(200).optional(),
@@ -47,9 +46,8 @@ export const compoundListQuerySchema = paginationQuerySchema.extend({
   sort: z.enum(compoundSortKeys).default('name'),
   order: z.enum(['asc', 'desc']).default('asc'),
 });
-export type CompoundListQuery = z.input<typeof compoundListQuerySchema>;
 
-export const compoundListItemSchema = z.object({
+const compoundListItemSchema = z.object({
   id: z.number().int(),
   name: z.string().nullable(),
   synonyms: z.array(z.string()),

@@ -3,7 +3,7 @@ import { outcomes, recordStatuses, spotRoles, techniques } from './record-parts'
 import { mergeableFields } from './curation-fields';
 
 /** A record as the curation screens show it: enough to judge whether two records say the same thing. */
-export const curationRecordSchema = z.object({
+const curationRecordSchema = z.object({
   id: z.number().int(),
   status: z.enum(recordStatuses),
   mergedIntoId: z.number().int().nullable(),
@@ -31,7 +31,7 @@ export const curationRecordSchema = z.object({
 export type CurationRecord = z.infer<typeof curationRecordSchema>;
 
 /** How one pair of records in a same-conditions group compares (shared/domain/duplicate-conditions). */
-export const duplicatePairSchema = z.object({
+const duplicatePairSchema = z.object({
   a: z.number().int(),
   b: z.number().int(),
   score: z.number(),
@@ -45,10 +45,10 @@ export const duplicatePairSchema = z.object({
 });
 export type DuplicatePair = z.infer<typeof duplicatePairSchema>;
 
-export const duplicateKinds = ['same-conditions', 'same-structure'] as const;
+const duplicateKinds = ['same-conditions', 'same-structure'] as const;
 
 /** A structure entered as more than one compound: the entries, and whether each has its stereo defined. */
-export const structureEntrySchema = z.object({
+const structureEntrySchema = z.object({
   compoundId: z.number().int(),
   name: z.string().nullable(),
   synonyms: z.array(z.string()),
@@ -60,7 +60,7 @@ export const structureEntrySchema = z.object({
 });
 
 /** A suspected duplicate: the records, why (the criteria met and the measured differences) and how sure (0–1). */
-export const duplicateGroupSchema = z.object({
+const duplicateGroupSchema = z.object({
   kind: z.enum(duplicateKinds),
   signature: z.string(),
   recordIds: z.array(z.number().int()),
@@ -81,7 +81,7 @@ export const duplicatesResponseSchema = z.object({
 export type DuplicatesResponse = z.infer<typeof duplicatesResponseSchema>;
 
 /** One choosable field on the merge screen: each record's value as shown, and whether they differ. */
-export const mergeFieldSchema = z.object({
+const mergeFieldSchema = z.object({
   field: z.enum(mergeableFields),
   label: z.string(),
   values: z.array(z.object({ recordId: z.number().int(), display: z.string() })),
@@ -126,7 +126,7 @@ export const unmergeResultSchema = z.object({ mergeId: z.number().int(), restore
 export type UnmergeResult = z.infer<typeof unmergeResultSchema>;
 
 /** One merge in the history list; `blockedReason` says why an Unmerge would be refused now. */
-export const mergeHistoryItemSchema = z.object({
+const mergeHistoryItemSchema = z.object({
   id: z.number().int(),
   survivorId: z.number().int(),
   mergedIds: z.array(z.number().int()),

@@ -43,7 +43,6 @@ export type MergeInput = z.input<typeof mergeInputSchema>;
 export const retireInputSchema = z.object({
   reason: z.string().trim().min(3, 'Say why the record is retired (at least 3 characters).').max(1000),
 });
-export type RetireInput = z.input<typeof retireInputSchema>;
 
 export const mergePreviewQuerySchema = z.object({
   ids: z.preprocess(

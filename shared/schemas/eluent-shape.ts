@@ -3,18 +3,17 @@ import { additiveKeys } from '../catalogue/additives';
 import { solventKeys } from '../catalogue/solvents';
 
 /** One solvent of an eluent: catalogue key and parts by volume (e.g. EtOAc 1 : hexanes 4). */
-export const eluentComponentSchema = z.object({
+const eluentComponentSchema = z.object({
   solvent: z.enum(solventKeys),
   parts: z.number().positive().finite(),
 });
 export type EluentComponent = z.infer<typeof eluentComponentSchema>;
 
 /** An additive in % v/v of the whole eluent (e.g. 1% triethylamine). */
-export const additiveSchema = z.object({
+const additiveSchema = z.object({
   additive: z.enum(additiveKeys),
   percent: z.number().gt(0).lte(20),
 });
-export type EluentAdditive = z.infer<typeof additiveSchema>;
 
 const componentsSchema = z
   .array(eluentComponentSchema)
@@ -25,11 +24,10 @@ const componentsSchema = z
   });
 
 /** One composition of a gradient, run for a number of column volumes (null when not recorded). */
-export const gradientStepSchema = z.object({
+const gradientStepSchema = z.object({
   components: componentsSchema,
   columnVolumes: z.number().positive().finite().nullable(),
 });
-export type GradientStep = z.infer<typeof gradientStepSchema>;
 
 /**
  * An eluent. Isocratic: `components` is the mixture and `steps` is empty. Gradient: `steps` lists two or

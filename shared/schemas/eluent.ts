@@ -33,7 +33,6 @@ export const eluentInputSchema = z.union([
       .default([]),
   }),
 ]);
-export type EluentInput = z.input<typeof eluentInputSchema>;
 
 /** Parses eluent input and resolves every name to a catalogue key; unknown names become issues with a suggestion. */
 export const eluentFromInputSchema = eluentInputSchema.transform((input, context): Eluent => {
@@ -50,7 +49,7 @@ export const eluentFromInputSchema = eluentInputSchema.transform((input, context
   return z.NEVER;
 });
 
-export interface EluentInputIssue {
+interface EluentInputIssue {
   path: (string | number)[];
   message: string;
   unknownWord?: string;

@@ -71,7 +71,7 @@ const solventKeySet = new Set<string>(solventKeys);
 const fieldSet = new Set<string>(importFields);
 
 /** True for a mapping target: a field, `solvent:<key>` or "ignore". */
-export function isImportTarget(target: string): boolean {
+function isImportTarget(target: string): boolean {
   if (target === IGNORE_COLUMN || fieldSet.has(target)) return true;
   return target.startsWith('solvent:') && solventKeySet.has(target.slice('solvent:'.length));
 }
@@ -94,10 +94,9 @@ export const importMappingSchema = z
       seen.set(target, header);
     }
   });
-export type ImportMapping = z.infer<typeof importMappingSchema>;
 
-export const importFormats = ['csv', 'sdf', 'open-tlc', 'xlsx'] as const;
-export const dateOrders = ['dmy', 'mdy'] as const;
+const importFormats = ['csv', 'sdf', 'open-tlc', 'xlsx'] as const;
+const dateOrders = ['dmy', 'mdy'] as const;
 
 /** Form fields of `POST /api/imports` beside the file and mapping: the sheet, header row and date order chosen. */
 export const importChoiceSchema = z.object({
@@ -106,8 +105,8 @@ export const importChoiceSchema = z.object({
   dateOrder: z.enum(dateOrders).optional(),
 });
 export type ImportChoice = z.infer<typeof importChoiceSchema>;
-export const importStatuses = ['running', 'completed', 'failed', 'undone'] as const;
-export const rowResults = ['accepted', 'rejected', 'duplicate'] as const;
+const importStatuses = ['running', 'completed', 'failed', 'undone'] as const;
+const rowResults = ['accepted', 'rejected', 'duplicate'] as const;
 
 /** Query of `POST /api/imports`: `dryRun=1` previews the first `previewRows` rows and writes nothing. */
 export const importUploadQuerySchema = z.object({
@@ -121,7 +120,7 @@ export const importUploadQuerySchema = z.object({
 });
 
 /** One row's outcome: accepted, rejected with a reason, or a duplicate of a stored record; `notes` say what was assumed or adjusted. */
-export const importRowResultSchema = z.object({
+const importRowResultSchema = z.object({
   row: z.number().int(),
   line: z.number().int(),
   result: z.enum(rowResults),

@@ -6,7 +6,7 @@ import { commonPasswordWords, longCommonPasswords } from '../catalogue/common-pa
  * sequential characters and context-specific words — no composition rules (no "one capital, one digit").
  */
 export const PASSWORD_MIN_LENGTH = 12;
-export const PASSWORD_MAX_LENGTH = 200;
+const PASSWORD_MAX_LENGTH = 200;
 
 const listed = new Set(longCommonPasswords);
 const words = new Set(commonPasswordWords);

@@ -14,8 +14,7 @@ export const spotDtoSchema = z.object({
 });
 export type SpotDto = z.infer<typeof spotDtoSchema>;
 
-export const visualisationDtoSchema = z.object({ method: z.string(), label: z.string(), note: z.string().nullable() });
-export type VisualisationDto = z.infer<typeof visualisationDtoSchema>;
+const visualisationDtoSchema = z.object({ method: z.string(), label: z.string(), note: z.string().nullable() });
 
 export const photoDtoSchema = z.object({
   id: z.number().int(),
@@ -31,7 +30,7 @@ export const photoDtoSchema = z.object({
 });
 export type PhotoDto = z.infer<typeof photoDtoSchema>;
 
-export const columnDetailsDtoSchema = z.object({
+const columnDetailsDtoSchema = z.object({
   diameterMm: z.number().nullable(),
   cartridgeSize: z.string().nullable(),
   silicaG: z.number().nullable(),
@@ -44,7 +43,7 @@ export const columnDetailsDtoSchema = z.object({
 });
 
 /** Eluent summary computed by the server: notation, the strong solvent and its % v/v (see shared/domain/eluent-summary). */
-export const eluentSummarySchema = z.object({
+const eluentSummarySchema = z.object({
   notation: z.string(),
   strongSolvent: z.string().nullable(),
   strongPercent: z.number().nullable(),
@@ -87,7 +86,6 @@ export const recordListItemSchema = z.object({
 export type RecordListItem = z.infer<typeof recordListItemSchema>;
 
 export const recordPageSchema = pageOf(recordListItemSchema);
-export type RecordPage = z.infer<typeof recordPageSchema>;
 
 /** A record with every field, as `GET /api/records/:id` and `POST /api/records` answer. */
 export const recordDtoSchema = recordListItemSchema.extend({

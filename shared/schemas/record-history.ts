@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 /** What a revision did to a record. Curation and import write the last four. */
-export const revisionActions = [
+const revisionActions = [
   'create',
   'update',
   'photo-add',
@@ -15,17 +15,16 @@ export const revisionActions = [
 export type RevisionAction = (typeof revisionActions)[number];
 
 /** One field's change: its name in the record DTO (dotted for column details) and the values before and after. */
-export const fieldChangeSchema = z.object({ field: z.string(), from: z.unknown(), to: z.unknown() });
+const fieldChangeSchema = z.object({ field: z.string(), from: z.unknown(), to: z.unknown() });
 export type FieldChange = z.infer<typeof fieldChangeSchema>;
 
-export const revisionDtoSchema = z.object({
+const revisionDtoSchema = z.object({
   number: z.number().int(),
   action: z.enum(revisionActions),
   at: z.string(),
   author: z.object({ id: z.number().int(), name: z.string() }).nullable(),
   changes: z.array(fieldChangeSchema),
 });
-export type RevisionDto = z.infer<typeof revisionDtoSchema>;
 
 /** `GET /api/records/:id/history`: newest first. */
 export const recordHistorySchema = z.object({ recordId: z.number().int(), revisions: z.array(revisionDtoSchema) });

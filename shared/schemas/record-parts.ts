@@ -144,7 +144,6 @@ export const visualisationInputSchema = z
     }
     return { method: found.value.key, note };
   });
-export type VisualisationInput = z.input<typeof visualisationInputSchema>;
 export type Visualisation = z.output<typeof visualisationInputSchema>;
 
 /** A stationary phase by catalogue key, name or abbreviation ("silica", "SiO2", "C18"); resolves to the key. */
@@ -180,5 +179,4 @@ export const columnDetailsSchema = z.object({
     .transform((value) => value ?? null),
   purityNote: optionalText(300),
 });
-export type ColumnDetailsInput = z.input<typeof columnDetailsSchema>;
 export type ColumnDetails = z.output<typeof columnDetailsSchema>;

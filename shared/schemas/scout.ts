@@ -35,12 +35,12 @@ export type ScoutInput = z.input<typeof scoutInputSchema>;
 export type ScoutInputParsed = z.output<typeof scoutInputSchema>;
 
 /** A line of evidence: the number, what it is, and where it came from (neighbours, equation, table). */
-export const evidenceSchema = z.object({ quantity: z.string(), value: z.string(), source: z.string() });
+const evidenceSchema = z.object({ quantity: z.string(), value: z.string(), source: z.string() });
 export type Evidence = z.infer<typeof evidenceSchema>;
 
 const pairSchema = z.object({ weak: z.string(), strong: z.string(), label: z.string() });
 
-export const neighbourConditionSchema = z.object({
+const neighbourConditionSchema = z.object({
   recordId: z.number().int().nullable(),
   phase: z.string(),
   notation: z.string(),
@@ -53,9 +53,8 @@ export const neighbourConditionSchema = z.object({
   /** Invented demo record: shown with the demo mark. */
   demo: z.boolean(),
 });
-export type NeighbourCondition = z.infer<typeof neighbourConditionSchema>;
 
-export const neighbourSchema = z.object({
+const neighbourSchema = z.object({
   compoundId: z.number().int(),
   name: z.string().nullable(),
   smiles: z.string(),
@@ -67,14 +66,14 @@ export const neighbourSchema = z.object({
 });
 export type Neighbour = z.infer<typeof neighbourSchema>;
 
-export const curvePointSchema = z.object({
+const curvePointSchema = z.object({
   strongPercent: z.number(),
   rf: z.number(),
   lower: z.number(),
   upper: z.number(),
 });
 
-export const suggestionSchema = z.object({
+const suggestionSchema = z.object({
   phase: z.object({ key: z.string(), name: z.string(), why: z.string() }),
   pair: pairSchema,
   /** Strong : weak parts by volume, e.g. [1, 4]. */
@@ -95,14 +94,13 @@ export const suggestionSchema = z.object({
   curve: z.array(curvePointSchema),
   components: z.array(z.object({ solvent: z.string(), parts: z.number() })),
 });
-export type Suggestion = z.infer<typeof suggestionSchema>;
 
 /**
  * The first plate to run, with its additive: the compound's own best clean record when it has one
  * ('recorded'), else Scout's estimate ('model') in the pair close neighbours used, changed away from any
  * recorded failure. `summary` says it in a sentence; `notes` say why (additive, failures avoided, pair).
  */
-export const firstPlateSchema = z.object({
+const firstPlateSchema = z.object({
   source: z.enum(['recorded', 'model']),
   recordId: z.number().int().nullable(),
   phase: z.string(),
@@ -123,7 +121,7 @@ export const firstPlateSchema = z.object({
 });
 export type FirstPlate = z.infer<typeof firstPlateSchema>;
 
-export const additiveAdviceSchema = z.object({
+const additiveAdviceSchema = z.object({
   additive: z.string(),
   label: z.string(),
   purpose: z.enum(['base', 'acid']),
@@ -136,7 +134,7 @@ export const additiveAdviceSchema = z.object({
 });
 export type AdditiveAdvice = z.infer<typeof additiveAdviceSchema>;
 
-export const stainAdviceSchema = z.object({
+const stainAdviceSchema = z.object({
   stain: z.string(),
   label: z.string(),
   shows: z.string(),
@@ -145,7 +143,7 @@ export const stainAdviceSchema = z.object({
   source: z.string(),
 });
 
-export const scoutWarningSchema = z.object({
+const scoutWarningSchema = z.object({
   recordId: z.number().int().nullable(),
   compoundId: z.number().int(),
   compoundName: z.string().nullable(),
@@ -156,7 +154,7 @@ export const scoutWarningSchema = z.object({
   demo: z.boolean(),
 });
 
-export const cautionSchema = z.object({ key: z.string(), title: z.string(), text: z.string() });
+const cautionSchema = z.object({ key: z.string(), title: z.string(), text: z.string() });
 
 export const scoutResultSchema = z.object({
   query: z.object({

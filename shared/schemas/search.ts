@@ -4,11 +4,11 @@ import { recordCompoundSchema, recordListItemSchema } from './record-dto';
 import { outcomes, techniques } from './record-parts';
 import { recordListQuerySchema } from './record';
 
-export const searchModes = ['text', 'similar', 'substructure'] as const;
+const searchModes = ['text', 'similar', 'substructure'] as const;
 export type SearchMode = (typeof searchModes)[number];
-export const searchViews = ['records', 'compounds'] as const;
+const searchViews = ['records', 'compounds'] as const;
 export type SearchView = (typeof searchViews)[number];
-export const searchSorts = ['relevance', 'newest', 'oldest', 'compound', 'rf'] as const;
+const searchSorts = ['relevance', 'newest', 'oldest', 'compound', 'rf'] as const;
 export type SearchSort = (typeof searchSorts)[number];
 
 /** Default Tanimoto cut-off of a similarity search (OpenChemLib fingerprints); common practice puts "similar" near 0.4–0.7. */
@@ -69,7 +69,6 @@ function needsStructure(query: { mode: SearchMode; structure?: string }, context
 export const searchQuerySchema = paginationQuerySchema
   .extend({ ...searchFiltersSchema.shape, ...structureSearchFields, view: z.enum(searchViews).default('records') })
   .superRefine(needsStructure);
-export type SearchQuery = z.input<typeof searchQuerySchema>;
 export type SearchQueryParsed = z.output<typeof searchQuerySchema>;
 
 /** Query of `GET /api/export.csv` and `GET /api/export.sdf`: the search without pages (every matching record). */
@@ -79,7 +78,7 @@ export const exportQuerySchema = z
 export type ExportQueryParsed = z.output<typeof exportQuerySchema>;
 
 /** One set of conditions as a result shows it: the eluent, the target's Rf, how it was seen, how it went. */
-export const conditionSummarySchema = z.object({
+const conditionSummarySchema = z.object({
   recordId: z.number().int(),
   technique: z.enum(techniques),
   stationaryPhaseLabel: z.string(),
@@ -96,7 +95,7 @@ export const conditionSummarySchema = z.object({
 export type ConditionSummary = z.infer<typeof conditionSummarySchema>;
 
 /** A record found: `similarity` (Tanimoto 0–1) in structure searches, `relevance` (0–1) in text searches. */
-export const searchRecordHitSchema = z.object({
+const searchRecordHitSchema = z.object({
   kind: z.literal('record'),
   recordId: z.number().int(),
   compoundId: z.number().int(),
@@ -107,7 +106,7 @@ export const searchRecordHitSchema = z.object({
 export type SearchRecordHit = z.infer<typeof searchRecordHitSchema>;
 
 /** A compound found, with how its matching records went and the best of their conditions (clean first). */
-export const searchCompoundHitSchema = z.object({
+const searchCompoundHitSchema = z.object({
   kind: z.literal('compound'),
   id: z.number().int(),
   compound: recordCompoundSchema,

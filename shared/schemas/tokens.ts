@@ -18,7 +18,7 @@ export const tokenCreateSchema = z.object({
 });
 export type TokenCreate = z.input<typeof tokenCreateSchema>;
 
-export const tokenStatusSchema = z.enum(['active', 'expired', 'revoked']);
+const tokenStatusSchema = z.enum(['active', 'expired', 'revoked']);
 
 export const apiTokenSchema = z.object({
   id: z.number().int(),

@@ -11,7 +11,7 @@ export interface PlateSpot {
 }
 
 /** Scout's expected spot: the estimate with its interval (both Rf). */
-export interface PredictedSpot {
+interface PredictedSpot {
   rf: number;
   low?: number;
   high?: number;

@@ -3,7 +3,7 @@ import { laneX, spotY, stripSize, stripSizes, type StripGeometry } from './plate
 import { PlateLaneDrawing } from './plate-strip-lane';
 import type { PlateLane, SpotRole } from './plate-strip-types';
 
-export type { PlateLane, PlateSpot, PredictedSpot, SpotRole } from './plate-strip-types';
+export type { PlateLane } from './plate-strip-types';
 
 interface PlateStripProps {
   lanes: PlateLane[];
@@ -22,7 +22,7 @@ const roleWords: Record<SpotRole, string> = {
 const rf2 = (rf: number) => rf.toFixed(2);
 
 /** One sentence per lane listing every Rf, for screen readers and the hover title. */
-export function describeLanes(lanes: PlateLane[]): string {
+function describeLanes(lanes: PlateLane[]): string {
   return lanes
     .map((lane, i) => {
       const parts = lane.spots.map((s) => `${roleWords[s.role]}${s.note ? ` (${s.note})` : ''} Rf ${rf2(s.rf)}`);

@@ -5,7 +5,7 @@ import { meResponseSchema, type Role, roleAtLeast } from '../../shared/schemas/a
 /** Who is signed in: read by every feature (the server stays the authority). */
 export const sessionKeys = { me: ['session', 'me'] as const };
 
-export const meQueryOptions = queryOptions({
+const meQueryOptions = queryOptions({
   queryKey: sessionKeys.me,
   queryFn: () => api('/api/auth/me', {}, meResponseSchema),
   staleTime: 60_000,

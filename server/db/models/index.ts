@@ -8,7 +8,6 @@ import { RecordVisualisation } from './record-visualisation';
 import { RecordPhoto } from './record-photo';
 import { RecordRevision } from './record-revision';
 import { RecordContributor } from './record-contributor';
-import { StoredBlob } from './stored-blob';
 import { Invitation } from './invitation';
 import { PasswordReset } from './password-reset';
 import { RecordMerge } from './record-merge';
@@ -36,7 +35,7 @@ Import.belongsTo(User, { as: 'user', foreignKey: 'userId' });
 Import.hasMany(ImportRow, { as: 'rejectedRows', foreignKey: 'importId' });
 
 export { User, Compound, AuditEntry };
-export { ConditionRecord, RecordSpot, RecordVisualisation, RecordPhoto, RecordRevision, RecordContributor, StoredBlob };
+export { ConditionRecord, RecordSpot, RecordVisualisation, RecordPhoto, RecordRevision, RecordContributor };
 export { Invitation, PasswordReset };
 export { RecordMerge, DuplicateDismissal, Bookmark };
 export { Import, ImportRow };

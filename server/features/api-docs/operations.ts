@@ -36,7 +36,7 @@ import { classDetailSchema, classIndexSchema } from '../../../shared/schemas/cla
 import { overviewSchema } from '../../../shared/schemas/overview';
 
 /** What an operation answers on success: a JSON body (zod schema), another media type, or nothing (204). */
-export type Answer = {
+type Answer = {
   status: number;
   description: string;
   json?: z.ZodType;

@@ -10,7 +10,7 @@ import { passwordResetMail } from '../../mail/messages';
 import { assertPasswordFits, userByEmail } from '../../auth/account-rules';
 
 /** A reset link works once and for one hour. */
-export const RESET_MINUTES = 60;
+const RESET_MINUTES = 60;
 
 /**
  * Mails a reset link when the address belongs to an active account, and does nothing otherwise. The route

@@ -6,7 +6,7 @@ import { derivedColumns, recordContentHash, type RecordContent } from '../../cor
 import { loadRecordState } from '../../core/record-revisions';
 
 /** The row columns each choosable field stands for; the filter columns derived from them are recomputed after (refreshDerivedColumns). */
-export const fieldColumns: Record<MergeableField, readonly string[]> = {
+const fieldColumns: Record<MergeableField, readonly string[]> = {
   compound: ['compound_id'],
   technique: ['technique'],
   stationaryPhase: ['stationary_phase', 'stationary_phase_other'],

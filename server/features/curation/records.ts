@@ -61,7 +61,7 @@ export async function curationRowsByIds(ids: readonly number[], transaction?: Tr
  * A record's signature for dismissals: id, revision and updated_at (ms). A dismissal of a group stores
  * the signatures of its records; any edit, merge or status change moves one of them.
  */
-export function recordSignature(row: Pick<CurationRow, 'id' | 'revision' | 'updatedAt'>): string {
+function recordSignature(row: Pick<CurationRow, 'id' | 'revision' | 'updatedAt'>): string {
   return `${row.id}@${row.revision}:${new Date(row.updatedAt).getTime()}`;
 }
 

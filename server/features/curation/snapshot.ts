@@ -4,7 +4,7 @@ import type { MergeSnapshot } from '../../db/models/record-merge';
 
 /** Tables whose rows hang from a record through `record_id` and move or gain rows in a merge. */
 export const childTables = ['record_spots', 'record_visualisations', 'record_photos', 'record_contributors'] as const;
-export type ChildTable = (typeof childTables)[number];
+type ChildTable = (typeof childTables)[number];
 type SnapshotTable = 'condition_records' | ChildTable | 'bookmarks';
 
 /** True once the bookmarks table (record bookmarks by `record_id`) exists in this database. */

@@ -5,7 +5,7 @@ import { headerScore } from '../../../shared/domain/import-table';
 import type { ImportSource } from './source';
 import { tableSource, type TableRow } from './table-source';
 
-export const delimiters = [',', ';', '\t'] as const;
+const delimiters = [',', ';', '\t'] as const;
 
 /** Occurrences of a delimiter outside double-quoted text on one line. */
 function countOutsideQuotes(line: string, delimiter: string): number {

@@ -5,7 +5,7 @@ import type { RowContext } from './row-facts';
 import type { ImportSource } from './source';
 
 /** The group's members (active or not: old sheets name people who left), for matching a sheet's people. */
-export async function loadMembers(): Promise<Member[]> {
+async function loadMembers(): Promise<Member[]> {
   const users = await User.findAll({ attributes: ['id', 'name', 'email'] });
   return users.map((user) => ({ id: user.id, name: user.name, email: user.email }));
 }

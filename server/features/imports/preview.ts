@@ -58,7 +58,7 @@ async function resultsOf(rows: PreparedRow[]): Promise<ImportRowResult[]> {
 }
 
 /** Rows a dry run reads in full to count what an import would bring in (a group's sheet is rarely longer). */
-export const PREVIEW_CHECK_ROWS = 1_000;
+const PREVIEW_CHECK_ROWS = 1_000;
 
 /**
  * A dry run: opens the file (the sheet and header row found or chosen), maps its headers (the user's choices

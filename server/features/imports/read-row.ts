@@ -16,7 +16,7 @@ export type RowReading =
   | { ok: false; reason: string };
 
 /** Rf the open TLC dataset reports at or below 0 (spot on the origin) is stored as this smallest readable Rf. */
-export const OPEN_TLC_MIN_RF = 0.001;
+const OPEN_TLC_MIN_RF = 0.001;
 
 class RowProblem extends Error {}
 

@@ -3,15 +3,15 @@ import { Import, ImportRow } from '../../db/models';
 import { NotFoundError } from '../../http/errors';
 
 /** The column added to the rejected rows' download; the import's header detection ignores it on re-import. */
-export const REASON_COLUMN = 'reason';
+const REASON_COLUMN = 'reason';
 /** The column added to the warnings download. */
-export const WARNING_COLUMN = 'warning';
+const WARNING_COLUMN = 'warning';
 
 /**
  * A text cell a spreadsheet would run as a formula (starting with =, +, -, @, tab or carriage return and not a
  * plain number) gets a leading apostrophe, as the app's export does (OWASP "CSV injection" advice).
  */
-export function defuseCell(cell: string): string {
+function defuseCell(cell: string): string {
   return /^[=+\-@\t\r]/.test(cell) && !/^[+-]?\d+([.,]\d+)?$/.test(cell) ? `'${cell}` : cell;
 }
 

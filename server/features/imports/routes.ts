@@ -17,7 +17,7 @@ import { importRowsCsv } from './rejected-csv';
 import { undoImport, undoPlan } from './undo-import';
 
 /** Largest file an import accepts (bytes). */
-export const MAX_IMPORT_BYTES = 20 * 1024 * 1024;
+const MAX_IMPORT_BYTES = 20 * 1024 * 1024;
 
 export const importsRouter = Router();
 

@@ -69,7 +69,7 @@ async function markFailed(importId: number, error: unknown): Promise<void> {
 }
 
 /** What a running import says while it waits for the database to come back (the page shows it). */
-export const WAITING_MESSAGE = 'The database became unavailable.';
+const WAITING_MESSAGE = 'The database became unavailable.';
 
 /**
  * Waits (every 0.5 s, up to five minutes) until the database answers again, then records on the import that it

@@ -3,7 +3,7 @@ import { UnprocessableError } from '../../http/errors';
 import { uniqueHeaders, type ImportSource } from './source';
 
 /** The column that carries each record's molfile (title line, counts line, atoms, bonds, "M  END"). */
-export const MOLFILE_COLUMN = 'molfile';
+const MOLFILE_COLUMN = 'molfile';
 
 /**
  * Opens SD file text for import: each record becomes a row whose `molfile` column holds the molfile and

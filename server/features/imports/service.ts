@@ -12,7 +12,7 @@ import { presentImport } from './presenters';
 import type { ImportChoice, ImportDto } from '../../../shared/schemas/import';
 
 /** Rows committed per transaction. */
-export const IMPORT_BATCH_SIZE = 200;
+const IMPORT_BATCH_SIZE = 200;
 
 /** An import still "running" whose heartbeat is older than this has lost its process (ms). */
 const STALE_AFTER_MS = 2 * 60_000;

@@ -6,7 +6,7 @@ import { ConflictError, NotFoundError } from '../../http/errors';
 import type { UndoPlan } from '../../../shared/schemas/import';
 
 /** The reason every record retired by undoing import `id` carries. */
-export const undoReason = (id: number) => `import ${id} undone`;
+const undoReason = (id: number) => `import ${id} undone`;
 
 /** The records of an import the undo leaves alone: survivors of a merge with records outside the undo. */
 const KEPT_SURVIVOR = `EXISTS (SELECT 1 FROM condition_records m WHERE m.merged_into_id = r.id AND m.status = 'merged')`;

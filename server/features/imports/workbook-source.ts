@@ -11,7 +11,7 @@ type Cell = string | number | boolean | Date | null | undefined | object;
  * 0.35000000000000003), a date cell as ISO yyyy-mm-dd (so the column's day/month order never arises), a formula's
  * cached value (read-excel-file reads the stored result), text trimmed.
  */
-export function cellText(cell: Cell): string {
+function cellText(cell: Cell): string {
   if (cell === null || cell === undefined) return '';
   if (cell instanceof Date) return Number.isNaN(cell.getTime()) ? '' : cell.toISOString().slice(0, 10);
   if (typeof cell === 'number') return Number.isFinite(cell) ? String(Number(cell.toPrecision(12))) : '';

@@ -11,7 +11,7 @@ import type { InvitationCreate } from '../../../shared/schemas/accounts';
 import type { InvitationAccept, SessionUser } from '../../../shared/schemas/auth';
 
 /** How long an invitation link stays valid (common practice: about a week). */
-export const INVITATION_DAYS = 7;
+const INVITATION_DAYS = 7;
 const expiry = () => new Date(Date.now() + INVITATION_DAYS * 24 * 3600 * 1000);
 const withInviter = { include: [{ model: User, as: 'inviter' }] };
 

@@ -13,7 +13,7 @@ export function presentAdminUser(user: User): AdminUser {
   };
 }
 
-export function invitationStatus(inv: Invitation, now = new Date()): InvitationStatus {
+function invitationStatus(inv: Invitation, now = new Date()): InvitationStatus {
   if (inv.acceptedAt) return 'accepted';
   if (inv.revokedAt) return 'revoked';
   return inv.expiresAt <= now ? 'expired' : 'pending';

@@ -9,7 +9,7 @@ export type Point = [number, number];
 export type Homography = number[];
 
 /** Solves A·x = b by Gaussian elimination with partial pivoting; null when A is singular. */
-export function solveLinear(a: number[][], b: number[]): number[] | null {
+function solveLinear(a: number[][], b: number[]): number[] | null {
   const n = b.length;
   const m = a.map((row, i) => [...row, b[i]]);
   for (let col = 0; col < n; col++) {
@@ -134,9 +134,4 @@ export function quadCorners(hull: Point[], angle: number): Point[] {
     }
     return best;
   });
-}
-
-/** Point at fraction t along the segment a→b. */
-export function lerpPoint(a: Point, b: Point, t: number): Point {
-  return [a[0] + (b[0] - a[0]) * t, a[1] + (b[1] - a[1]) * t];
 }

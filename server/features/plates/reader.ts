@@ -9,7 +9,7 @@ import { findPlates, type RgbImage } from './segment';
 import type { PlateReading, PlateReadSpot } from '../../../shared/schemas/plates';
 
 /** Longest side, px, at which plates are read; larger photos are reduced first (a phone photo is 4000 px). */
-export const READ_SIDE_PX = 1400;
+const READ_SIDE_PX = 1400;
 /** Longest side, px, at which plates are looked for. */
 const FIND_SIDE_PX = 560;
 
@@ -26,7 +26,7 @@ export type ReadOutcome =
 const round = (value: number, digits = 1) => Number(value.toFixed(digits));
 
 /** Decodes, orients (EXIF) and reduces a photo; throws if sharp cannot decode its pixels. */
-export async function decodePhoto(bytes: Buffer): Promise<{ image: RgbImage; width: number; height: number }> {
+async function decodePhoto(bytes: Buffer): Promise<{ image: RgbImage; width: number; height: number }> {
   const oriented = sharp(bytes, { failOn: 'error' }).rotate();
   const { data, info } = await oriented
     .resize({ width: READ_SIDE_PX, height: READ_SIDE_PX, fit: 'inside', withoutEnlargement: true })

@@ -12,7 +12,7 @@ import type { PhotoContentType } from '../../db/models/record-photo';
 
 export { MAX_PHOTO_BYTES } from '../../storage/photo-sniff';
 /** Thumbnails fit in this square, px, as WebP. */
-export const THUMB_SIZE_PX = 320;
+const THUMB_SIZE_PX = 320;
 
 /** The thumbnail; an image whose header reads but whose pixels do not (truncated, damaged) is refused with 422. */
 async function thumbnail(bytes: Buffer, contentType: PhotoContentType): Promise<Buffer> {

@@ -52,7 +52,7 @@ interface CompoundRow {
 const missingFingerprints = new Map<string, Int32Array>();
 
 /** Active condition records (not merged or retired) as Scout's knowledge set; stored fingerprints are used as they are. */
-export async function loadKnowledge(version: string): Promise<KnowledgeSet> {
+async function loadKnowledge(version: string): Promise<KnowledgeSet> {
   const records = await sequelize.query<RecordRow>(
     `SELECT id, compound_id, stationary_phase, eluent, outcome, outcome_reason, demo FROM condition_records ` +
       `WHERE status = 'active' ORDER BY id`,
@@ -150,8 +150,4 @@ export async function currentScoutModel(stamp: string): Promise<ScoutModel> {
   });
   pending = { stamp, promise };
   return promise;
-}
-/** Forgets the cached model (tests, or after a bulk change made in this process). */
-export function forgetScoutModel(): void {
-  cached = null;
 }

@@ -38,7 +38,7 @@ export const exportColumns = [
   'date',
   'author',
 ] as const;
-export type ExportColumn = (typeof exportColumns)[number];
+type ExportColumn = (typeof exportColumns)[number];
 
 const number = (value: number | null | undefined) =>
   value === null || value === undefined ? '' : String(Math.round(value * 1e4) / 1e4);
@@ -46,7 +46,7 @@ const spotRf = (record: LoadedRecord, role: string) =>
   number(record.spots.filter((spot) => spot.role === role).sort((a, b) => a.position - b.position)[0]?.rf);
 
 /** One record as export cells: eluent without additives (they have a column of their own), stains joined by "; ". */
-export function exportCells(record: LoadedRecord): Record<ExportColumn, string> {
+function exportCells(record: LoadedRecord): Record<ExportColumn, string> {
   const { compound, eluent } = record;
   return {
     'record id': String(record.id),

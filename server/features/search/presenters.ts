@@ -5,7 +5,7 @@ import type { ConditionSummary, SearchCompoundHit, SearchRecordHit } from '../..
 import type { RankedRow } from './search-rank';
 
 /** The conditions of one record as results show them (eluent notation, % strong solvent, Rf, stains, outcome). */
-export function presentConditions(record: RecordListItem): ConditionSummary {
+function presentConditions(record: RecordListItem): ConditionSummary {
   const strong = record.eluentSummary.strongSolvent;
   return {
     recordId: record.id,

@@ -20,7 +20,7 @@ const bigramsOf = (token: string) => {
  * Fuse's Bitap threshold for one query word: exact (or inside a longer word) up to 3 letters, then about one
  * wrong letter in four, so a swapped pair of letters ("benzly") still finds a six-letter word.
  */
-export const thresholdFor = (length: number) => (length <= 3 ? 0 : length <= 5 ? 0.25 : 0.34);
+const thresholdFor = (length: number) => (length <= 3 ? 0 : length <= 5 ? 0.25 : 0.34);
 
 /**
  * The distinct words of a collection, with a bigram index over them, matched fuzzily with fuse.js. A query

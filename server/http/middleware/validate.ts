@@ -6,7 +6,7 @@ export type Schemas = { body?: z.ZodType; query?: z.ZodType; params?: z.ZodType 
 type Parsed<S extends Schemas> = { [K in keyof S]: S[K] extends z.ZodType ? z.output<S[K]> : never };
 
 /** Parses body, query and params against zod schemas; the first problem names its field. */
-export function parseParts<S extends Schemas>(schemas: S, req: Request): Parsed<S> {
+function parseParts<S extends Schemas>(schemas: S, req: Request): Parsed<S> {
   const out: Record<string, unknown> = {};
   for (const part of ['params', 'query', 'body'] as const) {
     const schema = schemas[part];

@@ -10,7 +10,7 @@ interface PastePanelProps {
   describedBy?: string;
 }
 
-export const STRUCTURE_FILE_TYPES = '.mol,.sdf,.sd,.smi,.txt,chemical/x-mdl-molfile,chemical/x-mdl-sdfile';
+const STRUCTURE_FILE_TYPES = '.mol,.sdf,.sd,.smi,.txt,chemical/x-mdl-molfile,chemical/x-mdl-sdfile';
 
 /** The paste tab: a text box for SMILES or a molfile, and a file picker for .mol / .sdf / .smi. */
 export function PastePanel({ value, onChange, onFile, required, invalid, describedBy }: PastePanelProps) {

@@ -5,12 +5,12 @@ import { structureToSend } from './structure-text';
 import { structureParseResultSchema } from '../../../shared/schemas/compound';
 import type { ParsedStructure } from './types';
 
-export const structureKeys = {
+const structureKeys = {
   parse: (structure: string) => ['structures', 'parse', structure] as const,
 };
 
 /** The value once it has stopped changing for `ms` milliseconds. */
-export function useDebounced<T>(value: T, ms: number): T {
+function useDebounced<T>(value: T, ms: number): T {
   const [settled, setSettled] = useState(value);
   useEffect(() => {
     const t = setTimeout(() => setSettled(value), ms);
@@ -20,7 +20,7 @@ export function useDebounced<T>(value: T, ms: number): T {
 }
 
 /** `POST /api/structures/parse`, the answer checked against the shared schema. */
-export function parseStructure(structure: string, signal?: AbortSignal): Promise<ParsedStructure> {
+function parseStructure(structure: string, signal?: AbortSignal): Promise<ParsedStructure> {
   return api('/api/structures/parse', { method: 'POST', body: { structure }, signal }, structureParseResultSchema);
 }
 

@@ -8,7 +8,7 @@ export interface ChartAxis {
   domain?: [number, number];
 }
 
-export const frame = { width: 400, height: 260, left: 50, right: 12, top: 24, bottom: 42 };
+const frame = { width: 400, height: 260, left: 50, right: 12, top: 24, bottom: 42 };
 export const plotBox = {
   x0: frame.left,
   x1: frame.width - frame.right,

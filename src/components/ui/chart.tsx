@@ -1,10 +1,9 @@
 import { Axes, ChartFigure, axisTitle, plotBox, type ChartAxis } from './chart-frame';
 import { linear, niceDomain, type Bin } from './chart-scale';
 
-export type { ChartAxis } from './chart-frame';
-export { binValues, type Bin } from './chart-scale';
+export { binValues } from './chart-scale';
 
-export interface ScatterPoint {
+interface ScatterPoint {
   x: number;
   y: number;
   /** Shown on hover and in the hidden table, e.g. the record it came from. */

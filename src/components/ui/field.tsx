@@ -1,7 +1,7 @@
 import { useId, type InputHTMLAttributes, type ReactNode, type TextareaHTMLAttributes } from 'react';
 
 /** Ids that tie a control to its hint and error, so screen readers read them with the label. */
-export interface FieldIds {
+interface FieldIds {
   id: string;
   'aria-describedby'?: string;
   'aria-invalid'?: true;

@@ -1,7 +1,7 @@
 import type { ReactNode, SelectHTMLAttributes } from 'react';
 import { Field, controlClass } from './field';
 
-export interface SelectOption {
+interface SelectOption {
   value: string;
   label: string;
   disabled?: boolean;

@@ -1,6 +1,6 @@
 import { useSyncExternalStore } from 'react';
 
-export type ToastTone = 'done' | 'problem';
+type ToastTone = 'done' | 'problem';
 
 export interface Toast {
   id: number;
@@ -15,7 +15,7 @@ const listeners = new Set<() => void>();
 const emit = () => listeners.forEach((listener) => listener());
 
 /** Dismisses a toast. */
-export function dismissToast(id: number) {
+function dismissToast(id: number) {
   toasts = toasts.filter((toast) => toast.id !== id);
   emit();
 }

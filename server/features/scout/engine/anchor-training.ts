@@ -6,11 +6,11 @@ import { measuredAt, type Anchor, type PairData } from './pair-data';
  * carried over from another solvent pair counts; both fade with the ε° distance from where the compound was
  * measured (scale 0.15). Chosen with the kernel weights (see kernel.ts).
  */
-export const imputedWeight = 0.2;
-export const crossPairWeight = 0.1;
+const imputedWeight = 0.2;
+const crossPairWeight = 0.1;
 const fadeScale = 0.15;
 /** Largest training set per anchor; measured values first, then by weight (bounds the O(n³) fit). */
-export const maxTraining = 600;
+const maxTraining = 600;
 
 export type TrainingSource = 'measured' | 'own-line' | 'other-pair';
 
@@ -27,7 +27,7 @@ export interface AnchorTraining {
  * Mean difference, at the anchor's ε°, between compounds' lines in this pair and in another (selectivity offset
  * of the pairs at equal strength); 0 when no compound was run in both, i.e. Snyder's equal-strength assumption.
  */
-export function pairOffset(target: PairData, other: PairData, epsilon: number): number {
+function pairOffset(target: PairData, other: PairData, epsilon: number): number {
   let sum = 0;
   let count = 0;
   for (const [compound, line] of target.lines) {

@@ -17,7 +17,7 @@ export interface ConfidenceInput {
 }
 
 /** Widest 90 % interval (Rf) for each word: the word is read off the interval, never beside a wider one. */
-export const confidenceWidths = { high: 0.3, medium: 0.5 } as const;
+const confidenceWidths = { high: 0.3, medium: 0.5 } as const;
 
 /**
  * A plain-words confidence that follows the 90 % interval's width (issue 26, rule 6): high when the interval

@@ -12,11 +12,6 @@ export type EluentPosition =
 /** "hexanes|ethyl-acetate": weak side first. */
 export const pairKey = (pair: SolventPair) => `${pair.weak}|${pair.strong}`;
 
-export function pairFromKey(key: string): SolventPair {
-  const [weak, strong] = key.split('|');
-  return { weak, strong };
-}
-
 /** The adsorbent whose ε° scale applies to a stationary phase (Snyder's model covers silica and alumina only). */
 export function adsorbentOf(phaseKey: string): Adsorbent | null {
   return stationaryPhaseByKey(phaseKey)?.adsorbent ?? null;

@@ -30,7 +30,7 @@ export class ScoutOptionError extends Error {}
 export const buildScoutModel = (knowledge: KnowledgeSet) => new ScoutModel(knowledge);
 
 /** 'full' when a recorded compound is close (Tanimoto on the substructure keys the kernel uses ≥ 0.5), otherwise descriptors only. */
-export function chooseVariant(ranked: readonly SimilarCompound[]): ModelVariant {
+function chooseVariant(ranked: readonly SimilarCompound[]): ModelVariant {
   const best = ranked.reduce((max, item) => Math.max(max, item.keys ?? item.similarity), 0);
   return best >= closeSimilarity ? 'full' : 'descriptors';
 }

@@ -4,7 +4,7 @@ import type { ScoutDescriptors } from './types';
 const elements = ['C', 'H', 'N', 'O', 'S', 'F', 'Cl', 'Br', 'I', 'P', 'Si', 'B'] as const;
 
 /** Element counts read from a Hill formula ("C9H8O4", "C4H12N+"). */
-export function elementCounts(formula: string): Record<string, number> {
+function elementCounts(formula: string): Record<string, number> {
   const counts: Record<string, number> = {};
   for (const [, symbol, count] of formula.matchAll(/([A-Z][a-z]?)(\d*)/g))
     counts[symbol] = (counts[symbol] ?? 0) + (count ? Number(count) : 1);

@@ -18,7 +18,7 @@ import type { ScoutMeasurement, ScoutOptions, ScoutQuery, SolventPair } from './
  * Neighbours at least this similar count as "very close": their failures steer the first plate (on the fused scale,
  * para-substituted analogues score 0.77–0.82).
  */
-export const veryCloseSimilarity = 0.75;
+const veryCloseSimilarity = 0.75;
 
 type Components = { solvent: string; parts: number }[];
 

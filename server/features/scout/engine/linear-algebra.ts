@@ -37,7 +37,7 @@ export function solveLower(lower: Float64Array, n: number, b: ArrayLike<number>)
 }
 
 /** Solves Lᵀ·x = b for lower-triangular L. */
-export function solveUpper(lower: Float64Array, n: number, b: ArrayLike<number>): Float64Array {
+function solveUpper(lower: Float64Array, n: number, b: ArrayLike<number>): Float64Array {
   const x = new Float64Array(n);
   for (let i = n - 1; i >= 0; i--) {
     let sum = b[i];

@@ -10,7 +10,7 @@ import type { KnowledgeSet, ScoutCompound, ScoutMeasurement, ScoutQuery, Solvent
 export type ModelVariant = 'full' | 'descriptors';
 
 /** Noise variance λ of one recorded RM relative to the kernel (see kernel.ts for how it was chosen). */
-export const measurementNoise = 0.2;
+const measurementNoise = 0.2;
 
 export interface AnchorFit {
   training: AnchorTraining;

@@ -17,7 +17,7 @@ export interface SimilarCompound {
 const pairBits = new Map<string, Int32Array | null>();
 
 /** Atom-pair fingerprint of a canonical SMILES, kept per process (null if OpenChemLib cannot read it). */
-export function atomPairsOfSmiles(smiles: string): Int32Array | null {
+function atomPairsOfSmiles(smiles: string): Int32Array | null {
   let bits = pairBits.get(smiles);
   if (bits === undefined) {
     try {
@@ -63,7 +63,7 @@ const conditionLimit = 8;
 const outcomeOrder = { clean: 0, partial: 1, failed: 2 } as const;
 
 /** A neighbour's recorded conditions: plates with an Rf first, clean before partial before failed. */
-export function conditionsOf(measurements: readonly ScoutMeasurement[]): Neighbour['conditions'] {
+function conditionsOf(measurements: readonly ScoutMeasurement[]): Neighbour['conditions'] {
   return [...measurements]
     .sort(
       (a, b) =>

@@ -50,7 +50,7 @@ export interface EluentPrediction {
 }
 
 /** z of a two-sided 90 % normal interval. */
-export const z90 = 1.645;
+const z90 = 1.645;
 
 /**
  * 90 % interval of a new plate's Rf: the RM interval rm ± 1.645·sd turned into Rf, each side at least

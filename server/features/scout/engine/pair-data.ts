@@ -20,7 +20,7 @@ export interface Anchor {
   compounds: number;
 }
 
-export interface PairPoint extends RetentionPoint {
+interface PairPoint extends RetentionPoint {
   fraction: number;
 }
 
@@ -38,7 +38,7 @@ export interface PairData {
 }
 
 /** RM of a recorded Rf, clamped into rfClampRange first so spots on the origin or front stay finite. */
-export const rmOfRf = (rf: number) => rfToRm(Math.min(Math.max(rf, rfClampRange[0]), rfClampRange[1]));
+const rmOfRf = (rf: number) => rfToRm(Math.min(Math.max(rf, rfClampRange[0]), rfClampRange[1]));
 
 /** Isocratic measurements with a target Rf, placed on the adsorbent's ε° scale (others have no place). */
 export function placeMeasurements(

@@ -5,7 +5,7 @@ import type { SimilarCompound } from './neighbours';
 import type { SolventPair } from './types';
 
 /** Neighbours at least this similar vote with their clean records for the pair of the first plate. */
-export const pairVoteSimilarity = 0.7;
+const pairVoteSimilarity = 0.7;
 
 export interface PairVote {
   /** The pair most of the close neighbours' clean records used (similarity-weighted share ≥ 0.5), or null. */

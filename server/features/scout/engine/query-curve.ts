@@ -3,7 +3,7 @@ import type { ModelVariant, ScoutModel } from './model';
 import type { PairData } from './pair-data';
 
 /** The query's predicted RM at one anchor, after the curve was made monotone. */
-export interface CurveAnchor {
+interface CurveAnchor {
   fraction: number;
   epsilon: number;
   rm: number;

@@ -2,7 +2,7 @@
  * Ratios chemists write for a two-solvent eluent, as strong : weak parts (common practice: round numbers such as
  * 1 : 9, 1 : 4, 1 : 1), from 1 % to pure strong solvent. The suggestion is rounded to one of these.
  */
-export const ratioLadder: readonly (readonly [number, number])[] = [
+const ratioLadder: readonly (readonly [number, number])[] = [
   [1, 99],
   [1, 49],
   [1, 29],

@@ -7,7 +7,7 @@ import { curveAt, epsilonForRm, type CurvePoint, type QueryKernel } from './quer
 import { ladderSteps } from './ratio-ladder';
 import type { SolventPair } from './types';
 
-export type Reach = 'within' | 'too-polar' | 'too-fast';
+type Reach = 'within' | 'too-polar' | 'too-fast';
 
 export interface RatioSuggestion {
   pair: SolventPair;

@@ -1,7 +1,7 @@
 import type { outcomes } from '../../../../shared/schemas/record-parts';
 import type { CompoundDescriptors } from '../../../chem/descriptors';
 
-export type Outcome = (typeof outcomes)[number];
+type Outcome = (typeof outcomes)[number];
 
 /** Descriptors the Scout model reads: the compound's stored descriptors but its exact mass. */
 export type ScoutDescriptors = Omit<CompoundDescriptors, 'exactMass'>;

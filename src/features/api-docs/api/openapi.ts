@@ -34,7 +34,7 @@ const operationSchema = z.looseObject({
 });
 export type Operation = z.infer<typeof operationSchema>;
 
-export const openApiDocumentSchema = z.looseObject({
+const openApiDocumentSchema = z.looseObject({
   openapi: z.string(),
   info: z.looseObject({ title: z.string(), version: z.string(), description: z.string().optional() }),
   paths: z.record(z.string(), z.record(z.string(), operationSchema)),
@@ -42,7 +42,7 @@ export const openApiDocumentSchema = z.looseObject({
 });
 export type OpenApiDocument = z.infer<typeof openApiDocumentSchema>;
 
-export const openApiQueryOptions = queryOptions({
+const openApiQueryOptions = queryOptions({
   queryKey: ['api-docs', 'openapi'] as const,
   queryFn: () => api('/api/openapi.json', {}, openApiDocumentSchema),
   staleTime: Infinity,

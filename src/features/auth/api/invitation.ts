@@ -3,7 +3,7 @@ import { api, setCsrfToken } from '../../../lib/api-client';
 import { signedInResponseSchema, type InvitationAccept } from '../../../../shared/schemas/auth';
 import { invitationPreviewSchema } from '../../../../shared/schemas/accounts';
 
-export const invitationPreviewQueryOptions = (token: string) =>
+const invitationPreviewQueryOptions = (token: string) =>
   queryOptions({
     queryKey: ['invitation', token],
     queryFn: () => api(`/api/auth/invitations/${encodeURIComponent(token)}`, {}, invitationPreviewSchema),
@@ -15,7 +15,7 @@ export function useInvitationPreview(token: string) {
   return useQuery(invitationPreviewQueryOptions(token));
 }
 
-export function acceptInvitation(token: string, input: InvitationAccept) {
+function acceptInvitation(token: string, input: InvitationAccept) {
   return api(
     `/api/auth/invitations/${encodeURIComponent(token)}/accept`,
     { method: 'POST', body: input },

@@ -6,7 +6,7 @@ import { resetPreviewSchema } from '../../../../shared/schemas/accounts';
 
 const requestAnswerSchema = z.object({ message: z.string() });
 
-export function requestPasswordReset(input: PasswordResetRequest) {
+function requestPasswordReset(input: PasswordResetRequest) {
   return api('/api/auth/password-reset', { method: 'POST', body: input }, requestAnswerSchema);
 }
 
@@ -14,7 +14,7 @@ export function useRequestPasswordReset() {
   return useMutation({ mutationFn: requestPasswordReset });
 }
 
-export const resetPreviewQueryOptions = (token: string) =>
+const resetPreviewQueryOptions = (token: string) =>
   queryOptions({
     queryKey: ['password-reset', token],
     queryFn: () => api(`/api/auth/password-reset/${encodeURIComponent(token)}`, {}, resetPreviewSchema),
@@ -26,7 +26,7 @@ export function useResetPreview(token: string) {
   return useQuery(resetPreviewQueryOptions(token));
 }
 
-export function completePasswordReset(token: string, input: PasswordResetInput) {
+function completePasswordReset(token: string, input: PasswordResetInput) {
   return api<void>(`/api/auth/password-reset/${encodeURIComponent(token)}`, { method: 'POST', body: input });
 }
 

@@ -3,7 +3,7 @@ import { api } from '../../../lib/api-client';
 import { meResponseSchema, type PasswordChange, type ProfileUpdate } from '../../../../shared/schemas/auth';
 import { sessionKeys } from './session';
 
-export function updateProfile(input: ProfileUpdate) {
+function updateProfile(input: ProfileUpdate) {
   return api('/api/auth/me', { method: 'PATCH', body: input }, meResponseSchema);
 }
 
@@ -12,7 +12,7 @@ export function useUpdateProfile() {
   return useMutation({ mutationFn: updateProfile, onSuccess: (me) => qc.setQueryData(sessionKeys.me, me) });
 }
 
-export function changePassword(input: PasswordChange) {
+function changePassword(input: PasswordChange) {
   return api<void>('/api/auth/me/password', { method: 'POST', body: input });
 }
 

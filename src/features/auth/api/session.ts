@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, setCsrfToken } from '../../../lib/api-client';
 import type { LoginInput } from '../../../../shared/schemas/auth';
 
-export { meQueryOptions, sessionKeys, useHasRole, useMe } from '../../../lib/session';
+export { sessionKeys, useHasRole, useMe } from '../../../lib/session';
 
 export function useSignIn() {
   const qc = useQueryClient();

@@ -3,9 +3,9 @@ import { api } from '../../../lib/api-client';
 import { bookmarkListSchema } from '../../../../shared/schemas/bookmark';
 import { bookmarkKeys } from './keys';
 
-export const getBookmarks = () => api('/api/bookmarks', {}, bookmarkListSchema);
+const getBookmarks = () => api('/api/bookmarks', {}, bookmarkListSchema);
 
-export const bookmarksQueryOptions = queryOptions({
+const bookmarksQueryOptions = queryOptions({
   queryKey: bookmarkKeys.list(),
   queryFn: getBookmarks,
   staleTime: 30_000,

@@ -7,10 +7,9 @@ import { bookmarkKeys } from './keys';
 export type BookmarkTarget =
   { recordId: number; compoundId?: undefined } | { compoundId: number; recordId?: undefined };
 
-export const addBookmark = (input: BookmarkInput) =>
-  api('/api/bookmarks', { method: 'POST', body: input }, bookmarkDtoSchema);
+const addBookmark = (input: BookmarkInput) => api('/api/bookmarks', { method: 'POST', body: input }, bookmarkDtoSchema);
 
-export function removeBookmark(target: BookmarkTarget) {
+function removeBookmark(target: BookmarkTarget) {
   const params = new URLSearchParams(
     Object.entries(target)
       .filter(([, value]) => value !== undefined)
@@ -19,7 +18,7 @@ export function removeBookmark(target: BookmarkTarget) {
   return api<void>(`/api/bookmarks?${params}`, { method: 'DELETE' });
 }
 
-export const updateBookmarkNote = (id: number, note: string | null) =>
+const updateBookmarkNote = (id: number, note: string | null) =>
   api(`/api/bookmarks/${id}`, { method: 'PATCH', body: { note } }, bookmarkDtoSchema);
 
 /** Adds or removes a bookmark, then re-reads the list (so every toggle and the bookmarks page agree). */

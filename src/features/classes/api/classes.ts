@@ -3,15 +3,15 @@ import { api } from '../../../lib/api-client';
 import { classDetailSchema, classIndexSchema } from '../../../../shared/schemas/classes';
 import { classKeys } from './keys';
 
-export const getClassIndex = () => api('/api/classes', {}, classIndexSchema);
-export const getClassDetail = (key: string) => api(`/api/classes/${encodeURIComponent(key)}`, {}, classDetailSchema);
+const getClassIndex = () => api('/api/classes', {}, classIndexSchema);
+const getClassDetail = (key: string) => api(`/api/classes/${encodeURIComponent(key)}`, {}, classDetailSchema);
 
-export const classIndexQueryOptions = queryOptions({
+const classIndexQueryOptions = queryOptions({
   queryKey: classKeys.index(),
   queryFn: getClassIndex,
   staleTime: 60_000,
 });
-export const classDetailQueryOptions = (key: string) =>
+const classDetailQueryOptions = (key: string) =>
   queryOptions({ queryKey: classKeys.detail(key), queryFn: () => getClassDetail(key), staleTime: 60_000 });
 
 /** Every compound class with its counts. */

@@ -7,9 +7,9 @@ export const compoundKeys = {
   detail: (id: number) => [...compoundKeys.all, 'detail', id] as const,
 };
 
-export const getCompound = (id: number) => api(`/api/compounds/${id}`, {}, compoundDetailSchema);
+const getCompound = (id: number) => api(`/api/compounds/${id}`, {}, compoundDetailSchema);
 
-export const compoundQueryOptions = (id: number) =>
+const compoundQueryOptions = (id: number) =>
   queryOptions({ queryKey: compoundKeys.detail(id), queryFn: () => getCompound(id) });
 
 /** A compound with its descriptors, classes and active records. */

@@ -3,8 +3,7 @@ import { api } from '../../../lib/api-client';
 import type { DismissInput } from '../../../../shared/schemas/curation';
 import { curationKeys } from './keys';
 
-export const dismissGroup = (input: DismissInput) =>
-  api('/api/curation/duplicates/dismiss', { method: 'POST', body: input });
+const dismissGroup = (input: DismissInput) => api('/api/curation/duplicates/dismiss', { method: 'POST', body: input });
 
 /** Hides a candidate group until one of its records changes. */
 export function useDismissGroup() {

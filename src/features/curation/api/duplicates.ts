@@ -3,10 +3,9 @@ import { api } from '../../../lib/api-client';
 import { duplicatesResponseSchema } from '../../../../shared/schemas/curation';
 import { curationKeys } from './keys';
 
-export const getDuplicates = () => api('/api/curation/duplicates', {}, duplicatesResponseSchema);
+const getDuplicates = () => api('/api/curation/duplicates', {}, duplicatesResponseSchema);
 
-export const duplicatesQueryOptions = () =>
-  queryOptions({ queryKey: curationKeys.duplicates(), queryFn: getDuplicates });
+const duplicatesQueryOptions = () => queryOptions({ queryKey: curationKeys.duplicates(), queryFn: getDuplicates });
 
 /** Open candidate duplicate groups, most certain first. */
 export function useDuplicates() {

@@ -3,10 +3,10 @@ import { api } from '../../../lib/api-client';
 import { mergePreviewSchema } from '../../../../shared/schemas/curation';
 import { curationKeys } from './keys';
 
-export const getMergePreview = (ids: readonly number[]) =>
+const getMergePreview = (ids: readonly number[]) =>
   api(`/api/curation/merge-preview?ids=${ids.join(',')}`, {}, mergePreviewSchema);
 
-export const mergePreviewQueryOptions = (ids: readonly number[]) =>
+const mergePreviewQueryOptions = (ids: readonly number[]) =>
   queryOptions({ queryKey: curationKeys.preview(ids), queryFn: () => getMergePreview(ids), enabled: ids.length >= 2 });
 
 /** Side-by-side values and united counts for a proposed merge. */

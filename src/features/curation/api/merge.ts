@@ -3,7 +3,7 @@ import { api } from '../../../lib/api-client';
 import { mergeResultSchema, type MergeInput } from '../../../../shared/schemas/curation';
 import { curationKeys, recordsKey } from './keys';
 
-export const mergeRecords = (input: MergeInput) =>
+const mergeRecords = (input: MergeInput) =>
   api('/api/curation/merge', { method: 'POST', body: input }, mergeResultSchema);
 
 /** Merges records into a survivor; every curation and record view is refreshed after. */

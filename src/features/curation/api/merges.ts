@@ -3,10 +3,10 @@ import { api } from '../../../lib/api-client';
 import { mergeHistorySchema, unmergeResultSchema } from '../../../../shared/schemas/curation';
 import { curationKeys, recordsKey } from './keys';
 
-export const getMerges = (recordId?: number) =>
+const getMerges = (recordId?: number) =>
   api(`/api/curation/merges${recordId ? `?recordId=${recordId}` : ''}`, {}, mergeHistorySchema);
 
-export const mergesQueryOptions = (recordId?: number) =>
+const mergesQueryOptions = (recordId?: number) =>
   queryOptions({ queryKey: curationKeys.merges(recordId), queryFn: () => getMerges(recordId) });
 
 /** Recent merges (or those involving one record), each saying whether it can still be undone. */
@@ -14,7 +14,7 @@ export function useMerges(recordId?: number) {
   return useQuery(mergesQueryOptions(recordId));
 }
 
-export const unmergeRecords = (mergeId: number) =>
+const unmergeRecords = (mergeId: number) =>
   api(`/api/curation/unmerge/${mergeId}`, { method: 'POST' }, unmergeResultSchema);
 
 /** Undoes a merge; curation lists and record views are refreshed after. */

@@ -3,11 +3,10 @@ import { api } from '../../../lib/api-client';
 import { statusChangeResultSchema } from '../../../../shared/schemas/curation';
 import { curationKeys, recordsKey } from './keys';
 
-export const retireRecord = ({ id, reason }: { id: number; reason: string }) =>
+const retireRecord = ({ id, reason }: { id: number; reason: string }) =>
   api(`/api/records/${id}/retire`, { method: 'POST', body: { reason } }, statusChangeResultSchema);
 
-export const restoreRecord = (id: number) =>
-  api(`/api/records/${id}/restore`, { method: 'POST' }, statusChangeResultSchema);
+const restoreRecord = (id: number) => api(`/api/records/${id}/restore`, { method: 'POST' }, statusChangeResultSchema);
 
 function useStatusChange<I>(fn: (input: I) => Promise<unknown>) {
   const qc = useQueryClient();

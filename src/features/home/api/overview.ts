@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { overviewSchema } from '../../../../shared/schemas/overview';
 
-export const getOverview = () => api('/api/overview', {}, overviewSchema);
+const getOverview = () => api('/api/overview', {}, overviewSchema);
 
 export const overviewQueryOptions = queryOptions({
   queryKey: ['overview'] as const,

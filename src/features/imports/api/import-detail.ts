@@ -6,7 +6,7 @@ import { importKeys } from './keys';
 export const getImport = (id: number) => api(`/api/imports/${id}`, {}, importDtoSchema);
 
 /** One import; polled every second while it runs (the progress bar). */
-export const importQueryOptions = (id: number) =>
+const importQueryOptions = (id: number) =>
   queryOptions({
     queryKey: importKeys.detail(id),
     queryFn: () => getImport(id),

@@ -3,10 +3,10 @@ import { api } from '../../../lib/api-client';
 import { importListSchema } from '../../../../shared/schemas/import';
 import { importKeys } from './keys';
 
-export const getImports = () => api('/api/imports', {}, importListSchema);
+const getImports = () => api('/api/imports', {}, importListSchema);
 
 /** Past imports, newest first; refreshed every 2 s while one of them runs. */
-export const importsQueryOptions = () =>
+const importsQueryOptions = () =>
   queryOptions({
     queryKey: importKeys.list(),
     queryFn: getImports,

@@ -10,7 +10,7 @@ export interface PreviewInput {
 }
 
 /** POST /api/imports?dryRun=1: the detected mapping and the first rows' results; nothing is written. */
-export const previewImport = ({ file, mapping, choice }: PreviewInput) =>
+const previewImport = ({ file, mapping, choice }: PreviewInput) =>
   api(
     '/api/imports?dryRun=1&previewRows=20',
     { method: 'POST', form: uploadForm(file, mapping, choice) },

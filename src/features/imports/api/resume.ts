@@ -5,7 +5,7 @@ import { importKeys } from './keys';
 import { watchImport } from './watch';
 
 /** POST /api/imports/:id/resume: continues a failed import from the row after its last committed one. */
-export const resumeImport = (id: number) => api(`/api/imports/${id}/resume`, { method: 'POST' }, importDtoSchema);
+const resumeImport = (id: number) => api(`/api/imports/${id}/resume`, { method: 'POST' }, importDtoSchema);
 
 export function useResumeImport() {
   const qc = useQueryClient();

@@ -7,7 +7,7 @@ import { watchImport } from './watch';
 import type { PreviewInput } from './preview';
 
 /** POST /api/imports: stores the file and imports it; a short file answers finished, a long one keeps running in the background. */
-export const startImport = ({ file, mapping, choice }: PreviewInput) =>
+const startImport = ({ file, mapping, choice }: PreviewInput) =>
   api('/api/imports', { method: 'POST', form: uploadForm(file, mapping, choice) }, importDtoSchema);
 
 export function useStartImport() {

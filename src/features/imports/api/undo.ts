@@ -4,7 +4,7 @@ import { importDtoSchema, undoPlanSchema } from '../../../../shared/schemas/impo
 import { changedByImports, importKeys } from './keys';
 
 /** DELETE /api/imports/:id: retires every record the import added (kept, reason "import N undone"). */
-export const undoImport = (id: number) => api(`/api/imports/${id}`, { method: 'DELETE' }, importDtoSchema);
+const undoImport = (id: number) => api(`/api/imports/${id}`, { method: 'DELETE' }, importDtoSchema);
 
 /** GET /api/imports/:id/undo-plan: what the undo would do to records merged or edited since, read before confirming. */
 export const getUndoPlan = (id: number) => api(`/api/imports/${id}/undo-plan`, {}, undoPlanSchema);

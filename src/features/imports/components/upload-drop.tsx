@@ -2,7 +2,7 @@ import { useId, useRef, useState, type DragEvent } from 'react';
 import { buttonClass } from '../../../components/ui/button';
 
 /** Largest file the server accepts (POST /api/imports answers 413 beyond). */
-export const MAX_IMPORT_MB = 20;
+const MAX_IMPORT_MB = 20;
 
 /** Drop an Excel workbook (.xlsx), CSV or SDF file here, or choose one; the chosen file's name and size are shown. */
 export function UploadDrop({

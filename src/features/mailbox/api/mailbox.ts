@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { mailboxSchema } from '../../../../shared/schemas/accounts';
 
-export const mailboxQueryOptions = queryOptions({
+const mailboxQueryOptions = queryOptions({
   queryKey: ['mailbox'],
   queryFn: () => api('/api/dev/mailbox', {}, mailboxSchema),
   refetchInterval: 5_000,

@@ -3,7 +3,7 @@ import { api } from '../../../lib/api-client';
 import { invitationListSchema, invitationSchema, type InvitationCreate } from '../../../../shared/schemas/accounts';
 import { peopleKeys } from './keys';
 
-export const invitationsQueryOptions = (status: 'open' | 'all' = 'open') =>
+const invitationsQueryOptions = (status: 'open' | 'all' = 'open') =>
   queryOptions({
     queryKey: peopleKeys.invitations(status),
     queryFn: () => api(`/api/auth/invitations?status=${status}`, {}, invitationListSchema),
@@ -18,11 +18,11 @@ function useInvitationMutation<I, O>(fn: (input: I) => Promise<O>) {
   return useMutation({ mutationFn: fn, onSettled: () => qc.invalidateQueries({ queryKey: peopleKeys.all }) });
 }
 
-export const createInvitation = (input: InvitationCreate) =>
+const createInvitation = (input: InvitationCreate) =>
   api('/api/auth/invitations', { method: 'POST', body: input }, invitationSchema);
-export const resendInvitation = (id: number) =>
+const resendInvitation = (id: number) =>
   api(`/api/auth/invitations/${id}/resend`, { method: 'POST' }, invitationSchema);
-export const revokeInvitation = (id: number) =>
+const revokeInvitation = (id: number) =>
   api(`/api/auth/invitations/${id}/revoke`, { method: 'POST' }, invitationSchema);
 
 export const useCreateInvitation = () => useInvitationMutation(createInvitation);

@@ -4,7 +4,7 @@ import { adminUserListSchema, adminUserSchema, type AdminUserUpdate } from '../.
 import { sessionKeys } from '../../../lib/session';
 import { peopleKeys } from './keys';
 
-export const usersQueryOptions = queryOptions({
+const usersQueryOptions = queryOptions({
   queryKey: peopleKeys.users(),
   queryFn: () => api('/api/admin/users', {}, adminUserListSchema),
 });
@@ -13,7 +13,7 @@ export function useUsers() {
   return useQuery(usersQueryOptions);
 }
 
-export function updateUser(id: number, change: AdminUserUpdate) {
+function updateUser(id: number, change: AdminUserUpdate) {
   return api(`/api/admin/users/${id}`, { method: 'PATCH', body: change }, adminUserSchema);
 }
 

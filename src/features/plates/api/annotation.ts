@@ -8,7 +8,7 @@ import {
 import { plateKeys } from './keys';
 
 /** The current annotation of a record photo, or null when none was saved yet. */
-export async function getAnnotation(photoId: number) {
+async function getAnnotation(photoId: number) {
   try {
     return await api(`/api/plates/photos/${photoId}/annotation`, {}, photoAnnotationSchema);
   } catch (error) {
@@ -17,12 +17,12 @@ export async function getAnnotation(photoId: number) {
   }
 }
 
-export const annotationQueryOptions = (photoId: number) =>
+const annotationQueryOptions = (photoId: number) =>
   queryOptions({ queryKey: plateKeys.annotation(photoId), queryFn: () => getAnnotation(photoId) });
 export const useAnnotation = (photoId: number, enabled = true) =>
   useQuery({ ...annotationQueryOptions(photoId), enabled });
 
-export const annotationRevisionsQueryOptions = (photoId: number) =>
+const annotationRevisionsQueryOptions = (photoId: number) =>
   queryOptions({
     queryKey: plateKeys.revisions(photoId),
     queryFn: () => api(`/api/plates/photos/${photoId}/annotation/revisions`, {}, photoAnnotationHistorySchema),
@@ -30,7 +30,7 @@ export const annotationRevisionsQueryOptions = (photoId: number) =>
 export const useAnnotationRevisions = (photoId: number, enabled = true) =>
   useQuery({ ...annotationRevisionsQueryOptions(photoId), enabled });
 
-export function saveAnnotation({ photoId, annotation }: { photoId: number; annotation: PlateAnnotation }) {
+function saveAnnotation({ photoId, annotation }: { photoId: number; annotation: PlateAnnotation }) {
   return api(`/api/plates/photos/${photoId}/annotation`, { method: 'PUT', body: annotation }, photoAnnotationSchema);
 }
 

@@ -11,7 +11,7 @@ type Photo = { id: number; url: string; width: number; height: number };
  * On a record's photo: the saved plate annotation drawn over it (or, when none is saved, the photo read afresh),
  * corrected on the overlay and saved as a new revision; earlier revisions stay listed.
  */
-export function PhotoPlateMarker({ photo, canEdit }: { photo: Photo; canEdit: boolean }) {
+function PhotoPlateMarker({ photo, canEdit }: { photo: Photo; canEdit: boolean }) {
   const saved = useAnnotation(photo.id);
   const revisions = useAnnotationRevisions(photo.id);
   const read = useReadPlate();

@@ -3,9 +3,9 @@ import { api } from '../../../lib/api-client';
 import { recordDtoSchema } from '../../../../shared/schemas/record';
 import { recordKeys } from './keys';
 
-export const getRecord = (id: number) => api(`/api/records/${id}`, {}, recordDtoSchema);
+const getRecord = (id: number) => api(`/api/records/${id}`, {}, recordDtoSchema);
 
-export const recordQueryOptions = (id: number) =>
+const recordQueryOptions = (id: number) =>
   queryOptions({ queryKey: recordKeys.detail(id), queryFn: () => getRecord(id) });
 
 /** A record with every field, and whether the signed-in user may edit it. */

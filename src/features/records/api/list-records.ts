@@ -4,7 +4,7 @@ import { recordPageSchema, type RecordListQuery } from '../../../../shared/schem
 import { recordKeys } from './keys';
 
 /** The query string of a records list request; empty values are left out. */
-export function recordQueryString(query: RecordListQuery): string {
+function recordQueryString(query: RecordListQuery): string {
   const params = new URLSearchParams();
   for (const [key, value] of Object.entries(query)) {
     if (value === undefined || value === null || value === '') continue;
@@ -13,10 +13,9 @@ export function recordQueryString(query: RecordListQuery): string {
   return params.toString();
 }
 
-export const getRecords = (query: RecordListQuery) =>
-  api(`/api/records?${recordQueryString(query)}`, {}, recordPageSchema);
+const getRecords = (query: RecordListQuery) => api(`/api/records?${recordQueryString(query)}`, {}, recordPageSchema);
 
-export const recordsQueryOptions = (query: RecordListQuery) =>
+const recordsQueryOptions = (query: RecordListQuery) =>
   queryOptions({
     queryKey: recordKeys.list(query),
     queryFn: () => getRecords(query),

@@ -6,13 +6,13 @@ import { recordKeys } from './keys';
 /** Largest plate photo the server accepts (10 MB); checked here only to answer sooner. */
 export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
 
-export function uploadPhoto({ recordId, file }: { recordId: number; file: File }) {
+function uploadPhoto({ recordId, file }: { recordId: number; file: File }) {
   const form = new FormData();
   form.append('photo', file);
   return api(`/api/records/${recordId}/photos`, { method: 'POST', form }, photoDtoSchema);
 }
 
-export const removePhoto = (photoId: number) => api(`/api/photos/${photoId}`, { method: 'DELETE' });
+const removePhoto = (photoId: number) => api(`/api/photos/${photoId}`, { method: 'DELETE' });
 
 export function useUploadPhoto() {
   const qc = useQueryClient();

@@ -3,9 +3,9 @@ import { api } from '../../../lib/api-client';
 import { recordHistorySchema } from '../../../../shared/schemas/record';
 import { recordKeys } from './keys';
 
-export const getRecordHistory = (id: number) => api(`/api/records/${id}/history`, {}, recordHistorySchema);
+const getRecordHistory = (id: number) => api(`/api/records/${id}/history`, {}, recordHistorySchema);
 
-export const recordHistoryQueryOptions = (id: number) =>
+const recordHistoryQueryOptions = (id: number) =>
   queryOptions({ queryKey: recordKeys.history(id), queryFn: () => getRecordHistory(id) });
 
 /** Every revision of a record, newest first. */

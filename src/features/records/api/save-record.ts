@@ -3,10 +3,9 @@ import { api } from '../../../lib/api-client';
 import { recordDtoSchema, type RecordInput, type RecordUpdate } from '../../../../shared/schemas/record';
 import { compoundsKey, recordKeys } from './keys';
 
-export const createRecord = (input: RecordInput) =>
-  api('/api/records', { method: 'POST', body: input }, recordDtoSchema);
+const createRecord = (input: RecordInput) => api('/api/records', { method: 'POST', body: input }, recordDtoSchema);
 
-export const updateRecord = ({ id, patch }: { id: number; patch: RecordUpdate }) =>
+const updateRecord = ({ id, patch }: { id: number; patch: RecordUpdate }) =>
   api(`/api/records/${id}`, { method: 'PATCH', body: patch }, recordDtoSchema);
 
 function useRecordMutation<I, O>(fn: (input: I) => Promise<O>) {

@@ -5,7 +5,7 @@ import { Button, buttonClass } from '../../../components/ui/button';
 const acceptedTypes = ['image/jpeg', 'image/png', 'image/webp'];
 
 /** Checks what the browser can know before upload; the server checks the content itself. */
-export function photoProblem(file: File): string | null {
+function photoProblem(file: File): string | null {
   if (file.size > MAX_PHOTO_BYTES) return `${file.name} is ${(file.size / 1048576).toFixed(1)} MB; the limit is 10 MB.`;
   if (file.type && !acceptedTypes.includes(file.type)) return `${file.name} is not a JPEG, PNG or WebP image.`;
   return null;

@@ -21,7 +21,7 @@ import { RecentCompounds } from './recent-compounds';
 type ReadSpot = Omit<RecordFormValues['spots'][number], 'useDistances' | 'spotDistanceMm' | 'frontDistanceMm'>;
 
 /** What the page's plate reader gets from the form: the chosen photos, and where to put spots and a fraction pool. */
-export interface PlateReaderSlot {
+interface PlateReaderSlot {
   files: File[];
   onUseSpots: (spots: ReadSpot[]) => void;
   onUsePool: (summary: string) => void;

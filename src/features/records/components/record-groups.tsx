@@ -5,7 +5,7 @@ import { RecordRows } from '../../../components/record-rows';
 import { StructureImage } from '../../../components/structure-image';
 
 /** Consecutive records of one compound, in the order the server sent them (sorted by compound when grouped). */
-export function groupByCompound(
+function groupByCompound(
   records: RecordListItem[],
 ): { compound: RecordListItem['compound']; records: RecordListItem[] }[] {
   const groups: { compound: RecordListItem['compound']; records: RecordListItem[] }[] = [];

@@ -2,7 +2,7 @@ import { ApiRequestError } from '../../../lib/api-client';
 import { serverErrorParts, type ServerErrorParts } from '../../../lib/form-errors';
 
 /** Where a server-side problem belongs in the record form: a field path, or null for the form as a whole. */
-export function formPathOf(apiPath: string): string | null {
+function formPathOf(apiPath: string): string | null {
   const path = apiPath.replace(/^body\.?/, '');
   if (path === '') return null;
   if (path === 'compoundId' || path.startsWith('structure')) return 'structure';

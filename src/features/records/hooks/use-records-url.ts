@@ -4,7 +4,7 @@ import { useUrlUpdater } from '../../../lib/url-params';
 import type { RecordListQuery } from '../../../../shared/schemas/record';
 
 /** Filters a user can set on the records table; each is one URL parameter. */
-export const filterKeys = [
+const filterKeys = [
   'q',
   'phase',
   'solvent',
@@ -19,9 +19,8 @@ export const filterKeys = [
   'to',
   'demo',
 ] as const;
-export type FilterKey = (typeof filterKeys)[number];
 
-export const defaultColumns = [
+const defaultColumns = [
   'structure',
   'compound',
   'plate',

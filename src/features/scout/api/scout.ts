@@ -3,7 +3,7 @@ import { api } from '../../../lib/api-client';
 import { scoutResultSchema, type ScoutInput } from '../../../../shared/schemas/scout';
 
 /** `POST /api/scout`: starting conditions for a structure, checked against the shared schema. */
-export const postScout = (input: ScoutInput) => api('/api/scout', { method: 'POST', body: input }, scoutResultSchema);
+const postScout = (input: ScoutInput) => api('/api/scout', { method: 'POST', body: input }, scoutResultSchema);
 
 /** Runs Scout on demand (each run is a question, not a cached list). */
 export function useScout() {

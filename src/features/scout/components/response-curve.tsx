@@ -10,7 +10,7 @@ const fmt = (v: number) => (Number.isInteger(v) ? String(v) : v.toFixed(2));
  * The useful span of the x axis: the compositions where the predicted Rf lies between 0.05 and 0.9, widened to
  * hold the suggestion and the neighbours' plates, on a 5 % grid — not 0–100 % when all the action is below 20 %.
  */
-export function usefulDomain(curve: { strongPercent: number; rf: number }[], extra: number[]): [number, number] {
+function usefulDomain(curve: { strongPercent: number; rf: number }[], extra: number[]): [number, number] {
   const useful = curve.filter((point) => point.rf >= 0.05 && point.rf <= 0.9).map((point) => point.strongPercent);
   const values = [...useful, ...extra];
   if (values.length === 0) return [0, 100];

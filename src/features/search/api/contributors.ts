@@ -3,9 +3,9 @@ import { api } from '../../../lib/api-client';
 import { searchContributorsSchema } from '../../../../shared/schemas/search';
 import { searchKeys } from './keys';
 
-export const getContributors = () => api('/api/search/contributors', {}, searchContributorsSchema);
+const getContributors = () => api('/api/search/contributors', {}, searchContributorsSchema);
 
-export const contributorsQueryOptions = queryOptions({
+const contributorsQueryOptions = queryOptions({
   queryKey: searchKeys.contributors(),
   queryFn: getContributors,
   staleTime: 5 * 60_000,

@@ -4,10 +4,10 @@ import { searchResponseSchema } from '../../../../shared/schemas/search';
 import { searchKeys } from './keys';
 
 /** `GET /api/search` with a prepared query string, the answer checked against the shared schema. */
-export const getSearch = (query: string, signal?: AbortSignal) =>
+const getSearch = (query: string, signal?: AbortSignal) =>
   api(`/api/search?${query}`, { signal }, searchResponseSchema);
 
-export const searchQueryOptions = (query: string) =>
+const searchQueryOptions = (query: string) =>
   queryOptions({
     queryKey: searchKeys.results(query),
     queryFn: ({ signal }) => getSearch(query, signal),

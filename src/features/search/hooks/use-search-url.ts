@@ -17,19 +17,6 @@ export const searchFilterKeys = [
 ] as const;
 export type SearchFilterKey = (typeof searchFilterKeys)[number];
 
-/** Every URL parameter the search page reads: the whole search state, so a copied link reproduces it. */
-export const searchParamKeys = [
-  'mode',
-  'q',
-  'structure',
-  'threshold',
-  'view',
-  'sort',
-  'page',
-  'pageSize',
-  ...searchFilterKeys,
-] as const;
-
 export interface SearchState {
   mode: SearchMode;
   q: string;

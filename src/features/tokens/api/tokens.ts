@@ -8,18 +8,18 @@ import {
 } from '../../../../shared/schemas/tokens';
 
 /** Query keys of the API tokens, general to specific. */
-export const tokenKeys = {
+const tokenKeys = {
   all: ['tokens'] as const,
   mine: () => [...tokenKeys.all, 'mine'] as const,
   everyone: () => [...tokenKeys.all, 'everyone'] as const,
 };
 
-export const myTokensQueryOptions = queryOptions({
+const myTokensQueryOptions = queryOptions({
   queryKey: tokenKeys.mine(),
   queryFn: () => api('/api/tokens', {}, apiTokenListSchema),
 });
 
-export const allTokensQueryOptions = queryOptions({
+const allTokensQueryOptions = queryOptions({
   queryKey: tokenKeys.everyone(),
   queryFn: () => api('/api/admin/tokens', {}, apiTokenListSchema),
 });
@@ -27,9 +27,8 @@ export const allTokensQueryOptions = queryOptions({
 export const useMyTokens = () => useQuery(myTokensQueryOptions);
 export const useAllTokens = (enabled: boolean) => useQuery({ ...allTokensQueryOptions, enabled });
 
-export const createToken = (input: TokenCreate) =>
-  api('/api/tokens', { method: 'POST', body: input }, createdTokenSchema);
-export const revokeToken = (id: number) => api(`/api/tokens/${id}`, { method: 'DELETE' }, apiTokenSchema);
+const createToken = (input: TokenCreate) => api('/api/tokens', { method: 'POST', body: input }, createdTokenSchema);
+const revokeToken = (id: number) => api(`/api/tokens/${id}`, { method: 'DELETE' }, apiTokenSchema);
 
 function useTokenMutation<I, O>(fn: (input: I) => Promise<O>) {
   const qc = useQueryClient();

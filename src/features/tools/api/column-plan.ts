@@ -4,10 +4,10 @@ import { columnPlanResultSchema, type ColumnPlanInput } from '../../../../shared
 import { toolKeys } from './keys';
 
 /** `POST /api/tools/column-plan`: the flash-column plan of Still, Kahn & Mitra (1978) for a sample and its TLC. */
-export const getColumnPlan = (input: ColumnPlanInput, signal?: AbortSignal) =>
+const getColumnPlan = (input: ColumnPlanInput, signal?: AbortSignal) =>
   api('/api/tools/column-plan', { method: 'POST', body: input, signal }, columnPlanResultSchema);
 
-export const columnPlanQueryOptions = (input: ColumnPlanInput) =>
+const columnPlanQueryOptions = (input: ColumnPlanInput) =>
   queryOptions({
     queryKey: toolKeys.columnPlan(input),
     queryFn: ({ signal }) => getColumnPlan(input, signal),

@@ -4,10 +4,10 @@ import { translateEluentResultSchema, type TranslateEluentInput } from '../../..
 import { toolKeys } from './keys';
 
 /** `POST /api/tools/translate-eluent`: the equal-strength mixture in another pair, with hazards of both. */
-export const getTranslation = (input: TranslateEluentInput, signal?: AbortSignal) =>
+const getTranslation = (input: TranslateEluentInput, signal?: AbortSignal) =>
   api('/api/tools/translate-eluent', { method: 'POST', body: input, signal }, translateEluentResultSchema);
 
-export const translationQueryOptions = (input: TranslateEluentInput) =>
+const translationQueryOptions = (input: TranslateEluentInput) =>
   queryOptions({
     queryKey: toolKeys.translation(input),
     queryFn: ({ signal }) => getTranslation(input, signal),
