@@ -47,3 +47,20 @@ export function analyseStructure(text: string, options: { depict?: boolean } = {
     svg: analysis.svg,
   };
 }
+
+/** The stored descriptors of an analysis, as compounds keep them and the structure preview shows them. */
+export function descriptorsOf(analysis: CompoundDescriptors): CompoundDescriptors {
+  return {
+    formula: analysis.formula,
+    mw: analysis.mw,
+    exactMass: analysis.exactMass,
+    clogp: analysis.clogp,
+    tpsa: analysis.tpsa,
+    hbd: analysis.hbd,
+    hba: analysis.hba,
+    rotatableBonds: analysis.rotatableBonds,
+    aromaticRings: analysis.aromaticRings,
+    stereocentres: analysis.stereocentres,
+    charge: analysis.charge,
+  };
+}

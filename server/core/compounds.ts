@@ -2,7 +2,7 @@ import { EventEmitter } from 'node:events';
 import type { Transaction } from 'sequelize';
 import { Compound } from '../db/models';
 import { UnprocessableError } from '../http/errors';
-import { analyseStructure, type StructureAnalysis } from './compound-analysis';
+import { analyseStructure, descriptorsOf, type StructureAnalysis } from './compound-analysis';
 import { fingerprintBytes } from './compound-fingerprints';
 
 /**
@@ -45,17 +45,7 @@ function rowOf(
     inputStructure: text,
     canonicalSmiles: analysis.canonicalSmiles,
     molfile: analysis.molfile,
-    formula: analysis.formula,
-    mw: analysis.mw,
-    exactMass: analysis.exactMass,
-    clogp: analysis.clogp,
-    tpsa: analysis.tpsa,
-    hbd: analysis.hbd,
-    hba: analysis.hba,
-    rotatableBonds: analysis.rotatableBonds,
-    aromaticRings: analysis.aromaticRings,
-    stereocentres: analysis.stereocentres,
-    charge: analysis.charge,
+    ...descriptorsOf(analysis),
     classes: analysis.classes,
     fingerprint,
     createdBy: userId,

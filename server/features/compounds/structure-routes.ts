@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { allow } from '../../http/middleware/access';
 import { handle } from '../../http/middleware/validate';
 import { structureParseInputSchema, type StructureParseResult } from '../../../shared/schemas/compound';
-import { analyseStructure } from '../../core/compound-analysis';
+import { analyseStructure, descriptorsOf } from '../../core/compound-analysis';
 import { Compound } from '../../db/models';
 
 export const structuresRouter = Router();
@@ -20,17 +20,7 @@ structuresRouter.post(
     const result: StructureParseResult = {
       canonicalSmiles: analysis.canonicalSmiles,
       molfile: analysis.molfile,
-      formula: analysis.formula,
-      mw: analysis.mw,
-      exactMass: analysis.exactMass,
-      clogp: analysis.clogp,
-      tpsa: analysis.tpsa,
-      hbd: analysis.hbd,
-      hba: analysis.hba,
-      rotatableBonds: analysis.rotatableBonds,
-      aromaticRings: analysis.aromaticRings,
-      stereocentres: analysis.stereocentres,
-      charge: analysis.charge,
+      ...descriptorsOf(analysis),
       classes: analysis.classes,
       svg: analysis.svg,
       name: analysis.name,

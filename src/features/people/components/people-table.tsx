@@ -13,6 +13,7 @@ import { roles, type Role } from '../../../../shared/schemas/auth';
 import type { AdminUser } from '../../../../shared/schemas/accounts';
 import { useUpdateUser } from '../api/users';
 import { whenShort } from './format';
+import { TableBody } from '../../../components/ui/table-body';
 
 const column = createColumnHelper<AdminUser>();
 
@@ -204,17 +205,7 @@ export function PeopleTable({ people, meId }: { people: AdminUser[]; meId: numbe
             </tr>
           ))}
         </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="border-t border-line">
-              {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="py-2 pr-3">
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
+        <TableBody table={table} rowClassName="border-t border-line" cellClassName="py-2 pr-3" />
       </table>
     </div>
   );

@@ -9,6 +9,7 @@ import {
 import type { RecordListItem } from '../../../../shared/schemas/record';
 import { RecordRows } from '../../../components/record-rows';
 import { recordColumns } from './record-columns';
+import { TableBody } from '../../../components/ui/table-body';
 
 interface RecordsTableProps {
   records: RecordListItem[];
@@ -21,6 +22,8 @@ interface RecordsTableProps {
 }
 
 /** The records as a table; sorting is done by the server (manualSorting) and asked for through onSort. */
+const bodyRow = 'border-b border-line/70 align-middle last:border-0 hover:bg-plate/60';
+
 export function RecordsTable({ records, visible, sort, order, onSort, action }: RecordsTableProps) {
   const sortedColumn = recordColumns.find((column) => column.meta.sortKey === sort)?.id;
   const sorting: SortingState = sortedColumn ? [{ id: sortedColumn, desc: order === 'desc' }] : [];
@@ -110,18 +113,7 @@ export function RecordsTable({ records, visible, sort, order, onSort, action }: 
               </tr>
             ))}
           </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-b border-line/70 align-middle last:border-0 hover:bg-plate/60">
-                {action && <td className="px-2 py-2">{action(row.original)}</td>}
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
+          <TableBody table={table} rowClassName={bodyRow} cellClassName="px-3 py-2" lead={action} />
         </table>
       </div>
     </>

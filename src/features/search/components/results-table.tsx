@@ -10,6 +10,7 @@ import { OutcomeBadge } from '../../../components/ui/outcome-badge';
 import { Score } from './score';
 import { formatDate } from '../../../lib/dates';
 import { strongShareLabel } from '../../../lib/strong-share';
+import { TableBody } from '../../../components/ui/table-body';
 
 const column = createColumnHelper<SearchRecordHit>();
 const nameOf = (hit: SearchRecordHit) => hit.record.compound.name ?? hit.record.compound.canonicalSmiles;
@@ -150,17 +151,11 @@ export function ResultsTable({
             </tr>
           ))}
         </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="border-b border-line/70 align-middle last:border-0 hover:bg-plate/60">
-              {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-2">
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
+        <TableBody
+          table={table}
+          rowClassName="border-b border-line/70 align-middle last:border-0 hover:bg-plate/60"
+          cellClassName="px-3 py-2"
+        />
       </table>
     </div>
   );
