@@ -1,3 +1,4 @@
+import { afterAll, beforeAll, inject } from 'vitest';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -119,4 +120,19 @@ export async function measureLayout(
     }
     return { scrollWidth: document.documentElement.scrollWidth, viewportWidth: window.innerWidth, smallTargets: small, targets };
   })()`);
+}
+
+/**
+ * Opens the browser before a file's journeys, signed in as `email` with the demo password, and closes it after.
+ * The returned object holds the browser and its page once the hook has run.
+ */
+export function useSignedInBrowser(email: string): { browser: OpenBrowser; page: Page } {
+  const session = {} as { browser: OpenBrowser; page: Page };
+  beforeAll(async () => {
+    session.browser = await openBrowser();
+    session.page = session.browser.page;
+    await signIn(session.page, inject('baseUrl'), email);
+  });
+  afterAll(() => session.browser?.close());
+  return session;
 }

@@ -1,17 +1,12 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openBrowser, shot, signIn } from './browser';
+import { shot, useSignedInBrowser } from './browser';
 
 const baseUrl = inject('baseUrl');
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 
-beforeAll(async () => {
-  browser = await openBrowser();
-  page = browser.page;
-  await signIn(page, baseUrl, 'curator@example.org');
-});
-afterAll(() => browser?.close());
+const session = useSignedInBrowser('curator@example.org');
+beforeAll(() => ({ page } = session));
 
 /** A record as the API answers it, read with the page's own session. */
 const apiRecord = (id: number) =>

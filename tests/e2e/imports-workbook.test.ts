@@ -1,13 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import type { Page } from 'playwright-core';
-import { openBrowser, shot, signIn } from './browser';
+import { shot, useSignedInBrowser } from './browser';
 import { buildWorkbook } from '../helpers/workbook';
 
 const baseUrl = inject('baseUrl');
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 const tag = randomUUID().slice(0, 8);
 
@@ -63,12 +62,8 @@ async function workbook(): Promise<Buffer> {
   ]);
 }
 
-beforeAll(async () => {
-  browser = await openBrowser();
-  page = browser.page;
-  await signIn(page, baseUrl, 'curator@example.org');
-});
-afterAll(() => browser?.close());
+const session = useSignedInBrowser('curator@example.org');
+beforeAll(() => ({ page } = session));
 
 describe('importing an Excel workbook in the browser (issue 24)', () => {
   it('the curator uploads the workbook and sees the sheet and header row found, warnings and the count that will come in', async () => {

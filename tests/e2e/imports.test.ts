@@ -1,12 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { randomUUID } from 'node:crypto';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import type { Page } from 'playwright-core';
-import { openBrowser, shot, signIn } from './browser';
+import { shot, useSignedInBrowser } from './browser';
 
 const baseUrl = inject('baseUrl');
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 const tag = randomUUID().slice(0, 8);
 
@@ -29,12 +28,8 @@ const corrections: Record<string, [string, string]> = {
   benzophenone: ['Solvent system', 'EtOAc/hexanes 1:9'],
 };
 
-beforeAll(async () => {
-  browser = await openBrowser();
-  page = browser.page;
-  await signIn(page, baseUrl, 'curator@example.org');
-});
-afterAll(() => browser?.close());
+const session = useSignedInBrowser('curator@example.org');
+beforeAll(() => ({ page } = session));
 
 async function chooseFile(name: string, content: string) {
   await page

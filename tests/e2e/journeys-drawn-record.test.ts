@@ -1,23 +1,18 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { randomUUID } from 'node:crypto';
-import { openBrowser, shot, signIn } from './browser';
+import { shot, useSignedInBrowser } from './browser';
 import { carbonPositions, chooseTool, clickDrawingArea, openDrawTab } from './drawing';
 
 const baseUrl = inject('baseUrl');
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 let recordId = 0;
 
 /** A word only this run's record carries, in its notebook reference. */
 const tag = `jrn${randomUUID().slice(0, 6)}`;
 
-beforeAll(async () => {
-  browser = await openBrowser();
-  page = browser.page;
-  await signIn(page, baseUrl, 'member@example.org');
-});
-afterAll(() => browser?.close());
+const session = useSignedInBrowser('member@example.org');
+beforeAll(() => ({ page } = session));
 
 /** Waits for the results of the search now in the address bar and says whether this journey's record is among them. */
 async function resultsHoldRecord(): Promise<boolean> {

@@ -1,22 +1,17 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openBrowser, shot, signIn } from './browser';
+import { shot, useSignedInBrowser } from './browser';
 import { generatePhoto } from '../bench/plates-photo';
 
 const baseUrl = inject('baseUrl');
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 
 /** Phenyl acetate: a small real compound; the plate photo is drawn by the bench generator (invented, KMnO4 look, SM / co-spot / RM). */
 const smiles = 'CC(=O)Oc1ccccc1';
 const compoundName = 'phenyl acetate plate e2e';
 
-beforeAll(async () => {
-  browser = await openBrowser();
-  page = browser.page;
-  await signIn(page, baseUrl, 'member@example.org');
-});
-afterAll(() => browser?.close());
+const session = useSignedInBrowser('member@example.org');
+beforeAll(() => ({ page } = session));
 
 describe('a member reads a plate photo while contributing', () => {
   it('uploads a generated photo, has the plate read, drags a spot on the overlay, saves, and finds that Rf on the record', async () => {

@@ -1,10 +1,9 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import sharp from 'sharp';
-import { openBrowser, shot, signIn } from './browser';
+import { openBrowser, shot, signIn, useSignedInBrowser } from './browser';
 
 const baseUrl = inject('baseUrl');
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 let recordPath = '';
 
@@ -12,12 +11,8 @@ let recordPath = '';
 const smiles = 'COc1ccc(-c2ccc(F)cc2)cc1';
 const compoundName = 'fluoro-methoxy-biphenyl e2e';
 
-beforeAll(async () => {
-  browser = await openBrowser();
-  page = browser.page;
-  await signIn(page, baseUrl, 'member@example.org');
-});
-afterAll(() => browser?.close());
+const session = useSignedInBrowser('member@example.org');
+beforeAll(() => ({ page } = session));
 
 describe('a member records a purification in the browser', () => {
   it('contributes a record with a pasted structure and a plate photo, then lands on the record page showing both', async () => {

@@ -1,18 +1,13 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openBrowser, shot, signIn } from './browser';
+import { shot, useSignedInBrowser } from './browser';
 import { drawPyridine } from './drawing';
 
 const baseUrl = inject('baseUrl');
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 let page: Page;
 
-beforeAll(async () => {
-  browser = await openBrowser();
-  page = browser.page;
-  await signIn(page, baseUrl, 'member@example.org');
-});
-afterAll(() => browser?.close());
+const session = useSignedInBrowser('member@example.org');
+beforeAll(() => ({ page } = session));
 
 describe('Scout in the browser', () => {
   it(

@@ -1,18 +1,14 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { drawPyridine as drawPyridineIn } from './drawing';
-import { openBrowser, shot, signIn } from './browser';
+import { shot, signIn, useSignedInBrowser, type OpenBrowser } from './browser';
 
 const baseUrl = inject('baseUrl');
-let browser: Awaited<ReturnType<typeof openBrowser>>;
+let browser: OpenBrowser;
 let page: Page;
 
-beforeAll(async () => {
-  browser = await openBrowser();
-  page = browser.page;
-  await signIn(page, baseUrl, 'member@example.org');
-});
-afterAll(() => browser?.close());
+const session = useSignedInBrowser('member@example.org');
+beforeAll(() => ({ browser, page } = session));
 
 /** Names of the compounds in the results table, in order, once the answer to the address now in the URL bar is on screen. */
 async function resultNames(target: Page = page): Promise<string[]> {

@@ -114,12 +114,7 @@ export function TokensPanel({ isAdmin }: { isAdmin: boolean }) {
           error={errors.expiresAt}
         />
         <label className="flex min-h-10 items-center gap-2 text-sm text-ink sm:col-span-2">
-          <input
-            type="checkbox"
-            className="h-5 w-5"
-            checked={readOnly}
-            onChange={(e) => setReadOnly(e.target.checked)}
-          />
+          <input type="checkbox" checked={readOnly} onChange={(e) => setReadOnly(e.target.checked)} />
           Read-only: GET requests only (exports, searches, record pages; Scout and the tools need a full token)
         </label>
         <div className="sm:col-span-2">
