@@ -9,6 +9,7 @@ import { allow } from '../../server/http/middleware/access';
 import { handle } from '../../server/http/middleware/validate';
 import { apiRouter } from '../../server/http/routes';
 import { buildOpenApiDocument, openApiPath } from '../../server/features/api-docs/document';
+import { operations } from '../../server/features/api-docs/operations';
 import { agentFor, type Agent } from '../helpers/agent';
 import { createRecord } from '../helpers/search';
 import { routeTable } from '../helpers/route-table';
@@ -66,6 +67,13 @@ describe('the OpenAPI document', () => {
     expect(routes.filter((key) => !documented.includes(key))).toEqual([]);
     expect(documented.filter((key) => !routes.includes(key))).toEqual([]);
     console.log(`OpenAPI: ${documented.length} operations documented on ${Object.keys(doc.paths).length} paths`);
+  });
+
+  it('describes no operation that Express does not mount (no stale text for a removed route)', () => {
+    const routes = new Set(mounted().map((r) => `${r.method} ${openApiPath(r.path)}`));
+    const described = Object.keys(operations);
+    expect(described.length).toBeGreaterThan(60);
+    expect(described.filter((key) => !routes.has(key))).toEqual([]);
   });
 
   it('states for each operation the role its allow() declares, with the error shape on its failures', () => {

@@ -171,11 +171,6 @@ export const operations: Record<string, OperationText> = {
     summary: 'Edit a record (author, curators and admins)',
     answers: [ok(recordDtoSchema)],
   },
-  'DELETE /api/records/{id}': {
-    tag: 'Records',
-    summary: 'Retire a record (it stays whole and can be restored)',
-    answers: [ok(recordDtoSchema)],
-  },
   'GET /api/records/{id}/history': {
     tag: 'Records',
     summary: "A record's revisions",
